@@ -1,0 +1,64 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { EmptyState } from "../../_ui/empty-state";
+import { outboxEnabled, requirePage } from "../../_ui/guard";
+
+export const metadata: Metadata = { title: "Outbox" };
+export const dynamic = "force-dynamic";
+
+type SinkMessage = { id: string; to: string[]; subject: string; text: string; links: string[]; receivedAt: string };
+
+async function readSink(): Promise<SinkMessage[] | null> {
+  try {
+    const res = await fetch(`${process.env.MAIL_SINK_URL}/messages`, { cache: "no-store" });
+    if (!res.ok) return null;
+    return ((await res.json()) as { messages: SinkMessage[] }).messages;
+  } catch {
+    return null;
+  }
+}
+
+export default async function OutboxPage() {
+  await requirePage("/outbox", ["owner"]);
+  if (!outboxEnabled()) notFound();
+  const messages = await readSink();
+  return (
+    <div className="flex flex-col gap-6">
+      <div>
+        <h1 className="text-3xl font-semibold">Outbox</h1>
+        <p className="mt-1 max-w-prose text-ink-2">
+          Mail caught by the local mail sink, newest first. This page exists only where the product runs with the local sink; a real deployment
+          sends through its mail service.
+        </p>
+      </div>
+      {messages === null ? (
+        <p className="caution">The mail sink does not answer at {process.env.MAIL_SINK_URL}. Start the product with its demo or dev script.</p>
+      ) : messages.length === 0 ? (
+        <EmptyState title="No mail yet">Invitations, password resets and confirmations appear here as soon as they are sent.</EmptyState>
+      ) : (
+        <ul className="flex flex-col gap-3">
+          {messages.map((m) => (
+            <li key={m.id} className="card p-4" data-testid="outbox-message">
+              <div className="flex flex-wrap justify-between gap-2 text-sm">
+                <span className="font-semibold">{m.subject}</span>
+                <span className="text-ink-2">
+                  to {m.to.join(", ")} · <span className="num">{m.receivedAt.replace("T", " ").slice(0, 19)}</span>
+                </span>
+              </div>
+              <pre className="mt-2 whitespace-pre-wrap font-sans text-sm text-ink-2">{m.text}</pre>
+              {m.links.length ? (
+                <div className="mt-2 flex flex-wrap gap-2">
+                  {m.links.map((l) => (
+                    <a key={l} href={l} className="btn-quiet no-underline">
+                      Open link
+                    </a>
+                  ))}
+                </div>
+              ) : null}
+            </li>
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}

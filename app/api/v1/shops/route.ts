@@ -1,0 +1,24 @@
+import { NextResponse } from "next/server";
+import { z } from "zod";
+import { getSessionUser, listMyShops } from "@/db/access";
+import { getDb } from "@/db/client";
+import { createShopFor } from "@/db/shops";
+import { ApiError, handle, parseWith, readJson } from "../../_lib/respond";
+
+const NewShop = z.object({ name: z.string().trim().min(1).max(80).optional() }).strict();
+
+/** The shops the caller belongs to. */
+export const GET = handle(async () => {
+  const session = await getSessionUser();
+  if (!session) throw new ApiError(401, "unauthenticated", "Sign in to continue.");
+  return NextResponse.json({ shops: await listMyShops(session.user.id) });
+});
+
+/** Starts a new shop with the caller as its owner. */
+export const POST = handle(async (req: Request) => {
+  const session = await getSessionUser();
+  if (!session) throw new ApiError(401, "unauthenticated", "Sign in to continue.");
+  const body = parseWith(NewShop, await readJson(req));
+  const shopId = await createShopFor(await getDb(), { id: session.user.id, name: session.user.name }, body.name);
+  return NextResponse.json({ shop: { id: shopId } }, { status: 201 });
+});

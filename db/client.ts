@@ -1,0 +1,46 @@
+import "server-only";
+import { createClient, type Client } from "@libsql/client";
+import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
+import * as schema from "./schema";
+import { databaseConfig } from "./config";
+
+export type Db = LibSQLDatabase<typeof schema>;
+
+type Handle = { client: Client; db: Db; ready: Promise<void> };
+
+// One client per process, kept across hot reloads in development.
+const globalForDb = globalThis as unknown as { borewrightDb?: Handle };
+
+function open(): Handle {
+  const { url, authToken, isFile } = databaseConfig();
+  // A file database gets a single connection, so the pragmas below hold for every statement.
+  const client = createClient({ url, authToken, concurrency: isFile ? 1 : undefined });
+  const ready = isFile
+    ? client.executeMultiple("PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA busy_timeout = 5000;")
+    : Promise.resolve();
+  return { client, db: drizzle(client, { schema }), ready: ready.then(() => undefined) };
+}
+
+function handle(): Handle {
+  globalForDb.borewrightDb ??= open();
+  return globalForDb.borewrightDb;
+}
+
+/** The database, once its connection pragmas have been applied. */
+export async function getDb(): Promise<Db> {
+  const h = handle();
+  await h.ready;
+  return h.db;
+}
+
+/** The same database synchronously, for the auth adapter, which takes it at start-up. */
+export function dbSync(): Db {
+  return handle().db;
+}
+
+/** The raw libSQL client, for pragmas and health checks. */
+export async function getClient(): Promise<Client> {
+  const h = handle();
+  await h.ready;
+  return h.client;
+}

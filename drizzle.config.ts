@@ -1,0 +1,11 @@
+import { defineConfig } from "drizzle-kit";
+
+export default defineConfig({
+  schema: "./db/schema.ts",
+  out: "./drizzle",
+  dialect: "turso",
+  dbCredentials: {
+    url: process.env.DATABASE_URL ?? "file:./data/borewright.db",
+    authToken: process.env.DATABASE_AUTH_TOKEN,
+  },
+});

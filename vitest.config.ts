@@ -1,0 +1,33 @@
+import { defineConfig } from "vitest/config";
+
+// Two projects: "unit" runs the pure code in-process; "app" runs integration and browser tests
+// against a production server that tests/setup/global-server.ts builds a fresh database for and starts.
+export default defineConfig({
+  // "server-only" guards the bundle; in tests the server modules are imported directly.
+  resolve: { tsconfigPaths: true, alias: { "server-only": new URL("./tests/support/empty.ts", import.meta.url).pathname } },
+  test: {
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: "unit",
+          include: ["tests/geometry/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/unit/**/*.test.ts"],
+          environment: "node",
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "app",
+          include: ["tests/integration/**/*.test.ts", "tests/browser/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/setup/global-server.ts"],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+          fileParallelism: true,
+          maxWorkers: 2,
+        },
+      },
+    ],
+  },
+});
