@@ -2,6 +2,8 @@ import type { NextConfig } from "next";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
+  // Parallel builds (a test run beside a demo) can each use their own folder.
+  distDir: process.env.NEXT_DIST_DIR || ".next",
   // forbidden() and unauthorized() for pages a role may not open.
   experimental: { authInterrupts: true },
   // Node-only server packages stay out of the bundle.

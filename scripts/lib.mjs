@@ -78,7 +78,7 @@ export function startNext({ port, host = "127.0.0.1", env = {}, quiet = false })
 
 /** Whether the production build is missing or older than the sources it was made from. */
 export function buildIsStale() {
-  const id = `${root}.next/BUILD_ID`;
+  const id = `${root}${process.env.NEXT_DIST_DIR || ".next"}/BUILD_ID`;
   if (!existsSync(id)) return true;
   const result = spawnSync("find", ["app", "db", "geometry", "scene", "public", "next.config.ts", "package.json", "-newer", id, "-type", "f", "-print", "-quit"], {
     cwd: root,
