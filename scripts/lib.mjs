@@ -44,9 +44,10 @@ export function freePort() {
 }
 
 /** Waits until a URL answers (any status), or fails after the timeout. */
-export async function waitFor(url, timeoutMs = 60_000) {
+export async function waitFor(url, timeoutMs = 60_000, child) {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
+    if (child && child.exitCode !== null) throw new Error(`the server exited (code ${child.exitCode}) before ${url} answered`);
     try {
       await fetch(url, { redirect: "manual" });
       return;

@@ -45,8 +45,10 @@ export default async function setup(project: TestProject) {
     },
   }) as ReturnType<typeof startNext> & { log: () => string };
   try {
-    await waitFor(`${baseURL}/sign-in`, 60_000);
+    await waitFor(`${baseURL}/sign-in`, 60_000, server);
   } catch (error) {
+    server.kill("SIGTERM");
+    await sink.stop();
     console.error(server.log());
     throw error;
   }

@@ -1,0 +1,13 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { getJson } from "../fetch";
+import type { ShopSettings } from "../types";
+import { settingsKeys } from "./keys";
+
+export const fetchShopSettings = () => getJson<ShopSettings>("/api/v1/settings");
+
+/** The shop's units and default limits. */
+export function useShopSettings() {
+  return useQuery({ queryKey: settingsKeys.shop(), queryFn: fetchShopSettings, staleTime: 5 * 60_000 });
+}
