@@ -165,3 +165,31 @@ describe("pages by role", () => {
     if (status === 307) expect(res.headers.get("location")).toContain("/sign-in");
   });
 });
+
+describe("one shop cannot reach another", () => {
+  it("an owner of shop B can neither enter shop A, invite into it, nor remove its members", async () => {
+    const other = await signUp("Other Owner", uniqueEmail("other-shop"));
+    const demoShopId = "demo-shop";
+    const enter = await other.post("/api/auth/organization/set-active", { organizationId: demoShopId });
+    expect(enter.status).toBeGreaterThanOrEqual(400);
+    expect(enter.status).toBeLessThan(500);
+    expect((await other.get("/api/v1/me")).json).toMatchObject({ me: { shopName: "Other Owner's shop" } });
+
+    const invite = await other.post("/api/auth/organization/invite-member", { email: uniqueEmail("sneak"), role: "owner", organizationId: demoShopId });
+    expect([400, 403, 404]).toContain(invite.status);
+
+    const members = await countRows("member");
+    const remove = await other.post("/api/auth/organization/remove-member", { memberIdOrEmail: "demo-builder-member", organizationId: demoShopId });
+    expect([400, 403, 404]).toContain(remove.status);
+    expect(await countRows("member")).toBe(members);
+  });
+
+  it("the settings page shows only the caller's own shop's members", async () => {
+    const other = await signUp("Lone Owner", uniqueEmail("lone"));
+    const page = await other.get("/settings");
+    expect(page.status).toBe(200);
+    expect(page.text).toContain("Lone Owner");
+    expect(page.text).not.toContain("owner@quillfern.test");
+    expect(page.text).not.toContain("Tomas Brisk");
+  });
+});
