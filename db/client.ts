@@ -1,8 +1,11 @@
 import "server-only";
 import { createClient, type Client } from "@libsql/client";
 import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
-import * as schema from "./schema";
+import * as mainSchema from "./schema";
+import * as jobSchema from "./schema-jobs";
 import { databaseConfig } from "./config";
+
+const schema = { ...mainSchema, ...jobSchema };
 
 export type Db = LibSQLDatabase<typeof schema>;
 

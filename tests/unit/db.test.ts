@@ -50,7 +50,7 @@ describe("migrations", () => {
   it("are up to date with db/schema.ts: generating again from the committed ones finds no change", () => {
     const out = mkdtempSync(join(tmpdir(), "borewright-mig-"));
     cpSync(join(process.cwd(), "drizzle"), out, { recursive: true });
-    const result = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "turso", "--schema", "./db/schema.ts", "--out", out], {
+    const result = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "turso", "--schema", "./db/schema.ts", "--schema", "./db/schema-jobs.ts", "--out", out], {
       cwd: process.cwd(),
       encoding: "utf8",
     });
