@@ -48,9 +48,11 @@ describe("the demo seed", () => {
 
 describe("migrations", () => {
   it("are up to date with db/schema.ts: generating again from the committed ones finds no change", () => {
-    const out = mkdtempSync(join(tmpdir(), "borewright-mig-"));
+    // drizzle-kit wants a path relative to the project for its output folder.
+    const out = join("test-results", `migration-check-${process.pid}`);
+    rmSync(out, { recursive: true, force: true });
     cpSync(join(process.cwd(), "drizzle"), out, { recursive: true });
-    const result = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "turso", "--schema", "./db/schema.ts", "--schema", "./db/schema-jobs.ts", "--out", out], {
+    const result = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "turso", "--schema", "./db/schema.ts", "--schema", "./db/schema-jobs.ts", "--out", `./${out}`], {
       cwd: process.cwd(),
       encoding: "utf8",
     });
