@@ -11,6 +11,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: "unit",
+          sequence: { groupOrder: 0 },
           include: ["tests/geometry/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/unit/**/*.test.ts"],
           environment: "node",
         },
@@ -19,6 +20,8 @@ export default defineConfig({
         extends: true,
         test: {
           name: "app",
+          // After the unit project, with its own worker count.
+          sequence: { groupOrder: 1 },
           include: ["tests/integration/**/*.test.ts", "tests/browser/**/*.test.ts"],
           environment: "node",
           globalSetup: ["tests/setup/global-server.ts"],

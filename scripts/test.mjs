@@ -4,7 +4,8 @@ import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import { root } from "./lib.mjs";
 
-const env = { ...process.env, NEXT_TELEMETRY_DISABLED: "1" };
+// The build evaluates the auth module; a throwaway secret keeps it quiet (the test server gets its own).
+const env = { BETTER_AUTH_SECRET: "build-time-placeholder-secret-0123456789", ...process.env, NEXT_TELEMETRY_DISABLED: "1" };
 const sh = (cmd, args, opts = {}) => spawnSync(cmd, args, { cwd: root, stdio: "inherit", env, ...opts });
 
 // 1. Dependencies and the browser.
