@@ -1,0 +1,75 @@
+// Invented studies for the tests (no real case, kit or rig).
+import { type Study, type StudyInput, StudySchema } from "../../geometry/index";
+
+const squareStuds = (half: number) => [
+  { label: "a", positionMm: [-half, half] as [number, number] },
+  { label: "b", positionMm: [half, half] as [number, number] },
+  { label: "c", positionMm: [half, -half] as [number, number] },
+  { label: "d", positionMm: [-half, -half] as [number, number] },
+];
+
+/** A round-mouth case with four studs on a 56 mm square and a kit whose skirt is wider than the mouth. */
+export function roundStudyInput(): StudyInput {
+  return {
+    case: {
+      name: "test case",
+      deck: { kind: "circle", diameterMm: 110 },
+      mouth: { outline: { kind: "circle", diameterMm: 46 }, depthMm: 26 },
+      studs: squareStuds(28),
+      studHoleDiameterMm: 7.5,
+      stockBoreMm: 40,
+      strokeMm: 39.2,
+    },
+    kits: [
+      {
+        id: "k1",
+        name: "test kit",
+        boreMm: 47,
+        skirtDiameterReadingsMm: [53.9, 54],
+        skirtLengthReadingsMm: [24.7],
+        studs: squareStuds(28),
+      },
+    ],
+  };
+}
+
+/** A polygon case (octagonal deck, non-round mouth) with four pockets. */
+export function polygonStudyInput(): StudyInput {
+  const s = roundStudyInput();
+  return {
+    ...s,
+    case: {
+      ...s.case,
+      deck: { kind: "polygon", pointsMm: [[-40, -48], [40, -48], [48, -40], [48, 40], [40, 48], [-40, 48], [-48, 40], [-48, -40]] },
+      mouth: { outline: { kind: "polygon", pointsMm: [[-23, -20], [23, -20], [25, 0], [23, 20], [-23, 20], [-25, 0]] }, depthMm: 26 },
+      pockets: [
+        { label: "left", outline: { kind: "polygon", pointsMm: [[-36, -8], [-31, -8], [-31, 8], [-36, 8]] } },
+        { label: "right", outline: { kind: "polygon", pointsMm: [[31, -8], [36, -8], [36, 8], [31, 8]] } },
+        { label: "front", outline: { kind: "polygon", pointsMm: [[-8, 31], [8, 31], [8, 36], [-8, 36]] } },
+        { label: "rear", outline: { kind: "polygon", pointsMm: [[-8, -36], [8, -36], [8, -31], [-8, -31]] } },
+      ],
+    },
+  };
+}
+
+/** A rig whose calibrated bit reaches 52.5–62 mm. */
+export const testRig = {
+  name: "test rig",
+  headDiameterMm: 34.5,
+  bitLengthMm: 35,
+  calibration: { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 },
+  hardwareRadiusMm: 21,
+  grooves: [
+    { label: "g1", travelMm: 22 },
+    { label: "g2", travelMm: 26 },
+  ],
+  shims: [
+    { thicknessMm: 0.1, count: 5 },
+    { thicknessMm: 0.5, count: 4 },
+  ],
+  drillTopRpm: 2800,
+};
+
+export function parse(input: StudyInput): Study {
+  return StudySchema.parse(input);
+}

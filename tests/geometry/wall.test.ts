@@ -1,0 +1,51 @@
+import { describe, expect, it } from "vitest";
+import { featureReaches, maxCutDiameterMm, thinnestWall, wallsForCut } from "../../geometry/wall";
+import { parse, polygonStudyInput, roundStudyInput } from "./fixtures";
+
+const TOL = 1e-9;
+const req = { minSealingLandMm: 2, minWallMm: 2 };
+
+describe("remaining wall", () => {
+  it("the sealing land at a stud is its distance minus the hole radius minus the cut radius", () => {
+    const cs = parse(roundStudyInput()).case;
+    const walls = wallsForCut([0, 0], 27.5, featureReaches([0, 0], cs, 25, req, TOL), TOL);
+    const stud = walls.find((w) => w.kind === "stud" && w.label === "a");
+    expect(stud?.minWallMm).toBeCloseTo(Math.hypot(28, 28) - 3.75 - 27.5, 9);
+  });
+
+  it("the wall to the round deck outline is the deck radius minus the cut radius", () => {
+    const cs = parse(roundStudyInput()).case;
+    const walls = wallsForCut([0, 0], 27.5, featureReaches([0, 0], cs, 25, req, TOL), TOL);
+    expect(walls.find((w) => w.kind === "outline")?.minWallMm).toBeCloseTo(55 - 27.5, 9);
+  });
+
+  it("a cut past a pocket's inner face breaks into it by the overlap and is not ok", () => {
+    const cs = parse(polygonStudyInput()).case;
+    const walls = wallsForCut([0, 0], 32, featureReaches([0, 0], cs, 25, req, TOL), TOL);
+    const left = walls.find((w) => w.label === "left");
+    expect(left?.minWallMm).toBeCloseTo(-1, 9);
+    expect(left?.ok).toBe(false);
+    expect(thinnestWall(walls)?.minWallMm).toBeCloseTo(-1, 9);
+  });
+
+  it("a pocket that starts below the cut's depth cannot be broken into", () => {
+    const input = polygonStudyInput();
+    const cs = parse({ ...input, case: { ...input.case, pockets: [{ label: "deep", startDepthMm: 20, outline: { kind: "circle", diameterMm: 4, centerMm: [30, 0] } }] } }).case;
+    const shallow = wallsForCut([0, 0], 29.5, featureReaches([0, 0], cs, 10, req, TOL), TOL).find((w) => w.label === "deep");
+    const deep = wallsForCut([0, 0], 29.5, featureReaches([0, 0], cs, 25, req, TOL), TOL).find((w) => w.label === "deep");
+    expect(shallow?.reached).toBe(false);
+    expect(shallow?.ok).toBe(true);
+    expect(deep?.ok).toBe(false);
+  });
+
+  it("the largest cut leaves exactly the minimum wall at the limiting feature", () => {
+    const cs = parse(polygonStudyInput()).case;
+    const reaches = featureReaches([0, 0], cs, 25, req, TOL);
+    const dMax = maxCutDiameterMm(reaches);
+    // The pockets' inner faces are 31 mm from the centre: 2·(31 − 2).
+    expect(dMax).toBeCloseTo(58, 9);
+    const walls = wallsForCut([0, 0], dMax / 2, reaches, TOL);
+    expect(Math.min(...walls.map((w) => w.minWallMm - w.requiredMm))).toBeCloseTo(0, 9);
+    expect(walls.every((w) => w.ok)).toBe(true);
+  });
+});
