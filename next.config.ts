@@ -9,7 +9,7 @@ const nextConfig: NextConfig = {
   // forbidden() and unauthorized() for pages a role may not open.
   experimental: { authInterrupts: true },
   // Node-only server packages stay out of the bundle.
-  serverExternalPackages: ["smtp-server", "nodemailer", "mailparser", "@libsql/client", "libsql"],
+  serverExternalPackages: ["smtp-server", "nodemailer", "mailparser", "@libsql/client", "libsql", "pdfkit", "fontkit"],
 };
 
 export default nextConfig;

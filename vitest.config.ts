@@ -24,7 +24,8 @@ export default defineConfig({
           sequence: { groupOrder: 1 },
           include: ["tests/integration/**/*.test.ts", "tests/browser/**/*.test.ts"],
           environment: "node",
-          globalSetup: ["tests/setup/global-server.ts"],
+          // The payment fake and object store first: the app server reads their settings from the environment.
+          globalSetup: ["tests/setup/global-jobs.ts", "tests/setup/global-server.ts"],
           testTimeout: 60_000,
           hookTimeout: 120_000,
           fileParallelism: true,

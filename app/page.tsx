@@ -42,6 +42,11 @@ export default async function LandingPage() {
             </div>
           ))}
         </dl>
+        <p>
+          <Link href="/try" className="btn-quiet no-underline">
+            Try it on an example case — no account needed
+          </Link>
+        </p>
       </main>
       <footer className="text-xs text-ink-3">
         Borewright plans; it does not replace the kit maker&apos;s instructions, local regulations or a qualified machinist.

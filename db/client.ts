@@ -16,11 +16,10 @@ const globalForDb = globalThis as unknown as { borewrightDb?: Handle };
 
 function open(): Handle {
   const { url, authToken, isFile } = databaseConfig();
-  // A file database gets a single connection, so the pragmas below hold for every statement.
-  const client = createClient({ url, authToken, concurrency: isFile ? 1 : undefined });
-  const ready = isFile
-    ? client.executeMultiple("PRAGMA journal_mode = WAL; PRAGMA foreign_keys = ON; PRAGMA busy_timeout = 5000;")
-    : Promise.resolve();
+  // libSQL opens every pooled connection with foreign keys on; WAL is a property of the file, set once here.
+  // `timeout` is each connection's busy timeout, so concurrent writers wait rather than fail.
+  const client = createClient({ url, authToken, timeout: isFile ? 5000 : undefined });
+  const ready = isFile ? client.execute("PRAGMA journal_mode = WAL").then(() => undefined) : Promise.resolve();
   return { client, db: drizzle(client, { schema }), ready: ready.then(() => undefined) };
 }
 

@@ -1,2 +1,197 @@
 // Tables for jobs, their readings, photos and payments. Kept apart from schema.ts so the two can grow side by side.
-export {};
+import { relations, sql } from "drizzle-orm";
+import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { organization, user } from "./schema";
+
+const now = () => sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
+
+/**
+ * A job: a customer's engine as a work order. The plan (the study's assembled Study and the core's result
+ * for it, with the chosen kit) is kept as a snapshot taken when the job is planned, so what the customer
+ * approves and what the bench card shows do not move when the study is edited later.
+ */
+export const job = sqliteTable(
+  "job",
+  {
+    id: text("id").primaryKey(),
+    organizationId: text("organization_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    /** A short reference for the bench, e.g. "J-0007", unique in the shop. */
+    reference: text("reference").notNull(),
+    title: text("title").notNull(),
+    /** The customer as a member of the shop, once they have an account there. */
+    customerUserId: text("customer_user_id").references(() => user.id, { onDelete: "set null" }),
+    customerName: text("customer_name").notNull(),
+    customerEmail: text("customer_email").notNull(),
+    engineNumber: text("engine_number").notNull().default(""),
+    caseNumber: text("case_number").notNull().default(""),
+    caseVariant: text("case_variant").notNull().default(""),
+    /** The study the plan comes from; a plain id (the study may later be archived or removed). */
+    studyId: text("study_id"),
+    kitId: text("kit_id"),
+    /** { study, result, kitId, studyName, takenAt } — see db/jobs.ts PlanSnapshot. */
+    planJson: text("plan_json"),
+    status: text("status").notNull().default("intake"),
+    /** Machining deposit in the smallest currency unit (cents), and its ISO currency code in lower case. */
+    depositAmount: integer("deposit_amount").notNull().default(0),
+    currency: text("currency").notNull().default("eur"),
+    paidAt: integer("paid_at", { mode: "timestamp_ms" }),
+    sharedAt: integer("shared_at", { mode: "timestamp_ms" }),
+    approvedAt: integer("approved_at", { mode: "timestamp_ms" }),
+    approvedById: text("approved_by_id"),
+    approvedByName: text("approved_by_name"),
+    approvalReason: text("approval_reason"),
+    /** Tolerance for after-cut verification, mm. */
+    verifyToleranceMm: real("verify_tolerance_mm").notNull().default(0.05),
+    notes: text("notes").notNull().default(""),
+    version: integer("version").notNull().default(1),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    createdBy: text("created_by")
+      .notNull()
+      .references(() => user.id),
+  },
+  (t) => [
+    index("job_shop_idx").on(t.organizationId, t.status),
+    index("job_customer_idx").on(t.customerUserId),
+    uniqueIndex("job_shop_reference_unique").on(t.organizationId, t.reference),
+  ],
+);
+
+/** A job's history: status moves (with the reason when one is needed), shares, readings, payments. */
+export const jobEvent = sqliteTable(
+  "job_event",
+  {
+    id: text("id").primaryKey(),
+    jobId: text("job_id")
+      .notNull()
+      .references(() => job.id, { onDelete: "cascade" }),
+    at: integer("at", { mode: "timestamp_ms" }).notNull(),
+    /** Null for events the payment service reported. */
+    byId: text("by_id"),
+    byName: text("by_name").notNull(),
+    kind: text("kind").notNull(),
+    fromStatus: text("from_status"),
+    toStatus: text("to_status"),
+    summary: text("summary").notNull(),
+  },
+  (t) => [index("job_event_job_idx").on(t.jobId, t.at)],
+);
+
+/** After-cut readings as recorded (each save is kept), with the verification verdict they gave. */
+export const jobReading = sqliteTable(
+  "job_reading",
+  {
+    id: text("id").primaryKey(),
+    jobId: text("job_id")
+      .notNull()
+      .references(() => job.id, { onDelete: "cascade" }),
+    readingsJson: text("readings_json").notNull(),
+    verificationJson: text("verification_json").notNull(),
+    verdict: text("verdict").notNull(),
+    takenAt: integer("taken_at", { mode: "timestamp_ms" }).notNull(),
+    takenById: text("taken_by_id")
+      .notNull()
+      .references(() => user.id),
+    takenByName: text("taken_by_name").notNull(),
+  },
+  (t) => [index("job_reading_job_idx").on(t.jobId, t.takenAt)],
+);
+
+/** A photo of a job in object storage. `state`: pending (upload URL issued), ready (checked), refused. */
+export const jobPhoto = sqliteTable(
+  "job_photo",
+  {
+    id: text("id").primaryKey(),
+    jobId: text("job_id")
+      .notNull()
+      .references(() => job.id, { onDelete: "cascade" }),
+    organizationId: text("organization_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    objectKey: text("object_key").notNull().unique(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    caption: text("caption").notNull().default(""),
+    /** readings | before | after | trial-fit | other */
+    kind: text("kind").notNull().default("other"),
+    shared: integer("shared", { mode: "boolean" }).notNull().default(false),
+    state: text("state").notNull().default("pending"),
+    refusedReason: text("refused_reason"),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    createdBy: text("created_by")
+      .notNull()
+      .references(() => user.id),
+  },
+  (t) => [index("job_photo_job_idx").on(t.jobId, t.state)],
+);
+
+/** A deposit asked of the customer through a hosted checkout; paid only when a signed event says so. */
+export const jobPayment = sqliteTable(
+  "job_payment",
+  {
+    id: text("id").primaryKey(),
+    jobId: text("job_id")
+      .notNull()
+      .references(() => job.id, { onDelete: "cascade" }),
+    checkoutSessionId: text("checkout_session_id").notNull().unique(),
+    /** Smallest currency unit. */
+    amount: integer("amount").notNull(),
+    currency: text("currency").notNull(),
+    /** open | paid */
+    status: text("status").notNull().default("open"),
+    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    createdById: text("created_by_id")
+      .notNull()
+      .references(() => user.id),
+    paidAt: integer("paid_at", { mode: "timestamp_ms" }),
+  },
+  (t) => [index("job_payment_job_idx").on(t.jobId)],
+);
+
+/** Payment-service events already handled, so a replayed event changes nothing. */
+export const paymentEvent = sqliteTable("payment_event", {
+  id: text("id").primaryKey(),
+  type: text("type").notNull(),
+  receivedAt: integer("received_at", { mode: "timestamp_ms" }).notNull(),
+});
+
+/** A question the customer asked about the plan, kept on the job (and mailed to the shop). */
+export const jobQuestion = sqliteTable(
+  "job_question",
+  {
+    id: text("id").primaryKey(),
+    jobId: text("job_id")
+      .notNull()
+      .references(() => job.id, { onDelete: "cascade" }),
+    at: integer("at", { mode: "timestamp_ms" }).notNull(),
+    byId: text("by_id")
+      .notNull()
+      .references(() => user.id),
+    byName: text("by_name").notNull(),
+    text: text("text").notNull(),
+  },
+  (t) => [index("job_question_job_idx").on(t.jobId, t.at)],
+);
+
+export const jobRelations = relations(job, ({ many, one }) => ({
+  shop: one(organization, { fields: [job.organizationId], references: [organization.id] }),
+  events: many(jobEvent),
+  readings: many(jobReading),
+  photos: many(jobPhoto),
+  payments: many(jobPayment),
+  questions: many(jobQuestion),
+}));
+export const jobEventRelations = relations(jobEvent, ({ one }) => ({ job: one(job, { fields: [jobEvent.jobId], references: [job.id] }) }));
+export const jobReadingRelations = relations(jobReading, ({ one }) => ({ job: one(job, { fields: [jobReading.jobId], references: [job.id] }) }));
+export const jobPhotoRelations = relations(jobPhoto, ({ one }) => ({ job: one(job, { fields: [jobPhoto.jobId], references: [job.id] }) }));
+export const jobPaymentRelations = relations(jobPayment, ({ one }) => ({ job: one(job, { fields: [jobPayment.jobId], references: [job.id] }) }));
+export const jobQuestionRelations = relations(jobQuestion, ({ one }) => ({ job: one(job, { fields: [jobQuestion.jobId], references: [job.id] }) }));
+
+export type JobRecord = typeof job.$inferSelect;
+export type JobEventRecord = typeof jobEvent.$inferSelect;
+export type JobReadingRecord = typeof jobReading.$inferSelect;
+export type JobPhotoRecord = typeof jobPhoto.$inferSelect;
+export type JobPaymentRecord = typeof jobPayment.$inferSelect;
+export type JobQuestionRecord = typeof jobQuestion.$inferSelect;

@@ -7,6 +7,8 @@ import { fileURLToPath } from "node:url";
 import { databaseConfig } from "./config";
 import { loadLocalEnv } from "./env";
 import * as schema from "./schema";
+import { seedJobs } from "./seed-jobs";
+import { seedLibrary } from "./seed-library";
 
 export const DEMO_SHOP = { id: "demo-shop", name: "Quillfern Engine Works", slug: "quillfern-engine-works" };
 
@@ -52,12 +54,21 @@ export async function seedDemo(db: SeedDb): Promise<number> {
   return written;
 }
 
+/** The whole demo: the shop and its people, its library and studies, and its jobs. */
+export async function seedEverything(db: SeedDb): Promise<number> {
+  const [owner, builder, customer] = DEMO_PEOPLE;
+  let written = await seedDemo(db);
+  written += await seedLibrary(db, DEMO_SHOP.id, owner, builder);
+  written += await seedJobs(db, DEMO_SHOP.id, { owner, builder, customer });
+  return written;
+}
+
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
   loadLocalEnv();
   const { url, authToken } = databaseConfig();
   const client = createClient({ url, authToken });
   const db = drizzle(client, { schema });
-  seedDemo(db)
+  seedEverything(db)
     .then((written) => {
       console.log(written ? `demo data seeded (${written} rows)` : "demo data already present; nothing changed");
       console.log(`\nDemo shop: ${DEMO_SHOP.name}`);

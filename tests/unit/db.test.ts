@@ -1,13 +1,13 @@
 import { createClient } from "@libsql/client";
 import { drizzle } from "drizzle-orm/libsql";
 import { spawnSync } from "node:child_process";
-import { cpSync, mkdtempSync, rmSync } from "node:fs";
+import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { applyMigrations } from "../../db/migrate";
 import * as schema from "../../db/schema";
-import { DEMO_PEOPLE, seedDemo } from "../../db/seed";
+import { DEMO_PEOPLE, seedEverything } from "../../db/seed";
 
 const dir = mkdtempSync(join(tmpdir(), "borewright-db-"));
 const url = `file:${join(dir, "unit.db")}`;
@@ -34,12 +34,14 @@ describe("the demo seed", () => {
   it("is idempotent: the second run writes nothing and the row counts stay the same", async () => {
     const client = createClient({ url });
     const db = drizzle(client, { schema });
-    const count = async () => Number((await client.execute("select (select count(*) from user) + (select count(*) from member) + (select count(*) from organization) as n")).rows[0]?.n);
-    const first = await seedDemo(db);
+    const tables = ["user", "member", "organization", "case_profile", "cylinder_kit", "boring_rig", "study", "job"];
+    const count = async () => Promise.all(tables.map(async (t) => Number((await client.execute(`select count(*) as n from "${t}"`)).rows[0]?.n)));
+    const first = await seedEverything(db);
     expect(first).toBeGreaterThan(0);
     const after = await count();
-    expect(await seedDemo(db)).toBe(0);
-    expect(await count()).toBe(after);
+    expect(after.every((n) => n > 0)).toBe(true);
+    expect(await seedEverything(db)).toBe(0);
+    expect(await count()).toEqual(after);
     const roles = (await client.execute("select role from member order by role")).rows.map((r) => r.role);
     expect(roles).toEqual(DEMO_PEOPLE.map((p) => p.role).sort());
     client.close();
@@ -52,10 +54,13 @@ describe("migrations", () => {
     const out = join("test-results", `migration-check-${process.pid}`);
     rmSync(out, { recursive: true, force: true });
     cpSync(join(process.cwd(), "drizzle"), out, { recursive: true });
-    const result = spawnSync("npx", ["drizzle-kit", "generate", "--dialect", "turso", "--schema", "./db/schema.ts", "--schema", "./db/schema-jobs.ts", "--out", `./${out}`], {
-      cwd: process.cwd(),
-      encoding: "utf8",
-    });
+    // The project's own config, pointed at the scratch copy.
+    const config = join(out, "drizzle.check.config.ts");
+    writeFileSync(
+      config,
+      readFileSync("drizzle.config.ts", "utf8").replace('out: "./drizzle"', `out: "./${out}"`),
+    );
+    const result = spawnSync("npx", ["drizzle-kit", "generate", `--config=${config}`], { cwd: process.cwd(), encoding: "utf8" });
     rmSync(out, { recursive: true, force: true });
     expect(result.status).toBe(0);
     expect(result.stdout).toMatch(/No schema changes/i);

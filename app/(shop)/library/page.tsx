@@ -1,18 +1,32 @@
 import type { Metadata } from "next";
 import { SHOP_STAFF } from "@/db/roles";
-import { EmptyState } from "../../_ui/empty-state";
+import { FormNotice } from "../../_ui/field";
 import { requirePage } from "../../_ui/guard";
+import { QueryProvider } from "../../_ui/query/provider";
+import type { LibraryKind } from "../../_ui/query/types";
+import { CsvPanel } from "./_components/csv-panel";
+import { LibraryList } from "./_components/library-list";
+import { LibraryTabs } from "./_components/library-tabs";
+import { libraryKind } from "./_components/kind";
 
 export const metadata: Metadata = { title: "Library" };
 
-export default async function LibraryPage() {
-  await requirePage("/library", SHOP_STAFF);
+export default async function LibraryPage({ searchParams }: { searchParams: Promise<{ kind?: string; saved?: string }> }) {
+  const caller = await requirePage("/library", SHOP_STAFF);
+  const { kind: raw, saved } = await searchParams;
+  const kind: LibraryKind = libraryKind(raw) ?? "cases";
   return (
     <div className="flex flex-col gap-6">
-      <h1 className="text-3xl font-semibold">Library</h1>
-      <EmptyState title="The library is empty">
-        The shop&apos;s case profiles, cylinder kits and boring rigs live here. Add a case profile first: the mouth, the studs and the deck outline.
-      </EmptyState>
+      <div>
+        <h1 className="text-3xl font-semibold">Library</h1>
+        <p className="mt-1 max-w-prose text-ink-2">The shop&apos;s case profiles, cylinder kits and boring rigs — what every study is built from.</p>
+      </div>
+      <LibraryTabs active={kind} />
+      {saved ? <FormNotice tone="ok">Saved “{saved}”.</FormNotice> : null}
+      <QueryProvider>
+        <LibraryList kind={kind} units={caller.units} />
+        {kind !== "rigs" ? <CsvPanel kind={kind} /> : null}
+      </QueryProvider>
     </div>
   );
 }

@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import { listMembers, listPendingInvitations } from "@/db/members";
+import { getSettings } from "@/db/settings";
 import { requirePage } from "../../_ui/guard";
+import { LimitsForm } from "./_components/limits-form";
 import { InviteForm, InvitationRow, MemberActions } from "./_components/members";
 
 export const metadata: Metadata = { title: "Shop settings" };
@@ -9,12 +11,12 @@ const date = (d: Date) => d.toISOString().slice(0, 10);
 
 export default async function SettingsPage() {
   const caller = await requirePage("/settings", ["owner"]);
-  const [members, invitations] = await Promise.all([listMembers(caller), listPendingInvitations(caller)]);
+  const [members, invitations, settings] = await Promise.all([listMembers(caller), listPendingInvitations(caller), getSettings(caller)]);
   return (
     <div className="flex flex-col gap-8">
       <div>
         <h1 className="text-3xl font-semibold">Shop settings</h1>
-        <p className="mt-1 text-ink-2">{caller.shopName}: members and their roles.</p>
+        <p className="mt-1 text-ink-2">{caller.shopName}: members and their roles, and the limits every study is checked against.</p>
       </div>
       <section className="card p-6" aria-labelledby="members-h">
         <h2 id="members-h" className="text-lg font-semibold">
@@ -64,6 +66,12 @@ export default async function SettingsPage() {
         ) : (
           <p className="mt-4 text-sm text-ink-2">No invitation is waiting for an answer.</p>
         )}
+      </section>
+      <section className="card p-6" aria-labelledby="limits-h">
+        <h2 id="limits-h" className="text-lg font-semibold">
+          Default limits
+        </h2>
+        <LimitsForm limits={settings.settings.limits} defaulted={settings.settings.defaulted} version={settings.version} units={caller.units} />
       </section>
     </div>
   );

@@ -31,6 +31,8 @@ export type StudyLimitsInput = z.input<typeof StudyLimitsSchema>;
 
 export type StudyRow = RowBase & {
   caseId: string;
+  /** The case profile's name, for lists. */
+  caseName?: string;
   kitIds: string[];
   rigId: string | null;
   cut: CutPlanInput | null;

@@ -64,6 +64,8 @@ export function DataTable<T>({ label, data, columns, server, filter, initialSort
     manualFiltering: Boolean(server),
     rowCount: server?.rowCount,
     enableSortingRemoval: false,
+    // Low to high on the first click, for every column (thinnest wall first, cheapest first).
+    sortDescFirst: false,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: server ? undefined : getSortedRowModel(),
     getFilteredRowModel: server ? undefined : getFilteredRowModel(),

@@ -28,7 +28,7 @@ export function TableToolbar({
         {onArchived ? (
           <label className="flex items-center gap-2 pb-2 text-sm">
             <input type="checkbox" checked={Boolean(archived)} onChange={(e) => onArchived(e.target.checked)} />
-            Show archived
+            Archived only
           </label>
         ) : null}
       </div>

@@ -1,0 +1,9 @@
+"use client";
+
+import type { Study, StudyResult } from "@/geometry";
+import { Studio } from "../../../studies/[id]/_components/studio/studio";
+
+/** The studio's large-type customer mode, showing the shop's choice. */
+export function FitForCustomer(props: { study: Study; result: StudyResult; units: "mm" | "in"; chosenKitId: string }) {
+  return <Studio study={props.study} result={props.result} units={props.units} customerMode chosenKitId={props.chosenKitId} />;
+}

@@ -1,0 +1,108 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AccessError } from "@/db/access";
+import { jobDetail } from "@/db/jobs";
+import { listPhotos } from "@/db/photos";
+import { formatLength, type KitResult } from "@/geometry";
+import { requirePage } from "../../../_ui/guard";
+import { Photos } from "../../jobs/[id]/_components/photos";
+import { PlanVsActual } from "../../jobs/[id]/_components/plan-vs-actual";
+import { StatusBadge, money } from "../../jobs/_components/status-badge";
+import { ConsultActions } from "./_components/consult-actions";
+import { FitForCustomer } from "./_components/fit";
+
+export const metadata: Metadata = { title: "Your plan" };
+
+const VERDICT_WORDS: Record<KitResult["verdict"], string> = {
+  "fits-as-is": "Fits as it is — no cutting needed.",
+  "fits-after-cut": "Fits once the case mouth is cut to size.",
+  "cannot-fit": "Cannot be fitted safely to this case.",
+};
+
+/** The consult page: what the customer sees of the shop — the fit, the choices in plain words, the plan, the cautions, approve, ask, pay. */
+export default async function ConsultJobPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ checkout?: string }> }) {
+  const { id } = await params;
+  const { checkout } = await searchParams;
+  const caller = await requirePage(`/consult/${id}`, ["customer"]);
+  const detail = await jobDetail(caller, id).catch((error: unknown) => {
+    if (error instanceof AccessError && error.code === "not_found") notFound();
+    throw error;
+  });
+  const { job, plan, readings } = detail;
+  const photos = await listPhotos(caller, id).catch(() => null);
+  const L = (mm: number) => formatLength(mm, caller.units);
+  const chosen = plan?.result.kits.find((k) => k.kitId === plan.kitId);
+  const priceOf = (kitId: string) => plan?.study.kits.find((k) => k.id === kitId)?.price;
+  return (
+    <div className="flex flex-col gap-8">
+      <div>
+        <p className="text-sm text-ink-2"><Link href="/consult">Your plans</Link> / <span className="num">{job.reference}</span></p>
+        <h1 className="text-3xl font-semibold">{job.title}</h1>
+        <p className="mt-1 flex flex-wrap items-center gap-3 text-ink-2">
+          <StatusBadge status={job.status} /> <span>prepared by {caller.shopName}</span>
+        </p>
+      </div>
+
+      {plan && chosen ? (
+        <>
+          <section aria-label="The fit" className="flex flex-col gap-3">
+            <h2 className="text-2xl font-semibold">The fit</h2>
+            <FitForCustomer study={plan.study} result={plan.result} units={caller.units} chosenKitId={plan.kitId} />
+          </section>
+
+          <section aria-label="The choices" className="flex flex-col gap-3">
+            <h2 className="text-2xl font-semibold">The kits we compared, in plain words</h2>
+            <ul className="grid gap-3 md:grid-cols-2">
+              {plan.result.kits.map((k) => (
+                <li key={k.kitId} className={`card p-4 text-lg ${k.kitId === plan.kitId ? "border-2 border-accent" : ""}`}>
+                  <p className="font-semibold">{k.name}{k.kitId === plan.kitId ? " — the shop's choice" : ""}</p>
+                  <p>Displacement <span className="num">{k.displacementCc.stockRounded} cc → {k.displacementCc.kitRounded} cc</span>.</p>
+                  <p>{k.cut ? <>The case mouth must be cut to <span className="num">{L(k.cut.diameterMm)}</span> across, <span className="num">{L(k.cut.depthMm)}</span> deep.</> : "No cutting needed."}</p>
+                  <p className={k.verdict === "cannot-fit" ? "text-interfere" : k.verdict === "fits-as-is" ? "text-clear" : ""}>
+                    Risk: {VERDICT_WORDS[k.verdict]}
+                    {k.thinnestWall && k.verdict !== "cannot-fit" ? <> The thinnest wall left is <span className="num">{L(k.thinnestWall.minWallMm)}</span>.</> : null}
+                  </p>
+                  {priceOf(k.kitId) !== undefined ? <p>Kit price: <span className="num">{priceOf(k.kitId)}</span></p> : null}
+                </li>
+              ))}
+            </ul>
+          </section>
+
+          <section aria-label="The plan" className="card flex flex-col gap-2 p-5 text-lg">
+            <h2 className="text-2xl font-semibold">The plan</h2>
+            <p>Kit: <strong>{chosen.name}</strong>.</p>
+            {chosen.cut ? (
+              <p>
+                The shop will widen the crankcase mouth to <strong className="num">{L(chosen.cut.diameterMm)}</strong> and <strong className="num">{L(chosen.cut.depthMm)}</strong> deep, leaving{" "}
+                <span className="num">{chosen.radialClearanceMm.vsCut !== null ? L(chosen.radialClearanceMm.vsCut) : "—"}</span> of room around the cylinder skirt.
+              </p>
+            ) : (
+              <p>The cylinder goes in without cutting the case.</p>
+            )}
+            <p>Machining deposit: <strong className="num">{job.deposit.amount > 0 ? money(job.deposit.amount, job.deposit.currency) : "none"}</strong>{job.deposit.amount > 0 ? <span data-testid="paid-state"> — {job.deposit.paid ? "paid, thank you" : "not paid yet"}</span> : null}.</p>
+          </section>
+
+          <section aria-label="Cautions" className="caution flex flex-col gap-1 text-base" data-testid="consult-cautions">
+            <h2 className="text-xl font-semibold">Before you decide</h2>
+            <p>A change of displacement can change the vehicle&apos;s legal class (for example its licence, registration or insurance class); local rules decide — check them before approving.{chosen.displacementCc.crossesClasses.length ? ` This kit crosses the ${chosen.displacementCc.crossesClasses.join(", ")} cc line.` : ""}</p>
+            <p>Cutting a crankcase cannot be undone. The shop follows the kit maker&apos;s instructions and defers to qualified machinists where in doubt.</p>
+            {chosen.warnings.map((w) => <p key={w.code + w.message}>{w.message}</p>)}
+          </section>
+
+          <ConsultActions job={job} checkout={checkout ?? null} />
+
+          {readings ? (
+            <section aria-label="After the cut" className="flex flex-col gap-3">
+              <h2 className="text-2xl font-semibold">After the cut: readings against the plan</h2>
+              <PlanVsActual verification={readings.verification} at={readings.at} />
+            </section>
+          ) : null}
+          <Photos jobId={job.id} canEdit={false} initial={photos} />
+        </>
+      ) : (
+        <p className="text-ink-2">The shop is still preparing this plan.</p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import type { JobView } from "@/db/jobs";
+import { STATUS_LABEL, type JobStatus } from "@/db/job-status";
+import { callApi } from "../../../../_ui/api-client";
+import { FormNotice } from "../../../../_ui/field";
+
+const VERB: Partial<Record<string, string>> = {
+  "intake>planned": "Mark planned",
+  "planned>approved": "Approve for the customer",
+  "planned>intake": "Back to intake",
+  "approved>machined": "Mark machined",
+  "approved>planned": "Back to planned (re-plan)",
+  "machined>verified": "Mark verified",
+  "verified>closed": "Close the job",
+  "verified>machined": "Back to machined",
+};
+const NEEDS_REASON = new Set(["planned>approved", "planned>intake", "approved>planned", "verified>machined"]);
+
+/** The moves this person may make from here, the reason when one is needed, and sharing with the customer. */
+export function JobActions({ job, role, hasPlan }: { job: JobView; role: string; hasPlan: boolean }) {
+  const router = useRouter();
+  const [reason, setReason] = useState("");
+  const [pending, setPending] = useState<string | null>(null);
+  const [notice, setNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
+  const [reasonFor, setReasonFor] = useState<JobStatus | null>(null);
+
+  async function move(to: JobStatus) {
+    const key = `${job.status}>${to}`;
+    if (NEEDS_REASON.has(key) && !reason.trim()) {
+      setReasonFor(to);
+      setNotice({ tone: "error", text: "Say why in the box below; the reason is kept in the job's history." });
+      return;
+    }
+    setPending(to);
+    const res = await callApi(`/api/v1/jobs/${job.id}/move`, { body: { to, ...(reason.trim() ? { reason } : {}) } });
+    setPending(null);
+    if (!res.ok) {
+      setNotice({ tone: "error", text: res.error.message });
+      return;
+    }
+    setReason("");
+    setReasonFor(null);
+    setNotice({ tone: "ok", text: `The job is now ${STATUS_LABEL[to].toLowerCase()}.` });
+    router.refresh();
+  }
+
+  async function share() {
+    setPending("share");
+    const res = await callApi<{ invited: boolean }>(`/api/v1/jobs/${job.id}/share`, { body: {} });
+    setPending(null);
+    if (!res.ok) {
+      setNotice({ tone: "error", text: res.error.message });
+      return;
+    }
+    setNotice({
+      tone: "ok",
+      text: res.data.invited
+        ? `Shared: ${job.customer.email} was invited into the shop as a customer; the mail carries the link.`
+        : `Shared: ${job.customer.email} has the link to the plan.`,
+    });
+    router.refresh();
+  }
+
+  const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner"));
+  return (
+    <div className="card flex flex-col gap-3 p-4">
+      <div className="flex flex-wrap items-center gap-2">
+        {moves.map((to) => (
+          <button key={to} type="button" className={to === "closed" || NEEDS_REASON.has(`${job.status}>${to}`) ? "btn-quiet" : "btn"} disabled={pending !== null} onClick={() => move(to)}>
+            {pending === to ? "Moving…" : (VERB[`${job.status}>${to}`] ?? `Move to ${STATUS_LABEL[to].toLowerCase()}`)}
+          </button>
+        ))}
+        {hasPlan && job.status !== "closed" ? (
+          <button type="button" className="btn-quiet" disabled={pending !== null} onClick={share}>
+            {pending === "share" ? "Sharing…" : job.sharedAt ? "Share again with the customer" : "Share with the customer"}
+          </button>
+        ) : null}
+        {job.status === "planned" && role !== "owner" ? <span className="text-sm text-ink-2">Waiting for the customer&apos;s approval.</span> : null}
+      </div>
+      {reasonFor || moves.some((to) => NEEDS_REASON.has(`${job.status}>${to}`)) ? (
+        <div>
+          <label htmlFor="move-reason" className="field-label">Reason (needed to approve for the customer or to go back a step)</label>
+          <input id="move-reason" className="field-input" value={reason} onChange={(e) => setReason(e.target.value)} placeholder="e.g. approved by phone on 2 March" />
+        </div>
+      ) : null}
+      {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+    </div>
+  );
+}

@@ -1,0 +1,34 @@
+import type { Verification } from "@/db/verification";
+
+const STATE = { ok: ["within", "text-clear"], fail: ["outside", "text-interfere"], missing: ["missing", "text-tight"] } as const;
+
+/** The after-cut readings beside the plan, line by line, with by how much a line is outside. */
+export function PlanVsActual({ verification, at }: { verification: Verification; at: string }) {
+  const verdict = verification.verdict;
+  return (
+    <div className="flex flex-col gap-2">
+      <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-clear bg-clear-soft" : verdict === "fail" ? "border-interfere bg-interfere-soft" : "border-tight bg-tight-soft"}`} data-testid="verdict">
+        {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {at.slice(0, 16).replace("T", " ")}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
+      </p>
+      <div className="card overflow-x-auto">
+        <table className="w-full text-sm">
+          <thead className="border-b border-rule text-left text-ink-2">
+            <tr><th className="px-3 py-2">Check</th><th className="px-3 py-2">Plan</th><th className="px-3 py-2">Actual</th><th className="px-3 py-2">Result</th></tr>
+          </thead>
+          <tbody>
+            {verification.checks.map((c, i) => (
+              <tr key={i} className="border-b border-rule last:border-0">
+                <td className="px-3 py-2">{c.label}</td>
+                <td className="px-3 py-2 num">{c.planned}</td>
+                <td className="px-3 py-2 num">{c.actual}</td>
+                <td className={`px-3 py-2 ${STATE[c.state][1]}`}>
+                  <strong>{STATE[c.state][0]}</strong> {c.state === "ok" ? "" : `— ${c.message}`}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

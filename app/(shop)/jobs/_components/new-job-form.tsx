@@ -1,0 +1,122 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { callApi } from "../../../_ui/api-client";
+import { Field, FormNotice } from "../../../_ui/field";
+import { JobCreateSchema } from "@/app/api/v1/jobs/_lib/schemas";
+
+type StudyOption = { id: string; name: string; kitIds: string[]; chosenKitId: string | null };
+
+const fieldsOf = (issues: { path: PropertyKey[]; message: string }[]) => {
+  const out: Record<string, string> = {};
+  for (const i of issues) out[i.path.map(String).join(".")] ??= i.message;
+  return out;
+};
+
+/** The new-job form: checks as the person types, keeps everything typed, says what is wrong next to each field. */
+export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]; initialStudyId: string }) {
+  const router = useRouter();
+  const [v, setV] = useState({ title: "", customerName: "", customerEmail: "", engineNumber: "", caseNumber: "", caseVariant: "", studyId: initialStudyId, deposit: "50.00", currency: "eur", notes: "" });
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [touched, setTouched] = useState<Record<string, boolean>>({});
+  const [problem, setProblem] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  const body = () => {
+    const deposit = v.deposit.trim().replace(",", ".");
+    const cents = /^\d+(\.\d{1,2})?$/.test(deposit) ? Math.round(Number(deposit) * 100) : Number.NaN;
+    return {
+      title: v.title,
+      customerName: v.customerName,
+      customerEmail: v.customerEmail,
+      engineNumber: v.engineNumber,
+      caseNumber: v.caseNumber,
+      caseVariant: v.caseVariant,
+      studyId: v.studyId || null,
+      depositAmount: cents,
+      currency: v.currency,
+      notes: v.notes,
+    };
+  };
+  const check = (next = v) => {
+    void next;
+    const r = JobCreateSchema.safeParse(body());
+    const f = r.success ? {} : fieldsOf(r.error.issues);
+    if (!/^\d+([.,]\d{1,2})?$/.test(v.deposit.trim())) f.depositAmount = "Write the deposit as money, e.g. 50 or 50.00.";
+    return f;
+  };
+  const set = (k: keyof typeof v) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>) => {
+    const next = { ...v, [k]: e.target.value };
+    setV(next);
+    setTouched((t) => ({ ...t, [k === "deposit" ? "depositAmount" : k]: true }));
+  };
+  const live = check();
+  const shown = (k: string) => (touched[k] ? (live[k] ?? errors[k]) : errors[k]);
+
+  async function submit(e: React.FormEvent) {
+    e.preventDefault();
+    const f = check();
+    setErrors(f);
+    setTouched(Object.fromEntries(Object.keys(f).map((k) => [k, true])));
+    if (Object.keys(f).length) {
+      setProblem("Some fields need a look; nothing was lost.");
+      return;
+    }
+    setBusy(true);
+    setProblem(null);
+    const res = await callApi<{ item: { id: string } }>("/api/v1/jobs", { body: body() });
+    setBusy(false);
+    if (!res.ok) {
+      setErrors(res.error.fields ?? {});
+      setProblem(res.error.message);
+      return;
+    }
+    router.push(`/jobs/${res.data.item.id}`);
+  }
+
+  return (
+    <form onSubmit={submit} className="card flex flex-col gap-4 p-6" noValidate>
+      {problem ? <FormNotice tone="error">{problem}</FormNotice> : null}
+      <Field label="Title" name="title" value={v.title} onChange={set("title")} error={shown("title")} hint="The engine and the customer, as the bench calls it." />
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Field label="Customer's name" name="customerName" value={v.customerName} onChange={set("customerName")} error={shown("customerName")} />
+        <Field label="Customer's e-mail" name="customerEmail" type="email" value={v.customerEmail} onChange={set("customerEmail")} error={shown("customerEmail")} hint="The plan is shared to this address." />
+      </div>
+      <div className="grid gap-4 sm:grid-cols-3">
+        <Field label="Engine number" name="engineNumber" value={v.engineNumber} onChange={set("engineNumber")} error={shown("engineNumber")} />
+        <Field label="Case number" name="caseNumber" value={v.caseNumber} onChange={set("caseNumber")} error={shown("caseNumber")} />
+        <Field label="Case variant" name="caseVariant" value={v.caseVariant} onChange={set("caseVariant")} error={shown("caseVariant")} hint="e.g. stud pattern" />
+      </div>
+      <div>
+        <label htmlFor="field-studyId" className="field-label">Study</label>
+        <select id="field-studyId" name="studyId" className="field-input" value={v.studyId} onChange={set("studyId")} aria-describedby="field-studyId-hint">
+          <option value="">No study yet (the job opens at intake)</option>
+          {studies.map((s) => (
+            <option key={s.id} value={s.id}>{s.name}</option>
+          ))}
+        </select>
+        <p id="field-studyId-hint" className="field-hint">With a study, the job is planned with the study&apos;s chosen kit (or its first).</p>
+        {errors.studyId || errors.kitId ? <p role="alert" className="field-error">{errors.studyId ?? errors.kitId}</p> : null}
+      </div>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <Field label="Machining deposit" name="deposit" inputMode="decimal" value={v.deposit} onChange={set("deposit")} error={shown("depositAmount")} hint="Paid by the customer by card on approval; 0 for none." />
+        <div>
+          <label htmlFor="field-currency" className="field-label">Currency</label>
+          <select id="field-currency" className="field-input" value={v.currency} onChange={set("currency")}>
+            {["eur", "usd", "gbp", "chf", "sek", "nok", "dkk", "pln", "czk", "cad", "aud"].map((c) => (
+              <option key={c} value={c}>{c.toUpperCase()}</option>
+            ))}
+          </select>
+        </div>
+      </div>
+      <div>
+        <label htmlFor="field-notes" className="field-label">Notes</label>
+        <textarea id="field-notes" className="field-input" rows={3} value={v.notes} onChange={set("notes")} />
+      </div>
+      <div>
+        <button className="btn" type="submit" disabled={busy}>{busy ? "Opening…" : "Open the job"}</button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,74 @@
+import type { LengthUnits } from "@/geometry";
+import type { CaseRow } from "../../../_ui/query/types";
+import type { FormReader } from "./form/form-reader";
+import { lengthText, numberText } from "./form/number-text";
+import { outlineText, readOutline, readStuds, studsText } from "./form/read-shapes";
+import { emptyOutline, type OutlineText, type StudText } from "./form/text-values";
+
+export type CaseFormValues = {
+  name: string;
+  notes: string;
+  deck: OutlineText;
+  mouth: { outline: OutlineText; depthMm: string };
+  /** Mouth diameter readings, for a round mouth: the smallest counts. */
+  mouthReadingsMm: string[];
+  studs: StudText[];
+  studHoleDiameterMm: string;
+  studThread: string;
+  pockets: { label: string; startDepthMm: string; outline: OutlineText }[];
+  stockBoreMm: string;
+  strokeMm: string;
+  cylinders: string;
+  densityGPerCm3: string;
+};
+
+export function caseDefaults(row: CaseRow | null, units: LengthUnits): CaseFormValues {
+  const d = row?.data;
+  const readings = row?.mouthReadingsMm?.map((r) => lengthText(r.valueMm, units)) ?? [];
+  const mouthOutline = outlineText(d?.mouth.outline, units);
+  return {
+    name: row?.name ?? "",
+    notes: row?.notes ?? "",
+    deck: d ? outlineText(d.deck, units) : emptyOutline("circle"),
+    mouth: { outline: mouthOutline, depthMm: lengthText(d?.mouth.depthMm, units) },
+    mouthReadingsMm: readings.length ? readings : mouthOutline.kind === "circle" && mouthOutline.diameterMm ? [mouthOutline.diameterMm] : [""],
+    studs: d ? studsText(d.studs, units) : [],
+    studHoleDiameterMm: lengthText(d?.studHoleDiameterMm, units),
+    studThread: d?.studThread ?? "",
+    pockets: (d?.pockets ?? []).map((p) => ({ label: p.label, startDepthMm: lengthText(p.startDepthMm ?? 0, units), outline: outlineText(p.outline, units) })),
+    stockBoreMm: lengthText(d?.stockBoreMm, units),
+    strokeMm: lengthText(d?.strokeMm, units),
+    cylinders: numberText(d?.cylinders ?? 1),
+    densityGPerCm3: numberText(d?.densityGPerCm3),
+  };
+}
+
+/** The round mouth's diameter: the smallest of the readings that can be read (the worst case for the skirt). */
+function smallestReading(read: FormReader, texts: string[]): number | undefined {
+  const values = read.lengths(texts, ["mouthReadingsMm"]).filter((v) => Number.isFinite(v));
+  return values.length ? Math.min(...values) : undefined;
+}
+
+/** The form's texts as the core's CaseProfile input. */
+export function caseToCore(v: CaseFormValues, read: FormReader): unknown {
+  const round = v.mouth.outline.kind === "circle";
+  const mouthDiameter = round ? smallestReading(read, v.mouthReadingsMm ?? []) : undefined;
+  if (round && (v.mouthReadingsMm ?? []).every((t) => !t.trim())) read.issues.push({ path: ["mouthReadingsMm"], message: "add at least one mouth diameter reading" });
+  return {
+    name: v.name,
+    deck: readOutline(v.deck, ["deck"], read),
+    mouth: { outline: readOutline(v.mouth.outline, ["mouth", "outline"], read, mouthDiameter ?? (round ? Number.NaN : undefined)), depthMm: read.length(v.mouth.depthMm, ["mouth", "depthMm"]) },
+    studs: readStuds(v.studs, read),
+    studHoleDiameterMm: read.length(v.studHoleDiameterMm, ["studHoleDiameterMm"]),
+    studThread: read.optionalText(v.studThread),
+    pockets: (v.pockets ?? []).map((p, i) => ({
+      label: p.label.trim(),
+      outline: readOutline(p.outline, ["pockets", i, "outline"], read),
+      startDepthMm: read.length(p.startDepthMm, ["pockets", i, "startDepthMm"]) ?? 0,
+    })),
+    stockBoreMm: read.length(v.stockBoreMm, ["stockBoreMm"]),
+    strokeMm: read.length(v.strokeMm, ["strokeMm"]),
+    cylinders: read.number(v.cylinders, ["cylinders"]) ?? 1,
+    densityGPerCm3: read.number(v.densityGPerCm3, ["densityGPerCm3"]),
+  };
+}

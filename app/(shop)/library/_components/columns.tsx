@@ -1,0 +1,100 @@
+"use client";
+
+import { formatLength, type LengthUnits } from "@/geometry";
+import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
+import Link from "next/link";
+import type { CaseRow, KitRow, LibraryKind, RigRow, RowBase } from "../../../_ui/query/types";
+
+const L = (mm: number | undefined, units: LengthUnits) => (mm === undefined ? "—" : formatLength(mm, units, { digits: units === "mm" ? 2 : 3 }));
+const when = (iso: string) => new Date(iso).toLocaleDateString(undefined, { year: "numeric", month: "short", day: "numeric" });
+
+function common<T extends RowBase>(kind: LibraryKind) {
+  const h = createColumnHelper<T>();
+  return {
+    name: h.accessor((r) => r.name, {
+      id: "name",
+      header: "Name",
+      cell: (c) => (
+        <span className="flex items-center gap-2">
+          <Link href={`/library/${kind}/${c.row.original.id}`} className="font-medium text-accent">
+            {c.getValue()}
+          </Link>
+          {c.row.original.archivedAt ? <span className="rounded bg-paper-2 px-1.5 text-xs text-ink-2">archived</span> : null}
+        </span>
+      ),
+    }),
+    updated: h.accessor((r) => r.updatedAt, {
+      id: "updatedAt",
+      header: "Changed",
+      cell: (c) => (
+        <span className="text-ink-2">
+          {when(c.getValue())} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
+        </span>
+      ),
+    }),
+  };
+}
+
+const num = (text: string) => <span className="num">{text}</span>;
+
+export function caseColumns(units: LengthUnits): ColumnDef<CaseRow, unknown>[] {
+  const h = createColumnHelper<CaseRow>();
+  const c = common<CaseRow>("cases");
+  return [
+    c.name,
+    h.display({
+      id: "mouth",
+      header: "Mouth",
+      cell: ({ row }) => {
+        const o = row.original.data.mouth.outline;
+        return o.kind === "circle" ? num(`⌀ ${L(o.diameterMm, units)}`) : <span>polygon, {o.pointsMm.length} corners</span>;
+      },
+    }),
+    h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
+    h.accessor((r) => r.data.stockBoreMm, { id: "stockBoreMm", header: "Stock bore", cell: (c) => num(L(c.getValue(), units)) }),
+    h.accessor((r) => r.data.strokeMm, { id: "strokeMm", header: "Stroke", cell: (c) => num(L(c.getValue(), units)) }),
+    h.display({ id: "pockets", header: "Pockets", cell: ({ row }) => num(String(row.original.data.pockets?.length ?? 0)) }),
+    c.updated,
+  ] as ColumnDef<CaseRow, unknown>[];
+}
+
+export function kitColumns(units: LengthUnits): ColumnDef<KitRow, unknown>[] {
+  const h = createColumnHelper<KitRow>();
+  const c = common<KitRow>("kits");
+  return [
+    c.name,
+    h.accessor((r) => r.data.boreMm, { id: "boreMm", header: "Bore", cell: (c) => num(L(c.getValue(), units)) }),
+    h.display({
+      id: "skirt",
+      header: "Skirt ⌀ (largest)",
+      cell: ({ row }) => {
+        const r = row.original.data.skirtDiameterReadingsMm;
+        return (
+          <span className="num">
+            {L(Math.max(...r), units)} <span className="text-ink-3">({r.length} reading{r.length === 1 ? "" : "s"})</span>
+          </span>
+        );
+      },
+    }),
+    h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
+    h.accessor((r) => r.data.price, { id: "price", header: "Price", cell: (c) => num(c.getValue() === undefined ? "—" : (c.getValue() as number).toFixed(2)) }),
+    c.updated,
+  ] as ColumnDef<KitRow, unknown>[];
+}
+
+export function rigColumns(units: LengthUnits): ColumnDef<RigRow, unknown>[] {
+  const h = createColumnHelper<RigRow>();
+  const c = common<RigRow>("rigs");
+  return [
+    c.name,
+    h.accessor((r) => r.data.headDiameterMm, { id: "headDiameterMm", header: "Head ⌀", cell: (c) => num(L(c.getValue(), units)) }),
+    h.display({
+      id: "reach",
+      header: "Calibrated reach",
+      cell: ({ row }) => num(`${L(row.original.data.calibration.minCutDiameterMm, units)} – ${L(row.original.data.calibration.maxCutDiameterMm, units)}`),
+    }),
+    h.display({ id: "grooves", header: "Grooves", cell: ({ row }) => num(String(row.original.data.grooves.length)) }),
+    h.display({ id: "rpm", header: "Drill top speed", cell: ({ row }) => num(`${row.original.data.drillTopRpm} rpm`) }),
+    c.updated,
+  ] as ColumnDef<RigRow, unknown>[];
+}

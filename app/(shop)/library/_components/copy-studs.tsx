@@ -1,0 +1,35 @@
+"use client";
+
+import type { LengthUnits } from "@/geometry";
+import { useFormContext } from "react-hook-form";
+import { useLibraryOptions } from "../../../_ui/query/library/use-library-list";
+import { studsText } from "./form/read-shapes";
+
+/** Copies a case profile's studs into the kit, for a kit made for that stud pattern. */
+export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
+  const { setValue } = useFormContext();
+  const cases = useLibraryOptions("cases");
+  const items = cases.data?.items ?? [];
+  if (items.length === 0) return null;
+  return (
+    <label className="flex items-center gap-2 text-sm">
+      <span className="text-ink-2">Copy from a case</span>
+      <select
+        className="rounded-md border border-rule bg-card px-2 py-1.5"
+        value=""
+        aria-label="Copy studs from a case profile"
+        onChange={(e) => {
+          const c = items.find((x) => x.id === e.target.value);
+          if (c) setValue("studs", studsText(c.data.studs, units), { shouldDirty: true, shouldValidate: true });
+        }}
+      >
+        <option value="">choose…</option>
+        {items.map((c) => (
+          <option key={c.id} value={c.id}>
+            {c.name}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}

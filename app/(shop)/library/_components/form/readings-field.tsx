@@ -1,0 +1,119 @@
+"use client";
+
+import { formatLength, type LengthUnits } from "@/geometry";
+import { useController, useFormContext, type FieldValues, type Path } from "react-hook-form";
+import { errorAt } from "./field-error";
+import { parseLengthText } from "./number-text";
+
+export type ReadingStamp = { takenBy: string; takenAt: string } | undefined;
+
+/**
+ * A list of readings of one length (a skirt read at three spots). Says which reading counts — the
+ * largest or the smallest, as the trade's worst case — and the spread between them.
+ */
+export function ReadingsField<FV extends FieldValues>({
+  name,
+  label,
+  units,
+  counts,
+  hint,
+  stamps,
+  extraError,
+}: {
+  name: Path<FV>;
+  label: string;
+  units: LengthUnits;
+  counts: "largest" | "smallest";
+  hint?: string;
+  stamps?: (valueMm: number | undefined, index: number) => ReadingStamp;
+  extraError?: string;
+}) {
+  const { control, formState } = useFormContext<FV>();
+  const { field } = useController({ control, name });
+  const texts = (field.value as string[] | undefined) ?? [];
+  const values = texts.map((t) => parseLengthText(t, units)).map((r) => (r.ok ? r.value : undefined));
+  // Only readings without a message count towards the worst one and the spread.
+  const good = values
+    .map((v, i) => [v, i] as const)
+    .filter((p): p is readonly [number, number] => p[0] !== undefined && p[0] > 0 && !errorAt(formState.errors, `${name}.${p[1]}`));
+  const worst = good.length ? good.reduce((a, b) => (counts === "largest" ? (b[0] > a[0] ? b : a) : b[0] < a[0] ? b : a)) : null;
+  const spread = good.length > 1 ? Math.max(...good.map((g) => g[0])) - Math.min(...good.map((g) => g[0])) : null;
+  const set = (next: string[]) => field.onChange(next);
+  const listError = errorAt(formState.errors, name) ?? extraError;
+  const baseId = `f-${String(name).replaceAll(".", "-")}`;
+
+  return (
+    <fieldset className="flex flex-col gap-2" aria-describedby={`${baseId}-summary`}>
+      <legend className="field-label">
+        {label} <span className="text-ink-3 num">({units})</span>
+      </legend>
+      <ul className="flex flex-col gap-2">
+        {texts.map((t, i) => {
+          const err = errorAt(formState.errors, `${name}.${i}`);
+          const stamp = stamps?.(values[i], i);
+          const isWorst = worst?.[1] === i && good.length > 1;
+          return (
+            <li key={i} className="flex flex-col">
+              <div className="flex items-center gap-2">
+                <label htmlFor={`${baseId}-${i}`} className="w-20 shrink-0 text-sm text-ink-2">
+                  Reading {i + 1}
+                </label>
+                <input
+                  id={`${baseId}-${i}`}
+                  className={`field-input mt-0 num ${isWorst ? "border-accent" : ""}`}
+                  inputMode="decimal"
+                  autoComplete="off"
+                  value={t}
+                  aria-invalid={err ? true : undefined}
+                  aria-describedby={err ? `${baseId}-${i}-error` : undefined}
+                  onChange={(e) => set(texts.map((x, j) => (j === i ? e.target.value : x)))}
+                  onBlur={field.onBlur}
+                />
+                {isWorst ? <span className="shrink-0 rounded bg-accent-soft px-1.5 py-0.5 text-xs text-accent">counts</span> : null}
+                <button type="button" className="btn-quiet shrink-0" aria-label={`Remove reading ${i + 1}`} onClick={() => set(texts.filter((_, j) => j !== i))}>
+                  Remove
+                </button>
+              </div>
+              {err ? (
+                <p id={`${baseId}-${i}-error`} role="alert" className="field-error ml-22">
+                  {err}
+                </p>
+              ) : null}
+              {stamp ? (
+                <p className="field-hint ml-22">
+                  taken by {stamp.takenBy}, {new Date(stamp.takenAt).toLocaleDateString()}
+                </p>
+              ) : null}
+            </li>
+          );
+        })}
+      </ul>
+      <div className="flex flex-wrap items-center gap-3">
+        <button type="button" className="btn-quiet" onClick={() => set([...texts, ""])}>
+          Add a reading
+        </button>
+        <p id={`${baseId}-summary`} className="text-sm text-ink-2" data-testid={`${baseId}-summary`}>
+          {worst ? (
+            <>
+              The {counts} counts: <span className="num text-ink">{formatLength(worst[0], units, { digits: units === "mm" ? 2 : 4 })}</span>
+              {good.length > 1 ? <> (reading {worst[1] + 1})</> : null}
+              {spread !== null ? (
+                <>
+                  {" "}
+                  · spread <span className="num">{formatLength(spread, units, { digits: units === "mm" ? 2 : 4 })}</span>
+                </>
+              ) : null}
+            </>
+          ) : (
+            (hint ?? "Read it at several spots; the worst reading counts.")
+          )}
+        </p>
+      </div>
+      {listError ? (
+        <p role="alert" className="field-error">
+          {listError}
+        </p>
+      ) : null}
+    </fieldset>
+  );
+}

@@ -1,0 +1,74 @@
+"use client";
+
+import type { LengthUnits } from "@/geometry";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, type DefaultValues, type FieldValues, type Path } from "react-hook-form";
+import type { z } from "zod";
+import { ApiFailure } from "../../../../_ui/query/fetch";
+import { useSaveLibraryRow } from "../../../../_ui/query/library/use-library-mutations";
+import type { LibraryKind } from "../../../../_ui/query/types";
+import { coreResolver, type FormContext } from "./core-resolver";
+import type { FormReader } from "./form-reader";
+import { convertLengthTexts } from "./units-text";
+
+type Notice = { tone: "error" | "ok"; text: string } | null;
+
+/**
+ * The common machinery of a library form: texts kept as typed, validated on every change by the core's
+ * schema, units switchable without losing anything, and a save whose refusal leaves every field as it was.
+ */
+export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts: {
+  kind: LibraryKind;
+  id: string | null;
+  version: number | null;
+  schema: S;
+  initialUnits: LengthUnits;
+  defaults: DefaultValues<FV>;
+  toCore: (values: FV, read: FormReader) => unknown;
+  toBody: (core: z.output<S>, values: FV, units: LengthUnits) => Record<string, unknown>;
+  /** Server field paths (e.g. "data.boreMm") to form paths. */
+  fieldPath?: (serverPath: string) => string;
+}) {
+  const router = useRouter();
+  const [units, setUnitsState] = useState<LengthUnits>(opts.initialUnits);
+  const [notice, setNotice] = useState<Notice>(null);
+  const [version, setVersion] = useState(opts.version);
+  const save = useSaveLibraryRow(opts.kind, opts.id);
+  const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, opts.toCore));
+  const form = useForm<FV, FormContext, z.output<S>>({ mode: "onChange", defaultValues: opts.defaults, resolver, context: { units } });
+
+  const setUnits = (next: LengthUnits) => {
+    const values = form.getValues();
+    setUnitsState(next);
+    form.reset(convertLengthTexts(values, units, next), { keepDefaultValues: true, keepDirty: true, keepTouched: true });
+    // The context (units) reaches the resolver on the next render; validate after it.
+    setTimeout(() => void form.trigger(), 0);
+  };
+
+  const onSubmit = form.handleSubmit(
+    async (core) => {
+      setNotice(null);
+      const body = opts.toBody(core, form.getValues(), units);
+      try {
+        const row = await save.mutateAsync(opts.id ? { ...body, version } : body);
+        setVersion(row.version);
+        form.reset(form.getValues());
+        if (!opts.id) router.push(`/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
+        else setNotice({ tone: "ok", text: `Saved “${row.name}”.` });
+      } catch (error) {
+        if (error instanceof ApiFailure) {
+          for (const [path, message] of Object.entries(error.fields ?? {})) {
+            form.setError((opts.fieldPath?.(path) ?? path.replace(/^data\./, "")) as Path<FV>, { type: "server", message });
+          }
+          setNotice({ tone: "error", text: `${error.message} Everything you typed is still here.` });
+        } else {
+          setNotice({ tone: "error", text: "The save did not go through; everything you typed is still here. Try again." });
+        }
+      }
+    },
+    () => setNotice({ tone: "error", text: "Some fields need attention (marked in red); nothing was saved and nothing was lost." }),
+  );
+
+  return { form, units, setUnits, notice, onSubmit, busy: save.isPending };
+}

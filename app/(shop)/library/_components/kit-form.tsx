@@ -1,0 +1,103 @@
+"use client";
+
+import { CylinderKitSchema, type LengthUnits } from "@/geometry";
+import { FormProvider, useFormContext } from "react-hook-form";
+import { FormNotice } from "../../../_ui/field";
+import type { KitRow } from "../../../_ui/query/types";
+import { CopyStudsFromCase } from "./copy-studs";
+import { FormSection } from "./form-section";
+import { ReadingsField } from "./form/readings-field";
+import { SaveBar } from "./form/save-bar";
+import { StudsField } from "./form/studs-field";
+import { TextField } from "./form/text-field";
+import { UnitToggle } from "./form/unit-toggle";
+import { useLibraryForm } from "./form/use-library-form";
+import { kitDefaults, kitToCore, type KitFormValues } from "./kit-values";
+
+/** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets, price. */
+export function KitForm({ row, units: initialUnits }: { row: KitRow | null; units: LengthUnits }) {
+  const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
+    kind: "kits",
+    id: row?.id ?? null,
+    version: row?.version ?? null,
+    schema: CylinderKitSchema,
+    initialUnits,
+    defaults: kitDefaults(row, initialUnits),
+    toCore: kitToCore,
+    toBody: (core, values: KitFormValues) => {
+      const { id: _id, name, ...data } = core;
+      void _id;
+      return { name, notes: values.notes, data };
+    },
+  });
+  const stamp = (list: KitRow["readings"]["skirtDiameter"] | undefined) => (v: number | undefined) => {
+    const r = v === undefined ? undefined : list?.find((x) => Math.abs(x.valueMm - v) < 1e-6);
+    return r ? { takenBy: r.takenBy.name, takenAt: r.takenAt } : undefined;
+  };
+
+  return (
+    <FormProvider {...form}>
+      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit kit ${row.name}` : "New cylinder kit"}>
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <h1 className="text-2xl font-semibold">{row ? row.name : "New cylinder kit"}</h1>
+          <UnitToggle units={units} onChange={setUnits} />
+        </div>
+        {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+        <FormSection title="Kit">
+          <TextField<KitFormValues> name="name" label="Name" className="md:col-span-2" />
+          <TextField<KitFormValues> name="boreMm" label="Bore" unit={units} numeric />
+          <TextField<KitFormValues> name="strokeMm" label="Stroke (only with a stroker crank)" unit={units} numeric hint="Blank: the case's stroke." />
+          <TextField<KitFormValues> name="price" label="Price" numeric hint="In the shop's currency, optional." />
+          <TextField<KitFormValues> name="notes" label="Notes" />
+        </FormSection>
+        <FormSection title="Skirt, as measured">
+          <ReadingsField<KitFormValues>
+            name="skirtDiameterReadingsMm"
+            label="Skirt diameter readings"
+            units={units}
+            counts="largest"
+            stamps={stamp(row?.readings?.skirtDiameter)}
+            hint="Read the skirt at several spots on the actual part; the largest counts."
+          />
+          <ReadingsField<KitFormValues>
+            name="skirtLengthReadingsMm"
+            label="Skirt length readings (base face to skirt bottom)"
+            units={units}
+            counts="largest"
+            stamps={stamp(row?.readings?.skirtLength)}
+          />
+        </FormSection>
+        <FormSection title="Studs the kit needs">
+          <div className="md:col-span-2">
+            <StudsField<KitFormValues> units={units} copyFrom={<CopyStudsFromCase units={units} />} />
+          </div>
+          <TextField<KitFormValues> name="studThread" label="Stud thread" placeholder="M7 or M7x1" hint="ISO metric, optional." />
+        </FormSection>
+        <FormSection title="Base gaskets">
+          <ReadingsField<KitFormValues>
+            name="baseGasketsMm"
+            label="Base gasket thicknesses supplied"
+            units={units}
+            counts="smallest"
+            hint="Each gasket that comes with the kit; blank list when it comes with none."
+          />
+          <GasketSwitch />
+        </FormSection>
+        <SaveBar busy={busy} isNew={!row} backHref="/library?kind=kits" dirty={form.formState.isDirty} />
+      </form>
+    </FormProvider>
+  );
+}
+
+function GasketSwitch() {
+  const { register } = useFormContext<KitFormValues>();
+  return (
+    <label className="flex items-start gap-2 text-sm">
+      <input type="checkbox" className="mt-1" {...register("alwaysWithGasket")} />
+      <span>
+        Always run with a base gasket
+        <span className="field-hint block">Then the thinnest gasket is taken off the skirt&apos;s protrusion. Leave it off when the kit may run without one.</span>
+      </span>
+    </label>
+  );
+}

@@ -1,0 +1,54 @@
+"use client";
+
+import type { LengthUnits } from "@/geometry";
+import { useFormContext, useWatch } from "react-hook-form";
+import { TextField } from "../../../library/_components/form/text-field";
+import { len } from "./fmt";
+import { LIMIT_KEYS, type LimitKey, type StudyFormValues } from "./study-values";
+
+const LABEL: Record<LimitKey, string> = {
+  minRadialClearanceMm: "Radial clearance around the skirt, at least",
+  minDepthClearanceMm: "Depth clearance under the skirt, at least",
+  minSealingLandMm: "Sealing land at each stud, at least",
+  minWallMm: "Wall to pockets and the outside, at least",
+  studToleranceMm: "Stud position tolerance",
+  hardwareMarginMm: "Screw-head margin inside the cut",
+  maxRockMm: "Holder rocking, at most",
+  cuttingSpeedMinMPerMin: "Cutting speed, from",
+  cuttingSpeedMaxMPerMin: "Cutting speed, to",
+  displacementClassesCc: "Legal-class limits",
+};
+
+/** The study's own limits; a blank one takes the shop's default, shown beside it. */
+export function LimitsPanel({ units, shopLimits }: { units: LengthUnits; shopLimits: Record<string, unknown> }) {
+  const { control } = useFormContext<StudyFormValues>();
+  const values = useWatch({ control, name: "limits" });
+  const shopText = (k: LimitKey) => {
+    const v = shopLimits[k];
+    if (Array.isArray(v)) return `${v.join(", ")} cc`;
+    if (typeof v !== "number") return "—";
+    return k.endsWith("Mm") ? len(v, units) : `${v} m/min`;
+  };
+  return (
+    <section className="card flex flex-col gap-3 p-4" aria-label="Limits">
+      <h2 className="font-semibold">Limits</h2>
+      <p className="text-sm text-ink-2">Blank takes the shop&apos;s default. Set one here to change it for this study only.</p>
+      <div className="grid gap-3 sm:grid-cols-2">
+        {LIMIT_KEYS.map((k) => {
+          const own = Boolean(values?.[k]?.trim());
+          return (
+            <TextField<StudyFormValues>
+              key={k}
+              name={`limits.${k}`}
+              label={LABEL[k]}
+              unit={k.endsWith("Mm") ? units : k === "displacementClassesCc" ? "cc" : "m/min"}
+              numeric
+              placeholder={shopText(k)}
+              hint={own ? `This study's own; the shop default is ${shopText(k)}.` : `Shop default: ${shopText(k)}`}
+            />
+          );
+        })}
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,160 @@
+"use client";
+
+import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
+import type { Study, StudyResult } from "@/geometry";
+import type { FitCanvasApi } from "@/scene/three/fit-canvas";
+import type { ViewState } from "@/scene/three/view";
+import { Cautions } from "./cautions";
+import { CutSlider } from "./cut-controls";
+import { Drawings } from "./drawings";
+import { download, slug } from "./download";
+import { FitView } from "./fit-view";
+import { Legend } from "./legend";
+import { KitSwitcher, SmallMultiples } from "./lineup";
+import { ResultsPanel } from "./results-panel";
+import { type CompareMode, Toolbar } from "./toolbar";
+import { type CutDraft, useLiveFit, useProposedCuts, useSettled } from "./use-live-fit";
+
+export interface StudioProps {
+  readonly study: Study;
+  readonly result: StudyResult;
+  readonly units: "mm" | "in";
+  /** Called while a cut slider moves (final = false) and once when the drag ends or a value is typed (final = true). */
+  readonly onCutChange?: (cut: CutDraft, final: boolean) => void;
+  /** Large type and no editing controls, for showing the fit to a customer. */
+  readonly customerMode?: boolean;
+  /** The kit marked as the choice, highlighted in the lineup. */
+  readonly chosenKitId?: string;
+}
+
+const STEP_MM = 0.05;
+
+/** The fit studio: the 3D view, the results in words, the cut controls, the kit lineup and the drawings. */
+export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId }: StudioProps) {
+  const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
+  const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
+  const live = useDeferredValue(snap);
+  const settled = useSettled(live);
+  const proposed = useProposedCuts(study);
+  const [customer, setCustomer] = useState(customerMode);
+  const [compare, setCompare] = useState<CompareMode>("one");
+  const [view, setView] = useState<Omit<ViewState, "customer" | "units" | "overlay">>({
+    section: true,
+    sectionAngleDeg: 0,
+    camera: "three-quarter",
+    cameraNonce: 0,
+    exaggeration: 1,
+  });
+  const fullView: ViewState = useMemo(() => ({ ...view, customer, units, overlay: compare === "overlay" }), [view, customer, units, compare]);
+  const api = useRef<FitCanvasApi | null>(null);
+  const onReady = useCallback((a: FitCanvasApi) => {
+    api.current = a;
+  }, []);
+
+  const draft = useRef<CutDraft>({ diameterMm: study.cut?.diameterMm, depthMm: study.cut?.depthMm });
+  const change = useCallback(
+    (patch: CutDraft, final: boolean, at?: number) => {
+      const next = { ...draft.current, ...patch };
+      // A drag's end repeats the last live value: save it without evaluating it again.
+      const same = next.diameterMm === draft.current.diameterMm && next.depthMm === draft.current.depthMm;
+      draft.current = next;
+      if (!(final && same)) setCut(next, at);
+      onCutChange?.(next, final);
+    },
+    [setCut, onCutChange],
+  );
+
+  const ranges = useMemo(() => {
+    const skirts = result.kits.map((k) => k.skirt.diameterMm);
+    const lo = Math.floor(Math.min(...skirts) - 4);
+    const hi = Math.ceil(Math.max(result.case.maxCutDiameterMm, Math.max(...skirts) + 4));
+    const M = study.case.mouth.depthMm;
+    return { dMin: lo, dMax: Math.max(hi, lo + 2), zMin: 1, zMax: Math.ceil(M + 4) };
+  }, [result, study.case.mouth.depthMm]);
+
+  const k = snap.result.kits[snap.kitIndex];
+  const p = proposed[snap.kitIndex];
+  const dNow = k.cut?.diameterMm ?? p?.diameterMm ?? k.skirt.diameterMm;
+  const zNow = k.cut?.depthMm ?? p?.depthMm ?? Math.max(1, k.skirt.protrusionMm);
+  const multi = study.kits.length > 1;
+  const snapshot = () => {
+    const url = api.current?.snapshot();
+    if (url) download(`${slug(`${study.name ?? "study"}-${k.name}`)}-fit.png`, url);
+  };
+
+  return (
+    <div className="flex flex-col gap-4" data-testid="studio" data-customer={customer || undefined}>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <p className="text-sm text-ink-2">
+          {study.case.name} · {study.kits.length} {study.kits.length === 1 ? "kit" : "kits"}
+        </p>
+        <button type="button" className={customer ? "btn" : "btn-quiet"} aria-pressed={customer} onClick={() => setCustomer((c) => !c)} data-testid="customer-toggle">
+          {customer ? "Back to the bench view" : "Show the customer"}
+        </button>
+      </div>
+      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
+        <div className="flex min-w-0 flex-col gap-3">
+          <Toolbar view={fullView} compare={compare} customer={customer} onView={(v) => setView((s) => ({ ...s, ...v }))} onCompare={setCompare} onSnapshot={snapshot} multipleKits={multi} />
+          <div
+            className="card relative aspect-[4/3] max-h-[72vh] w-full overflow-hidden bg-paper-2"
+            role="img"
+            aria-label={`3D view of ${k.name} in ${study.case.name}; the fit results beside it give every figure in words`}
+            data-testid="view"
+            data-camera={view.camera}
+            data-section={view.section ? String(view.sectionAngleDeg) : "off"}
+          >
+            <div className={compare === "side" ? "hidden" : "h-full w-full"}>
+              <FitView store={store} view={fullView} onReady={onReady} />
+            </div>
+            {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={live.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+          </div>
+          {!customer && (
+            <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label="Planned cut">
+              <CutSlider
+                label="Cut diameter"
+                testId="cut-diameter"
+                valueMm={dNow}
+                minMm={ranges.dMin}
+                maxMm={ranges.dMax}
+                stepMm={STEP_MM}
+                units={units}
+                hint={p ? `Least that clears this kit: ${p.diameterMm.toFixed(2)} mm` : undefined}
+                onLive={(mm, at) => change({ diameterMm: mm }, false, at)}
+                onCommit={(mm) => change({ diameterMm: mm }, true)}
+              />
+              <CutSlider
+                label="Cut depth"
+                testId="cut-depth"
+                valueMm={zNow}
+                minMm={ranges.zMin}
+                maxMm={ranges.zMax}
+                stepMm={STEP_MM}
+                units={units}
+                hint={p ? `Least for this kit: ${p.depthMm.toFixed(2)} mm` : undefined}
+                onLive={(mm, at) => change({ depthMm: mm }, false, at)}
+                onCommit={(mm) => change({ depthMm: mm }, true)}
+              />
+              <div className="flex flex-wrap gap-2 md:col-span-2">
+                {p && (
+                  <button type="button" className="btn-quiet" onClick={() => change({ diameterMm: p.diameterMm, depthMm: p.depthMm }, true)} data-testid="use-least-cut">
+                    Use the least cut for this kit
+                  </button>
+                )}
+                <button type="button" className="btn-quiet" onClick={() => change({ diameterMm: undefined, depthMm: undefined }, true)}>
+                  Let each kit have its own least cut
+                </button>
+              </div>
+            </div>
+          )}
+        </div>
+        <aside className="flex min-w-0 flex-col gap-3">
+          <ResultsPanel result={live.result} kitIndex={live.kitIndex} proposed={proposed[live.kitIndex]} units={units} large={customer} />
+          {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={live.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+          <Legend result={live.result} units={units} large={customer} />
+        </aside>
+      </div>
+      {!customer && <Cautions />}
+      <Drawings study={settled.study} result={settled.result} kitIndex={settled.kitIndex} units={units} />
+    </div>
+  );
+}

@@ -1,0 +1,39 @@
+import type { LengthUnits, WallResult } from "@/geometry";
+import { len } from "./fmt";
+
+const KIND: Record<WallResult["kind"], string> = { stud: "sealing land at stud", pocket: "wall to pocket", outline: "wall to the outside" };
+
+/** The wall left from the cut to each stud hole, pocket and the deck's outside, against what is required. */
+export function WallsTable({ walls, units }: { walls: WallResult[]; units: LengthUnits }) {
+  if (walls.length === 0) return <p className="text-sm text-ink-2">No cut, so no wall is touched.</p>;
+  return (
+    <table className="w-full text-sm" aria-label="Walls left by the cut">
+      <thead className="text-left text-ink-2">
+        <tr>
+          <th className="py-1 font-medium">Where</th>
+          <th className="py-1 text-right font-medium">Left</th>
+          <th className="py-1 text-right font-medium">Required</th>
+          <th className="py-1 pl-3 font-medium">State</th>
+        </tr>
+      </thead>
+      <tbody>
+        {walls.map((w) => {
+          const broken = w.minWallMm < 0;
+          const state = !w.reached ? ["not reached", "text-ink-3"] : w.ok ? ["ok", "text-clear"] : broken ? ["breaks through", "text-interfere"] : ["too thin", "text-tight"];
+          return (
+            <tr key={`${w.kind}-${w.label}`} className="border-t border-rule">
+              <td className="py-1">
+                {KIND[w.kind]} <span className="text-ink-2">{w.kind === "outline" ? "" : w.label}</span>
+              </td>
+              <td className={`py-1 text-right num ${state[1]}`}>{len(w.minWallMm, units)}</td>
+              <td className="py-1 text-right num text-ink-2">{len(w.requiredMm, units)}</td>
+              <td className={`py-1 pl-3 ${state[1]}`}>
+                <span aria-hidden="true">{!w.reached ? "·" : w.ok ? "✓" : "✕"}</span> {state[0]}
+              </td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}

@@ -1,0 +1,148 @@
+import { mmToIn, type LengthUnits, type StudyResult } from "@/geometry";
+import { len, VERDICT } from "./fmt";
+import type { LineupRow } from "./lineup-rows";
+
+const COLOR = { clear: "var(--color-clear)", tight: "var(--color-tight)", interfere: "var(--color-interfere)" } as const;
+const ROW_H = 34;
+const LEFT = 190;
+const RIGHT = 330;
+const WIDTH = 1000;
+
+/** Tick positions (in mm) at a round step of the display unit. */
+function ticks(minMm: number, maxMm: number, units: LengthUnits): number[] {
+  const toU = (mm: number) => (units === "in" ? mmToIn(mm) : mm);
+  const span = toU(maxMm) - toU(minMm);
+  const raw = span / 6;
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const step = [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => s >= raw) ?? 10 * mag;
+  const out: number[] = [];
+  for (let v = Math.ceil(toU(minMm) / step) * step; v <= toU(maxMm) + 1e-9; v += step) out.push(units === "in" ? v * 25.4 : v);
+  return out;
+}
+
+/**
+ * The cut window of each kit: a bar from the cut diameter the kit needs to the largest cut the case takes
+ * at the minimum wall, with the existing mouth and the rig's reach marked. Drawn from the core's numbers only.
+ */
+export function WindowChart({
+  rows,
+  result,
+  mouthDiameterMm,
+  units,
+}: {
+  rows: LineupRow[];
+  result: StudyResult;
+  mouthDiameterMm: number | null;
+  units: LengthUnits;
+}) {
+  if (rows.length === 0) return null;
+  const reach = rows.find((r) => r.kit.rig)?.kit.rig?.bitReachMm ?? null;
+  const starts = rows.map((r) => r.needDiameterMm ?? r.kit.skirt.diameterMm);
+  const ends = rows.map((r) => r.kit.maxCutDiameterMm);
+  const all = [...starts, ...ends, ...(mouthDiameterMm ? [mouthDiameterMm] : []), ...(reach ? [reach.min, reach.max] : [])].filter(Number.isFinite);
+  const lo = Math.min(...all);
+  const hi = Math.max(...all);
+  const pad = Math.max(1, (hi - lo) * 0.08);
+  const d0 = lo - pad;
+  const d1 = hi + pad;
+  const x = (mm: number) => LEFT + ((mm - d0) / (d1 - d0)) * (WIDTH - LEFT - RIGHT);
+  const top = 28;
+  const height = top + rows.length * ROW_H + 46;
+  const axisY = top + rows.length * ROW_H + 6;
+
+  return (
+    <figure className="card flex flex-col gap-2 p-4" aria-label="Cut window chart" data-testid="window-chart">
+      <figcaption className="flex flex-wrap items-baseline justify-between gap-2">
+        <span className="font-semibold">Cut window per kit</span>
+        <span className="text-xs text-ink-2">
+          Bar: from the cut the kit needs to the largest cut this case takes at the minimum wall ({len(result.limits.values.minWallMm, units)}, sealing land{" "}
+          {len(result.limits.values.minSealingLandMm, units)}).
+        </span>
+      </figcaption>
+      <svg viewBox={`0 0 ${WIDTH} ${height}`} className="w-full" role="img" aria-label="Cut window of each kit against the case">
+        {reach ? (
+          <g>
+            <rect x={x(reach.min)} y={top - 6} width={Math.max(1, x(reach.max) - x(reach.min))} height={rows.length * ROW_H + 6} fill="var(--color-accent-soft)" opacity={0.55} />
+            <text x={x(reach.min) + 3} y={top - 10} fontSize="11" fill="var(--color-accent)">
+              rig reach {len(reach.min, units)} – {len(reach.max, units)}
+            </text>
+          </g>
+        ) : null}
+        {mouthDiameterMm ? (
+          <g>
+            <line x1={x(mouthDiameterMm)} x2={x(mouthDiameterMm)} y1={top - 6} y2={axisY} stroke="var(--color-ink-2)" strokeDasharray="4 3" />
+            <text x={x(mouthDiameterMm) - 3} y={top - 10} fontSize="11" textAnchor="end" fill="var(--color-ink-2)">
+              existing mouth {len(mouthDiameterMm, units)}
+            </text>
+          </g>
+        ) : null}
+        {rows.map((r, i) => {
+          const y = top + i * ROW_H;
+          const v = VERDICT[r.kit.verdict];
+          const need = starts[i];
+          const max = ends[i];
+          const fits = need <= max;
+          const a = x(Math.min(need, max));
+          const b = x(Math.max(need, max));
+          const words =
+            r.needDiameterMm === null
+              ? `no cut needed · case takes up to ${len(max, units)}`
+              : fits
+                ? `needs ${len(need, units)} · window ${len(max - need, units)}`
+                : `needs ${len(need, units)} · ${len(need - max, units)} past the limit`;
+          return (
+            <g key={r.kitId} data-testid="window-row">
+              <text x={LEFT - 10} y={y + ROW_H / 2 + 4} fontSize="12" textAnchor="end" fill="var(--color-ink)">
+                {r.name.length > 26 ? `${r.name.slice(0, 25)}…` : r.name}
+              </text>
+              <rect
+                x={a}
+                y={y + 8}
+                width={Math.max(3, b - a)}
+                height={ROW_H - 16}
+                rx={3}
+                fill={COLOR[v.tone]}
+                opacity={fits ? 0.85 : 0.35}
+                stroke={COLOR[v.tone]}
+                strokeDasharray={fits ? undefined : "3 2"}
+              />
+              <line x1={x(need)} x2={x(need)} y1={y + 4} y2={y + ROW_H - 4} stroke={COLOR[v.tone]} strokeWidth={2} />
+              <text x={WIDTH - RIGHT + 12} y={y + ROW_H / 2 + 4} fontSize="11" fill="var(--color-ink-2)">
+                {v.short}: {words}
+              </text>
+            </g>
+          );
+        })}
+        <line x1={LEFT} x2={WIDTH - RIGHT} y1={axisY} y2={axisY} stroke="var(--color-rule)" />
+        {ticks(d0, d1, units).map((t) => (
+          <g key={t}>
+            <line x1={x(t)} x2={x(t)} y1={axisY} y2={axisY + 4} stroke="var(--color-ink-3)" />
+            <text x={x(t)} y={axisY + 16} fontSize="10" textAnchor="middle" fill="var(--color-ink-3)" className="num">
+              {units === "in" ? Number(mmToIn(t).toFixed(3)) : Number(t.toFixed(1))}
+            </text>
+          </g>
+        ))}
+        <text x={WIDTH - RIGHT} y={axisY + 30} fontSize="10" textAnchor="end" fill="var(--color-ink-3)">
+          cut diameter, {units}
+        </text>
+      </svg>
+      <ul className="flex flex-wrap gap-4 text-xs text-ink-2" aria-label="Legend">
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-3 w-5 rounded-sm bg-clear" /> clear — fits the mouth as it is
+        </li>
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-3 w-5 rounded-sm bg-tight" /> tight — fits once the mouth is cut
+        </li>
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-3 w-5 rounded-sm bg-interfere" /> interference — cannot be made safe on this case
+        </li>
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-3 w-5 border-l-2 border-dashed border-ink-2" /> existing mouth
+        </li>
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-3 w-5 bg-accent-soft" /> reach of the rig&apos;s bit
+        </li>
+      </ul>
+    </figure>
+  );
+}

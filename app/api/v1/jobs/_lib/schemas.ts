@@ -1,0 +1,71 @@
+// Request shapes of the jobs, photos, payments and consult API. No server-only code: the forms use them too.
+import { z } from "zod";
+import { JOB_STATUSES } from "@/db/job-status";
+import { AfterCutReadingsSchema } from "@/db/verification";
+
+const text = (max: number, what: string) => z.string({ error: `${what} must be text.` }).trim().max(max, `Keep ${what.toLowerCase()} to ${max} characters or fewer.`);
+const Id = z.string({ error: "Expected an id." }).min(1, "Expected an id.").max(100, "That is not an id.");
+
+export const CURRENCIES = ["eur", "usd", "gbp", "chf", "sek", "nok", "dkk", "pln", "czk", "cad", "aud"] as const;
+
+/** A deposit in the smallest currency unit (cents): a whole number, at most 100 000.00. */
+export const AmountSchema = z
+  .number({ error: "The deposit is a whole number of cents." })
+  .int("The deposit is a whole number of cents (e.g. 5000 for 50.00).")
+  .min(0, "The deposit cannot be negative.")
+  .max(10_000_000, "A deposit above 100 000.00 is not taken through the card checkout.");
+
+const base = {
+  title: text(120, "The title").min(1, "Give the job a title (for example the engine and the customer)."),
+  customerName: text(120, "The customer's name").min(1, "Name the customer."),
+  customerEmail: z.string({ error: "Give the customer's e-mail." }).trim().toLowerCase().pipe(z.email({ error: "That does not look like an e-mail address." })),
+  engineNumber: text(60, "The engine number").optional(),
+  caseNumber: text(60, "The case number").optional(),
+  caseVariant: text(120, "The case variant").optional(),
+  studyId: Id.nullable().optional(),
+  kitId: Id.nullable().optional(),
+  depositAmount: AmountSchema.optional(),
+  currency: z.enum(CURRENCIES, { error: "Choose a currency from the list." }).optional(),
+  verifyToleranceMm: z.number({ error: "The tolerance is a number in mm." }).positive("The tolerance must be above zero.").max(2, "A tolerance above 2 mm is not a check.").optional(),
+  notes: text(4000, "The notes").optional(),
+};
+
+export const JobCreateSchema = z.strictObject(base);
+export const JobPatchSchema = JobCreateSchema.partial().extend({
+  version: z.number({ error: "Send the version you last read." }).int("The version is a whole number.").min(1, "The version is a whole number from 1 up."),
+});
+export type JobCreate = z.infer<typeof JobCreateSchema>;
+export type JobPatch = z.infer<typeof JobPatchSchema>;
+
+export const JobMoveSchema = z.strictObject({
+  to: z.enum(JOB_STATUSES, { error: "Choose a status." }),
+  reason: text(500, "The reason").optional(),
+});
+
+export const JobListQuerySchema = z.object({
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+  status: z.enum(JOB_STATUSES, { error: "Unknown status." }).optional(),
+  q: z.string().trim().max(100).optional(),
+  sort: z.enum(["updatedAt", "createdAt", "reference", "title", "customerName", "status"], { error: "Unknown sort field." }).optional(),
+  dir: z.enum(["asc", "desc"]).optional(),
+});
+export type JobListQuery = z.infer<typeof JobListQuerySchema>;
+
+export const ReadingsBodySchema = AfterCutReadingsSchema;
+
+export const QuestionSchema = z.strictObject({ text: text(2000, "The question").min(3, "Write your question (a few words at least).") });
+
+export const PHOTO_KINDS = ["readings", "before", "after", "trial-fit", "other"] as const;
+export const PHOTO_TYPES = ["image/jpeg", "image/png", "image/webp"] as const;
+/** Largest photo accepted, bytes. */
+export const MAX_PHOTO_BYTES = 8 * 1024 * 1024;
+
+export const PhotoRequestSchema = z.strictObject({
+  contentType: z.enum(PHOTO_TYPES, { error: "Only JPEG, PNG or WebP photos are accepted." }),
+  sizeBytes: z.number({ error: "Send the file's size in bytes." }).int().min(1, "The file is empty.").max(MAX_PHOTO_BYTES, `Photos are limited to ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`),
+  caption: text(200, "The caption").optional(),
+  kind: z.enum(PHOTO_KINDS, { error: "Choose what the photo shows." }).optional(),
+  shared: z.boolean().optional(),
+});
+export const PhotoPatchSchema = z.strictObject({ shared: z.boolean().optional(), caption: text(200, "The caption").optional() });

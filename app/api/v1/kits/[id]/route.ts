@@ -1,0 +1,6 @@
+import { itemRoutes } from "../../_lib/library-routes";
+
+const routes = itemRoutes("kits");
+export const GET = routes.GET;
+export const PATCH = routes.PATCH;
+export const DELETE = routes.DELETE;

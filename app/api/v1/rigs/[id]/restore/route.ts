@@ -1,0 +1,3 @@
+import { archiveRoute } from "../../../_lib/library-routes";
+
+export const POST = archiveRoute("rigs", false);

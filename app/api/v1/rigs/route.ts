@@ -1,0 +1,5 @@
+import { collectionRoutes } from "../_lib/library-routes";
+
+const routes = collectionRoutes("rigs");
+export const GET = routes.GET;
+export const POST = routes.POST;

@@ -1,0 +1,155 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { and, asc, eq } from "drizzle-orm";
+import { ApiError } from "@/app/api/_lib/respond";
+import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/app/api/v1/jobs/_lib/schemas";
+import { AccessError, type Caller } from "./access";
+import { getDb } from "./client";
+import { jobFor } from "./jobs";
+import { SHOP_STAFF } from "./roles";
+import * as jobs from "./schema-jobs";
+import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNotConfigured } from "./storage";
+
+// Job photos in object storage. The browser asks for an upload URL, PUTs the file straight to storage,
+// then asks the server to check it: the type is read from the file's first bytes, never trusted from the
+// name or the header, and the size from storage itself. A refused file is deleted and says why.
+
+type PhotoType = (typeof PHOTO_TYPES)[number];
+
+/** The image type a file's first bytes show, or null. JPEG FF D8 FF; PNG 89 50 4E 47 0D 0A 1A 0A; WebP "RIFF"…"WEBP". */
+export function sniffImageType(head: Uint8Array): PhotoType | null {
+  const b = (i: number) => head[i];
+  if (head.length >= 3 && b(0) === 0xff && b(1) === 0xd8 && b(2) === 0xff) return "image/jpeg";
+  if (head.length >= 8 && [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a].every((v, i) => b(i) === v)) return "image/png";
+  const ascii = (from: number, to: number) => String.fromCharCode(...head.slice(from, to));
+  if (head.length >= 12 && ascii(0, 4) === "RIFF" && ascii(8, 12) === "WEBP") return "image/webp";
+  return null;
+}
+
+export type PhotoView = {
+  id: string;
+  caption: string;
+  kind: string;
+  shared: boolean;
+  state: "pending" | "ready" | "refused";
+  refusedReason: string | null;
+  contentType: string;
+  sizeBytes: number;
+  createdAt: string;
+  url: string | null;
+};
+
+const staff = (c: Caller) => SHOP_STAFF.includes(c.role);
+
+function storageError(error: unknown): never {
+  if (error instanceof StorageNotConfigured) throw new ApiError(503, "storage_unavailable", error.message);
+  throw error;
+}
+
+async function photoView(p: jobs.JobPhotoRecord): Promise<PhotoView> {
+  let url: string | null = null;
+  if (p.state === "ready") url = await presignDownload(p.objectKey).catch(storageError);
+  return {
+    id: p.id,
+    caption: p.caption,
+    kind: p.kind,
+    shared: p.shared,
+    state: p.state as PhotoView["state"],
+    refusedReason: p.refusedReason,
+    contentType: p.contentType,
+    sizeBytes: p.sizeBytes,
+    createdAt: p.createdAt.toISOString(),
+    url,
+  };
+}
+
+/** The job's photos: every checked one for staff (with those refused), only shared ones for its customer. */
+export async function listPhotos(caller: Caller, jobId: string): Promise<PhotoView[]> {
+  await jobFor(caller, jobId);
+  const db = await getDb();
+  const where = staff(caller)
+    ? and(eq(jobs.jobPhoto.jobId, jobId), eq(jobs.jobPhoto.organizationId, caller.shopId))
+    : and(eq(jobs.jobPhoto.jobId, jobId), eq(jobs.jobPhoto.organizationId, caller.shopId), eq(jobs.jobPhoto.shared, true), eq(jobs.jobPhoto.state, "ready"));
+  const rows = await db.select().from(jobs.jobPhoto).where(where).orderBy(asc(jobs.jobPhoto.createdAt));
+  return Promise.all(rows.filter((r) => staff(caller) ? r.state !== "pending" : true).map(photoView));
+}
+
+/** Starts an upload: records the photo as pending and returns a presigned PUT bound to the declared type and size. */
+export async function requestUpload(
+  caller: Caller,
+  jobId: string,
+  body: { contentType: PhotoType; sizeBytes: number; caption?: string; kind?: string; shared?: boolean },
+) {
+  if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
+  await jobFor(caller, jobId);
+  const id = randomUUID();
+  const ext = body.contentType === "image/jpeg" ? "jpg" : body.contentType === "image/png" ? "png" : "webp";
+  const objectKey = `shops/${caller.shopId}/jobs/${jobId}/${id}.${ext}`;
+  const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
+  const db = await getDb();
+  await db.insert(jobs.jobPhoto).values({
+    id,
+    jobId,
+    organizationId: caller.shopId,
+    objectKey,
+    contentType: body.contentType,
+    sizeBytes: body.sizeBytes,
+    caption: body.caption ?? "",
+    kind: body.kind ?? "other",
+    shared: body.shared ?? false,
+    state: "pending",
+    createdBy: caller.userId,
+  });
+  return { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } };
+}
+
+async function photoOr404(caller: Caller, jobId: string, photoId: string) {
+  await jobFor(caller, jobId);
+  const db = await getDb();
+  const [p] = await db
+    .select()
+    .from(jobs.jobPhoto)
+    .where(and(eq(jobs.jobPhoto.id, photoId), eq(jobs.jobPhoto.jobId, jobId), eq(jobs.jobPhoto.organizationId, caller.shopId)))
+    .limit(1);
+  if (!p || (!staff(caller) && !(p.shared && p.state === "ready"))) throw new AccessError("not_found", "No photo with this id on this job.");
+  return p;
+}
+
+/** Checks an uploaded file: its bytes must be an accepted image type and its size within the limit; else it is deleted and refused. */
+export async function completeUpload(caller: Caller, jobId: string, photoId: string): Promise<PhotoView> {
+  if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
+  const p = await photoOr404(caller, jobId, photoId);
+  if (p.state !== "pending") return photoView(p);
+  const found = await inspectObject(p.objectKey).catch(storageError);
+  if (!found) throw new ApiError(409, "not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
+  let reason: string | null = null;
+  const sniffed = sniffImageType(found.head);
+  if (found.sizeBytes > MAX_PHOTO_BYTES) reason = `The file is ${(found.sizeBytes / 1024 / 1024).toFixed(1)} MB; photos are limited to ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`;
+  else if (!sniffed) reason = "The file is not a JPEG, PNG or WebP image (its contents say otherwise, whatever its name).";
+  else if (sniffed !== p.contentType) reason = `The file is a ${sniffed.slice(6).toUpperCase()} image but was declared as ${p.contentType.slice(6).toUpperCase()}; choose the file again.`;
+  const db = await getDb();
+  if (reason) {
+    await deleteObject(p.objectKey).catch(() => undefined);
+    await db.update(jobs.jobPhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
+    throw new ApiError(422, "photo_refused", reason);
+  }
+  await db.update(jobs.jobPhoto).set({ state: "ready", sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
+  return photoView({ ...p, state: "ready", sizeBytes: found.sizeBytes });
+}
+
+/** Marks a photo shared with the customer or not, or changes its caption. */
+export async function updatePhoto(caller: Caller, jobId: string, photoId: string, patch: { shared?: boolean; caption?: string }): Promise<PhotoView> {
+  if (!staff(caller)) throw new AccessError("forbidden", "Only the shop changes a job's photos.");
+  const p = await photoOr404(caller, jobId, photoId);
+  const db = await getDb();
+  const set = { ...(patch.shared !== undefined ? { shared: patch.shared } : {}), ...(patch.caption !== undefined ? { caption: patch.caption } : {}) };
+  if (Object.keys(set).length) await db.update(jobs.jobPhoto).set(set).where(eq(jobs.jobPhoto.id, p.id));
+  return photoView({ ...p, ...set });
+}
+
+/** A fresh download URL for one photo the caller may see. */
+export async function photoDownload(caller: Caller, jobId: string, photoId: string): Promise<string> {
+  const p = await photoOr404(caller, jobId, photoId);
+  if (p.state !== "ready") throw new AccessError("not_found", "No photo with this id on this job.");
+  return presignDownload(p.objectKey).catch(storageError);
+}

@@ -1,0 +1,94 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import type { z } from "zod";
+import { AccessError, type Caller } from "./access";
+import { getClient } from "./client";
+import { conflict } from "./errors";
+import { SHOP_STAFF } from "./roles";
+
+// Helpers shared by the library and the studies: who may work on them, ids, times and reading stamps.
+
+/** Throws 403 unless the caller works on the shop's data (owner or builder). */
+export function assertStaff(caller: Caller): void {
+  if (!SHOP_STAFF.includes(caller.role)) throw new AccessError("forbidden", "Your role in this shop does not allow this.");
+}
+
+/** The 404 for a row that does not exist or belongs to another shop: the two are not told apart. */
+export function notFound(what: string): AccessError {
+  return new AccessError("not_found", `No ${what} with this id in your shop.`);
+}
+
+export const newId = (): string => randomUUID();
+
+export const iso = (d: Date | number | null | undefined): string | null =>
+  d === null || d === undefined ? null : new Date(d).toISOString();
+
+/** A reading as stored: the value, and who took it when. */
+export type StoredReading = { valueMm: number; takenById: string; takenByName: string; takenAt: number };
+
+/** Reads a stored reading list, tolerating an empty or damaged column. */
+export function parseStoredReadings(json: string | null | undefined): StoredReading[] {
+  if (!json) return [];
+  try {
+    const v = JSON.parse(json) as unknown;
+    return Array.isArray(v) ? (v as StoredReading[]) : [];
+  } catch {
+    return [];
+  }
+}
+
+/**
+ * Stamps a list of values: a value that was already there keeps the stamp of whoever took it; a new value is
+ * stamped with the caller and now. Equal values pair off one to one, in order.
+ */
+export function stampReadings(values: readonly number[], previous: readonly StoredReading[], caller: Caller, now: number): StoredReading[] {
+  const pool = [...previous];
+  return values.map((valueMm) => {
+    const i = pool.findIndex((p) => Math.abs(p.valueMm - valueMm) < 1e-9);
+    if (i >= 0) return pool.splice(i, 1)[0];
+    return { valueMm, takenById: caller.userId, takenByName: caller.name, takenAt: now };
+  });
+}
+
+/** A stored reading as the API shows it. */
+export function readingOut(r: StoredReading) {
+  return { valueMm: r.valueMm, takenBy: { id: r.takenById, name: r.takenByName }, takenAt: new Date(r.takenAt).toISOString() };
+}
+
+/** Parses a JSON column the data layer itself wrote. */
+export function parseJson<T>(json: string | null | undefined): T | null {
+  if (json === null || json === undefined || json === "") return null;
+  return JSON.parse(json) as T;
+}
+
+/** Each failing field of a zod error by its dotted path ("kits.0.boreMm"), with the reason. */
+export function fieldsOf(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) fields[issue.path.map(String).join(".") || "(body)"] ??= issue.message;
+  return fields;
+}
+
+/** One SQL statement of a batch. */
+export type Stmt = { sql: string; args: (string | number | null)[] };
+
+/** Whether a database error is a constraint refusal (a foreign key, a unique index). */
+export function isConstraintError(error: unknown): boolean {
+  const e = error as { code?: string; message?: string; cause?: unknown } | null;
+  return /CONSTRAINT/i.test(`${e?.code ?? ""} ${e?.message ?? ""} ${String(e?.cause ?? "")}`);
+}
+
+/**
+ * Runs statements as one write transaction, all or nothing. A batch holds the connection only while its
+ * statements run, so other requests are never refused meanwhile (an interactive transaction would hold the
+ * file database's single connection across awaits).
+ */
+export async function runBatch(stmts: Stmt[]) {
+  const client = await getClient();
+  try {
+    return await client.batch(stmts, "write");
+  } catch (error) {
+    // A row the batch refers to was deleted between the check and the write: the foreign keys refused it.
+    if (isConstraintError(error)) throw conflict();
+    throw error;
+  }
+}

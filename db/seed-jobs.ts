@@ -1,0 +1,162 @@
+// The demo shop's invented jobs, one in every status, built on the demo library's first study. One job
+// carries after-cut readings that pass verification and one that fail; the demo customer has a shared
+// plan waiting for approval. Idempotent: each row has a fixed id and is written only when missing.
+import { eq, inArray } from "drizzle-orm";
+import type { drizzle } from "drizzle-orm/libsql";
+import { StudySchema, evaluateStudy, type Study } from "../geometry";
+import type { PlanSnapshot } from "./jobs";
+import * as schema from "./schema";
+import * as jobs from "./schema-jobs";
+import { DEMO_CASES, DEMO_KITS, DEMO_RIGS, DEMO_STUDIES } from "./seed-library";
+import { planFromResult, verifyCut, type AfterCutReadings } from "./verification";
+
+type SeedDb = ReturnType<typeof drizzle<typeof schema>>;
+type Person = { id: string; name: string; email: string };
+
+/**
+ * The demo study as the core reads it, from the seed's own data (the data layer assembles the same from
+ * the rows; for a round mouth with readings, the smallest reading is the mouth diameter, as there).
+ */
+export function demoStudy(studyId = DEMO_STUDIES[0].id): { study: Study; name: string; chosenKitId: string } {
+  const s = DEMO_STUDIES.find((x) => x.id === studyId);
+  if (!s) throw new Error(`no demo study ${studyId}`);
+  const c = DEMO_CASES.find((x) => x.id === s.caseId)!;
+  const data = structuredClone(c.data) as Record<string, unknown> & { mouth: { outline: { kind: string; diameterMm?: number } } };
+  if (data.mouth.outline.kind === "circle" && c.mouthReadingsMm.length) data.mouth.outline.diameterMm = Math.min(...c.mouthReadingsMm);
+  const rig = s.rigId ? DEMO_RIGS.find((r) => r.id === s.rigId) : undefined;
+  const study = StudySchema.parse({
+    name: s.name,
+    case: { ...data, name: c.name },
+    kits: s.kitIds.map((id) => {
+      const k = DEMO_KITS.find((x) => x.id === id)!;
+      return { ...k.data, id: k.id, name: k.name };
+    }),
+    ...(rig ? { rig: { ...rig.data, name: rig.name } } : {}),
+    ...(s.cut ? { cut: s.cut } : {}),
+    ...(s.readings ? { readings: s.readings } : {}),
+    ...(s.limits ? { limits: s.limits } : {}),
+  });
+  return { study, name: s.name, chosenKitId: s.chosenKitId ?? s.kitIds[0] };
+}
+
+const STATUSES = ["intake", "planned", "approved", "machined", "verified", "closed"] as const;
+
+/** Inserts the demo jobs where missing; returns how many jobs it wrote. Needs the demo library in place. */
+export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Person; builder: Person; customer: Person }): Promise<number> {
+  const { study, name: studyName, chosenKitId } = demoStudy();
+  const result = evaluateStudy(study);
+  const kit = result.kits.find((k) => k.kitId === chosenKitId)!;
+  const at = (day: number, hour = 9) => new Date(Date.UTC(2026, 1, day, hour, 0));
+  const plan: PlanSnapshot = { studyId: DEMO_STUDIES[0].id, studyName, kitId: kit.kitId, kitName: kit.name, study, result, takenAt: at(2).toISOString() };
+  const vplan = planFromResult(result, kit.kitId);
+  const thinnestGasket = Math.min(...(study.kits.find((k) => k.id === kit.kitId)?.baseGasketsMm ?? [0]));
+  const passing: AfterCutReadings = {
+    cutDiameterMm: [vplan.cutDiameterMm, vplan.cutDiameterMm + 0.02, vplan.cutDiameterMm - 0.01].map((v) => Math.round(v * 100) / 100),
+    cutDepthMm: [vplan.cutDepthMm + 0.01, vplan.cutDepthMm + 0.02].map((v) => Math.round(v * 100) / 100),
+    sealingLandMm: vplan.studs.map((s) => ({ stud: s.label, valueMm: Math.round((s.plannedMm - 0.05) * 100) / 100 })),
+    gasketStackMm: thinnestGasket,
+    chipsCleaned: true,
+    trialFit: "goes-home",
+  };
+  const failing: AfterCutReadings = { ...passing, cutDiameterMm: passing.cutDiameterMm.map((v) => Math.round((v - 0.25) * 100) / 100), trialFit: "binds" };
+  const pass = verifyCut(vplan, passing);
+  const fail = verifyCut(vplan, failing);
+  if (pass.verdict !== "pass" || fail.verdict !== "fail") throw new Error(`demo readings did not verify as meant (${pass.verdict}, ${fail.verdict})`);
+
+  const contacts = [
+    { name: "Osric Penhallow", email: "osric.penhallow@example.test", userId: null },
+    { name: people.customer.name, email: people.customer.email, userId: people.customer.id },
+    { name: people.customer.name, email: people.customer.email, userId: people.customer.id },
+    { name: "Maud Treverrow", email: "maud.treverrow@example.test", userId: null },
+    { name: "Jory Quennell", email: "jory.quennell@example.test", userId: null },
+    { name: "Tamsin Allory", email: "tamsin.allory@example.test", userId: null },
+  ];
+  const titles = [
+    "Marlet 50 walk-in, still to be measured",
+    "Marlet 50 daily rider, 47 mm conversion",
+    "Marlet 50 weekend scooter, 47 mm conversion",
+    "Marlet 50 delivery scooter, 47 mm conversion",
+    "Marlet 50 restoration, 47 mm conversion",
+    "Marlet 50 club racer, 47 mm conversion",
+  ];
+  const ids = STATUSES.map((s) => `demo-job-${s}`);
+  let written = 0;
+  await db.transaction(async (tx) => {
+    const have = new Set((await tx.select({ id: jobs.job.id }).from(jobs.job).where(inArray(jobs.job.id, ids))).map((r) => r.id));
+    const study0 = await tx.select({ id: schema.study.id }).from(schema.study).where(eq(schema.study.id, DEMO_STUDIES[0].id));
+    if (study0.length === 0) throw new Error("seed the demo library first (db/seed-library.ts)");
+    for (const [i, status] of STATUSES.entries()) {
+      const id = ids[i];
+      if (have.has(id)) continue;
+      const c = contacts[i];
+      const planned = i >= 1;
+      const approved = i >= 2;
+      const event = (n: number, kind: string, summary: string, by: Person | null, move?: [string, string]) => ({
+        id: `${id}-e${n}`,
+        jobId: id,
+        at: at(1 + n, 10 + i),
+        byId: by?.id ?? null,
+        byName: by?.name ?? "payment service",
+        kind,
+        fromStatus: move?.[0] ?? null,
+        toStatus: move?.[1] ?? null,
+        summary,
+      });
+      await tx.insert(jobs.job).values({
+        id,
+        organizationId: shopId,
+        reference: `J-${String(i + 1).padStart(4, "0")}`,
+        title: titles[i],
+        customerUserId: c.userId,
+        customerName: c.name,
+        customerEmail: c.email,
+        engineNumber: `MR50-${4410 + i}`,
+        caseNumber: `C-${7700 + i * 13}`,
+        caseVariant: "four-stud, round mouth",
+        studyId: planned ? plan.studyId : null,
+        kitId: planned ? plan.kitId : null,
+        planJson: planned ? JSON.stringify(plan) : null,
+        status,
+        depositAmount: 5000,
+        currency: "eur",
+        paidAt: approved ? at(4, 12) : null,
+        sharedAt: planned ? at(3) : null,
+        approvedAt: approved ? at(4) : null,
+        approvedById: approved ? (i === 2 ? people.customer.id : people.owner.id) : null,
+        approvedByName: approved ? (i === 2 ? people.customer.name : people.owner.name) : null,
+        approvalReason: approved && i !== 2 ? "approved by phone" : null,
+        createdAt: at(1),
+        updatedAt: at(6 + i),
+        createdBy: people.builder.id,
+      });
+      const events = [event(0, "created", `opened the job for ${c.name}`, people.builder)];
+      if (planned) events.push(event(1, "status", `planned with ${kit.name} from the study "${studyName}"`, people.builder, ["intake", "planned"]));
+      if (planned) events.push(event(2, "share", `shared the plan with ${c.name}`, people.builder));
+      if (approved) {
+        events.push(event(3, "status", i === 2 ? "approved the plan" : "approved the plan for the customer: approved by phone", i === 2 ? people.customer : people.owner, ["planned", "approved"]));
+        events.push(event(4, "payment", "deposit paid: 50.00 EUR", null));
+      }
+      if (i >= 3) events.push(event(5, "status", "moved the job from approved to machined", people.builder, ["approved", "machined"]));
+      if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the skirt, trial fit)", people.builder));
+      if (i >= 4) {
+        events.push(event(6, "readings", "recorded after-cut readings: within the plan", people.builder));
+        events.push(event(7, "status", "moved the job from machined to verified", people.builder, ["machined", "verified"]));
+      }
+      if (i === 5) events.push(event(8, "status", "moved the job from verified to closed", people.owner, ["verified", "closed"]));
+      await tx.insert(jobs.jobEvent).values(events);
+      if (approved) {
+        await tx.insert(jobs.jobPayment).values({ id: `${id}-deposit`, jobId: id, checkoutSessionId: `cs_demo_${id}`, amount: 5000, currency: "eur", status: "paid", createdAt: at(4, 11), createdById: c.userId ?? people.owner.id, paidAt: at(4, 12) });
+      }
+      if (i >= 3) {
+        const r = i === 3 ? failing : passing;
+        const v = i === 3 ? fail : pass;
+        await tx.insert(jobs.jobReading).values({ id: `${id}-readings`, jobId: id, readingsJson: JSON.stringify(r), verificationJson: JSON.stringify(v), verdict: v.verdict, takenAt: at(7, 15), takenById: people.builder.id, takenByName: people.builder.name });
+      }
+      if (i === 1) {
+        await tx.insert(jobs.jobQuestion).values({ id: `${id}-q1`, jobId: id, at: at(3, 18), byId: people.customer.id, byName: people.customer.name, text: "Does the bigger kit change what licence I need for the scooter?" });
+      }
+      written++;
+    }
+  });
+  return written;
+}

@@ -1,0 +1,147 @@
+// The content of a job's bench setup card, built once from the plan snapshot so the printable page and
+// the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
+import { formatLength, type LengthUnits } from "@/geometry";
+import type { PlanSnapshot } from "./jobs";
+
+export type CardLine = { label: string; value: string; warn?: boolean };
+export type SetupCard = {
+  title: string;
+  reference: string;
+  shopName: string;
+  header: CardLine[];
+  plan: CardLine[];
+  rig: CardLine[] | null;
+  rigMissing: string | null;
+  checks: string[];
+  cautions: string[];
+  blanks: { label: string; cells: number; cellLabels?: string[] }[];
+  warnings: string[];
+  kitIndex: number;
+};
+
+/** The cautions every card carries, in the order a builder meets them. */
+export const SETUP_CAUTIONS = [
+  "Wear eye protection while cutting; aluminium chips fly.",
+  "Clamp the case securely without crushing it: an over-tightened case can crack.",
+  "Stop during the cut to check that the bit and every fastener are still tight.",
+  "Remove every chip from the crankcase before assembly: flush, blow out and look again.",
+  "A change of displacement can change the vehicle's legal class; local rules decide.",
+  "Follow the kit maker's instructions; when in doubt, defer to a qualified machinist.",
+];
+
+type JobLike = {
+  reference: string;
+  title: string;
+  customer: { name: string };
+  engineNumber: string;
+  caseNumber: string;
+  caseVariant: string;
+};
+
+/** Builds the card for one job from its plan. */
+export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: string, units: LengthUnits, printedAt = new Date()): SetupCard {
+  const L = (mm: number) => formatLength(mm, units);
+  const kitIndex = Math.max(0, plan.result.kits.findIndex((k) => k.kitId === plan.kitId));
+  const k = plan.result.kits[kitIndex];
+  const cut = k.cut;
+  const header: CardLine[] = [
+    { label: "Job", value: `${job.reference} — ${job.title}` },
+    { label: "Customer", value: job.customer.name },
+    { label: "Engine no.", value: job.engineNumber || "—" },
+    { label: "Case no.", value: job.caseNumber || "—" },
+    { label: "Case variant", value: job.caseVariant || plan.study.case.name },
+    { label: "Kit", value: k.name },
+    { label: "Study", value: `${plan.studyName} (plan taken ${plan.takenAt.slice(0, 10)})` },
+    { label: "Printed", value: printedAt.toISOString().slice(0, 16).replace("T", " ") },
+  ];
+  const planLines: CardLine[] = cut
+    ? [
+        { label: "Cut diameter", value: L(cut.diameterMm) },
+        { label: "Cut depth (below the deck)", value: L(cut.depthMm) },
+        { label: "Skirt diameter (largest reading)", value: L(k.skirt.diameterMm) },
+        { label: "Skirt protrusion", value: L(k.skirt.protrusionMm) },
+        { label: "Radial clearance to the cut", value: k.radialClearanceMm.vsCut === null ? "—" : L(k.radialClearanceMm.vsCut) },
+        { label: "Depth clearance", value: k.depthClearanceMm === null ? (cut.throughMouth ? "no step (cut opens into the crankcase)" : "—") : L(k.depthClearanceMm) },
+        {
+          label: "Thinnest wall",
+          value: k.thinnestWall ? `${L(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}` : "—",
+          warn: k.thinnestWall ? !k.thinnestWall.ok : false,
+        },
+        { label: "Displacement", value: `${k.displacementCc.stockRounded} cc → ${k.displacementCc.kitRounded} cc` },
+      ]
+    : [{ label: "Cut", value: "This kit needs no cut.", warn: false }];
+  let rig: CardLine[] | null = null;
+  let rigMissing: string | null = null;
+  if (k.rig) {
+    const r = k.rig;
+    const shims = r.depthStop.shims.length ? r.depthStop.shims.map((s) => `${s.count} × ${L(s.thicknessMm)}`).join(" + ") : "no shims";
+    rig = [
+      { label: "Cutter setting (caliper across head and bit)", value: L(r.cutterSettingMm) },
+      {
+        label: "Bit length",
+        value: r.bitReaches
+          ? `${L(r.bitLengthMm)} — reaches (${L(r.bitReachMm.min)} to ${L(r.bitReachMm.max)})`
+          : r.grindOffMm > 0
+            ? `${L(r.bitLengthMm)} — too long: grind off ${L(r.grindOffMm)}`
+            : `${L(r.bitLengthMm)} — too short by ${L(r.bitTooShortByMm)}`,
+        warn: !r.bitReaches,
+      },
+      {
+        label: "Depth stop",
+        value: r.depthStop.reached
+          ? `ring in ${r.depthStop.groove}, ${shims} (stack ${L(r.depthStop.shimStackMm)}); stops at ${L(r.depthStop.travelMm)}`
+          : `cannot reach ${L(r.depthStop.wantedMm)} with the grooves and shims at hand`,
+        warn: !r.depthStop.reached,
+      },
+      {
+        label: "Spindle speed",
+        value: `${Math.round(r.spindleRpm.min)}–${Math.round(Math.min(r.spindleRpm.max, r.spindleRpm.drillTopRpm))} rpm (drill top ${Math.round(r.spindleRpm.drillTopRpm)} rpm)`,
+        warn: r.spindleRpm.drillTooSlow,
+      },
+      {
+        label: "Rotating hardware",
+        value: r.hardwareClears === null ? "not given" : r.hardwareClears ? `clears by ${L(r.hardwareClearanceMm ?? 0)}` : `strikes: ${L(-(r.hardwareClearanceMm ?? 0))} too far out`,
+        warn: r.hardwareClears === false,
+      },
+    ];
+  } else {
+    rigMissing = "No boring rig in the study: add one to get the cutter setting, the depth stop and the speed.";
+  }
+  const studs = plan.study.case.studs.map((s) => s.label);
+  const heights = plan.study.readings?.holderHeights ?? [];
+  const align = k.alignment;
+  const maxRock = plan.result.limits.values.maxRockMm;
+  const checks = [
+    `Studs and spacers even: the same spacer stack on every stud (${studs.join(", ")}).`,
+    heights.length
+      ? `Holder heights read at each stud and within tolerance (planned: ${heights.map((h) => `${h.stud} ${L(h.heightMm + h.straightedgeMm)}`).join(", ")}${align ? `; tilt ${align.tiltDeg.toFixed(3)}°, rocking ${L(align.rockMm)} of ${L(maxRock)} allowed` : ""}).`
+      : `Holder heights read at each stud and within tolerance (rocking at most ${L(maxRock)}).`,
+    "Bit orientation: cutting edge leading in the direction of rotation; bit tight in the head.",
+    k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",
+    k.rig?.depthStop.reached
+      ? `Depth stop confirmed with the bit resting on the deck: ring in ${k.rig.depthStop.groove}, stack ${L(k.rig.depthStop.shimStackMm)}.`
+      : "Depth stop confirmed with the bit resting on the deck.",
+    "Light feed, drill at the speed above; stop at the ring and let the cutter dwell before withdrawing.",
+  ];
+  const blanks = [
+    { label: `Cut diameter readings (${units})`, cells: 3 },
+    { label: `Cut depth readings (${units})`, cells: 3 },
+    { label: `Sealing land at each stud (${units})`, cells: studs.length, cellLabels: studs },
+    { label: `Gasket stack used (${units})`, cells: 1 },
+    { label: "Crankcase cleaned of chips ☐   Trial fit: goes fully home ☐ / binds ☐", cells: 0 },
+  ];
+  return {
+    title: `Setup card — ${job.reference}`,
+    reference: job.reference,
+    shopName,
+    header,
+    plan: planLines,
+    rig,
+    rigMissing,
+    checks,
+    cautions: SETUP_CAUTIONS,
+    blanks,
+    warnings: k.warnings.map((w) => w.message),
+    kitIndex,
+  };
+}

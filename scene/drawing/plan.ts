@@ -1,0 +1,93 @@
+import type { LengthUnits, Study, StudyResult, Vec2 } from "@/geometry";
+import { fitState, interferenceRegions } from "../fit";
+import { diameterText, lengthText } from "../format";
+import { bounds, outlineRing } from "../outline";
+import { INK, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
+
+// Plan view at the deck, to scale (1 unit = 1 mm, y up as in the core's frame), drawn from the core's result.
+
+export const STATE_COLOR = { interfere: INK.interfere, tight: INK.tight, clear: INK.clear } as const;
+
+const flip = (p: Vec2): Vec2 => [p[0], -p[1]];
+const path = (ring: readonly Vec2[]) => ringPath(ring.map(flip));
+
+/** The plan drawing of one kit of a study: deck, mouth, pockets, stud holes, the planned cut, the skirt, the interference at the deck and the thinnest wall, dimensioned. */
+export function planDrawing(study: Study, result: StudyResult, kitIndex: number, units: LengthUnits): Drawing {
+  const cs = study.case;
+  const k = result.kits[kitIndex];
+  const state = fitState(k, result);
+  const color = STATE_COLOR[state];
+  const deck = outlineRing(cs.deck);
+  const b = bounds([deck]);
+  const fs = Math.max(2.6, (b.maxX - b.minX) / 34);
+  const w0 = result.kits[kitIndex].thinnestWall;
+  const longest = [`thinnest wall ${lengthText(w0?.minWallMm ?? 0, units)}`, w0?.label ?? "", `skirt ${diameterText(k.skirt.diameterMm, units)}`, "mouth (outline as profiled)"];
+  const margin = Math.max(...longest.map((t) => textWidth(t, fs))) + fs * 4;
+  const minX = b.minX - margin, maxX = b.maxX + margin;
+  const minY = -b.maxY - fs * 7, maxY = -b.minY + fs * (8 + cs.studs.length * 1.3);
+  const body: string[] = [];
+  const outerX = (right: boolean) => (right ? b.maxX + fs * 2 : b.minX - fs * 2);
+
+  body.push(el("path", { d: path(deck), fill: INK.paper2, stroke: INK.ink, "stroke-width": 0.4 }));
+  for (const p of cs.pockets) body.push(el("path", { d: path(outlineRing(p.outline)), fill: INK.paper, stroke: INK.ink2, "stroke-width": 0.25, "stroke-dasharray": p.startDepthMm > 0 ? "1.2 0.8" : undefined }));
+  body.push(el("path", { d: path(outlineRing(cs.mouth.outline)), fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3 }));
+  const hole = cs.studHoleDiameterMm / 2;
+  for (const s of cs.studs) {
+    const [x, y] = flip(s.positionMm);
+    body.push(el("circle", { cx: x, cy: y, r: hole, fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3 }));
+    body.push(el("path", { d: `M${x - hole - 1} ${y}H${x + hole + 1}M${x} ${y - hole - 1}V${y + hole + 1}`, stroke: INK.ink3, "stroke-width": 0.15 }));
+  }
+  const band = interferenceRegions(study, k)[0];
+  if (band && band.z0 === 0) for (const r of band.regions) body.push(el("path", { d: path(r.outer) + r.holes.map(path).join(""), fill: INK.interfere, "fill-opacity": 0.55, "fill-rule": "evenodd" }));
+
+  const sc = flip(k.skirt.centerMm);
+  const sr = k.skirt.diameterMm / 2;
+  if (k.cut) {
+    const cc = flip(k.cut.centerAtDeckMm);
+    body.push(el("circle", { cx: cc[0], cy: cc[1], r: k.cut.diameterMm / 2, fill: INK.accent, "fill-opacity": 0.08, stroke: INK.accent, "stroke-width": 0.35, "stroke-dasharray": "2 1" }));
+  }
+  body.push(el("circle", { cx: sc[0], cy: sc[1], r: sr, fill: "none", stroke: color, "stroke-width": 0.5 }));
+  body.push(el("path", { d: `M${sc[0] - 4} ${sc[1]}H${sc[0] + 4}M${sc[0]} ${sc[1] - 4}V${sc[1] + 4}`, stroke: INK.ink2, "stroke-width": 0.15 }));
+
+  const at = (r: number, deg: number, c: Vec2 = sc): Vec2 => [c[0] + r * Math.cos((deg * Math.PI) / 180), c[1] - r * Math.sin((deg * Math.PI) / 180)];
+  const lead = (r: number, deg: number, label: string, col: string, row: number) => {
+    const from = at(r, deg);
+    const right = Math.cos((deg * Math.PI) / 180) >= 0;
+    const up = Math.sin((deg * Math.PI) / 180) >= 0;
+    const y = (up ? -b.maxY + fs * 1.6 * row : -b.minY - fs * 1.6 * row);
+    body.push(leader(from, [outerX(right), y], label, fs, col));
+  };
+  if (k.cut) lead(k.cut.diameterMm / 2, 68, `cut ${diameterText(k.cut.diameterMm, units)}`, INK.accent, 1);
+  lead(sr, 112, `skirt ${diameterText(k.skirt.diameterMm, units)}`, color, 1);
+  if (cs.mouth.outline.kind === "circle") lead(cs.mouth.outline.diameterMm / 2, 250, `mouth ${diameterText(cs.mouth.outline.diameterMm, units)}`, INK.ink, 1);
+  else lead(0, 250, "mouth (outline as profiled)", INK.ink, 1);
+
+  const w = k.thinnestWall;
+  if (w && k.cut) {
+    const p = flip(w.cutPointMm), q = flip(w.atMm);
+    const wc = w.ok ? INK.ink : INK.interfere;
+    body.push(el("line", { x1: p[0], y1: p[1], x2: q[0], y2: q[1], stroke: wc, "stroke-width": 0.6 }));
+    const right = q[0] >= sc[0];
+    const to: [number, number] = [outerX(right), -b.minY + fs * 2.2];
+    body.push(leader(q, to, `thinnest wall ${lengthText(w.minWallMm, units)}`, fs, wc));
+    body.push(text(to[0] + (right ? 0.5 : -0.5), to[1] + fs * 1.1, w.label, fs * 0.9, { "text-anchor": right ? "start" : "end", fill: wc }));
+  }
+
+  const xs = cs.studs.map((s) => s.positionMm[0]), ys = cs.studs.map((s) => s.positionMm[1]);
+  const sx0 = Math.min(...xs), sx1 = Math.max(...xs), sy0 = Math.min(...ys), sy1 = Math.max(...ys);
+  const topStud = cs.studs.reduce((m, s) => (s.positionMm[1] > m.positionMm[1] ? s : m));
+  const stY = -topStud.positionMm[1];
+  if (sx1 - sx0 > 1) body.push(hdim(sx0, sx1, -b.maxY - fs * 2, stY, stY, `studs ${lengthText(sx1 - sx0, units)}`, fs));
+  if (sy1 - sy0 > 1) body.push(vdim(b.maxX + fs * 2, -sy1, -sy0, sx1, lengthText(sy1 - sy0, units), fs));
+  let ty = -b.minY + fs * 6.2;
+  body.push(text(minX + fs, ty, `Plan at the deck — ${k.name}`, fs * 1.1, { "font-weight": 600 }));
+  ty += fs * 1.5;
+  body.push(text(minX + fs, ty, `Stud centres from the cylinder axis (x right, y up):`, fs * 0.9, { fill: INK.ink2 }));
+  for (const s of cs.studs) {
+    ty += fs * 1.3;
+    body.push(text(minX + fs * 2, ty, `${s.label}: x ${lengthText(s.positionMm[0], units)}, y ${lengthText(s.positionMm[1], units)}`, fs * 0.9, { class: "num" }));
+  }
+  body.push(text(maxX - fs, -b.maxY - fs * 5.5, "1:1 when printed at 100 %", fs * 0.85, { "text-anchor": "end", fill: INK.ink2 }));
+  return sheet(`Plan at the deck: ${k.name}`, minX, minY, maxX - minX, maxY - minY, body.join(""));
+}
+

@@ -1,0 +1,96 @@
+import type { CylinderKit, LengthUnits, Study, StudyResult } from "@/geometry";
+import { FLANGE_DRAWN_MM, fitState, flangeRadiusMm, interferenceRegions } from "../fit";
+import { diameterText, lengthText, signedLengthText } from "../format";
+import { circleRing, intersectIntervals, lineIntervals, outlineRing, subtractIntervals } from "../outline";
+import { STATE_COLOR } from "./plan";
+import { INK, type Drawing, el, hdim, vdim, textWidth, sheet, text } from "./svg";
+
+// Section through the cylinder axis along x (the plane y = skirt centre), to scale: x to the right,
+// depth below the deck downward. Case material hatched, the planned cut tinted, skirt and flange above.
+
+type Iv = [number, number][];
+
+/** Options of sectionDrawing. */
+export interface SectionOptions {
+  /** A small drawing without dimension lines, for side-by-side kits. */
+  readonly compact?: boolean;
+}
+
+/** The section drawing of one kit of a study, dimensioned (cut diameter and depth, mouth, skirt, protrusion, depth clearance). */
+export function sectionDrawing(study: Study, result: StudyResult, kitIndex: number, units: LengthUnits, options: SectionOptions = {}): Drawing {
+  const cs = study.case;
+  const k = result.kits[kitIndex];
+  const kit: CylinderKit = study.kits[kitIndex];
+  const color = STATE_COLOR[fitState(k, result)];
+  const y0 = k.skirt.centerMm[1];
+  const cx = k.skirt.centerMm[0];
+  const M = cs.mouth.depthMm;
+  const deckIv = lineIntervals(outlineRing(cs.deck), y0);
+  const x0 = Math.min(...deckIv.map((i) => i[0])), x1 = Math.max(...deckIv.map((i) => i[1]));
+  const fs = options.compact ? Math.max(3.4, (x1 - x0) / 20) : Math.max(2.6, (x1 - x0) / 34);
+  const body: string[] = [];
+  const rect = (a: number, b: number, z0: number, z1: number, attrs: Record<string, string | number>) =>
+    el("rect", { x: a, y: z0, width: b - a, height: z1 - z0, ...attrs });
+
+  const levels = [...new Set([0, ...cs.pockets.map((p) => p.startDepthMm).filter((z) => z > 0 && z < M), M])].sort((a, b) => a - b);
+  const voidsAt = (z: number): Iv => [
+    ...lineIntervals(outlineRing(cs.mouth.outline), y0),
+    ...cs.studs.flatMap((s) => lineIntervals(circleRing(s.positionMm, cs.studHoleDiameterMm / 2, 64), y0)),
+    ...cs.pockets.filter((p) => p.startDepthMm <= z + 1e-9).flatMap((p) => lineIntervals(outlineRing(p.outline), y0)),
+  ];
+  for (let i = 0; i + 1 < levels.length; i++) {
+    for (const [a, b] of subtractIntervals(deckIv, voidsAt(levels[i]))) {
+      body.push(rect(a, b, levels[i], levels[i + 1], { fill: "url(#hatch)", stroke: INK.ink, "stroke-width": 0.3 }));
+    }
+  }
+  body.push(el("line", { x1: x0 - 4, y1: M, x2: x1 + 4, y2: M, stroke: INK.ink3, "stroke-width": 0.15, "stroke-dasharray": "1 1" }));
+
+  if (k.cut) {
+    const ci = lineIntervals(circleRing(k.cut.centerAtDeckMm, k.cut.diameterMm / 2), y0);
+    for (const [a, b] of ci) body.push(rect(a, b, 0, k.cut.depthMm, { fill: INK.accent, "fill-opacity": 0.12, stroke: INK.accent, "stroke-width": 0.35, "stroke-dasharray": "2 1" }));
+  }
+  for (const band of interferenceRegions(study, k)) {
+    const iv: Iv = band.regions.flatMap((r) => subtractIntervals(lineIntervals(r.outer, y0), r.holes.flatMap((h) => lineIntervals(h, y0))));
+    for (const [a, b] of intersectIntervals(iv, [[x0, x1]])) body.push(rect(a, b, band.z0, band.z1, { fill: INK.interfere, "fill-opacity": 0.75 }));
+  }
+
+  const r = k.skirt.diameterMm / 2;
+  const inner = Math.min(kit.boreMm / 2, r - 0.5);
+  const P = k.skirt.protrusionMm;
+  const g = k.skirt.gasketMm;
+  const Rf = flangeRadiusMm(kit, k, cs.studHoleDiameterMm);
+  const top = -g - FLANGE_DRAWN_MM;
+  if (P > 0) for (const [a, b] of [[cx - r, cx - inner], [cx + inner, cx + r]]) body.push(rect(a, b, 0, P, { fill: color, "fill-opacity": 0.22, stroke: color, "stroke-width": 0.4 }));
+  for (const [a, b] of [[cx - Rf, cx - inner], [cx + inner, cx + Rf]]) body.push(rect(a, b, top, -g, { fill: INK.rule, stroke: INK.ink2, "stroke-width": 0.3 }));
+  if (g > 0) for (const [a, b] of [[cx - Rf, cx - r], [cx + r, cx + Rf]]) body.push(rect(a, b, -g, 0, { fill: INK.tight, "fill-opacity": 0.5 }));
+  body.push(el("line", { x1: cx, y1: top - 4, x2: cx, y2: M + 4, stroke: INK.ink3, "stroke-width": 0.18, "stroke-dasharray": "4 1 1 1" }));
+
+  const side = options.compact ? fs * 2 : Math.max(textWidth(`cut depth ${lengthText(M, units)}`, fs), textWidth(`skirt ${lengthText(M, units)} below deck`, fs)) + fs * 4;
+  const minX = x0 - side, maxX = x1 + side;
+  let bottomY = M + fs * 2;
+  if (!options.compact) {
+    if (k.cut) {
+      const R = k.cut.diameterMm / 2;
+      body.push(vdim(x1 + fs * 2, 0, k.cut.depthMm, cx + R, `cut depth ${lengthText(k.cut.depthMm, units)}`, fs, INK.accent));
+      body.push(hdim(cx - R, cx + R, M + fs * 2.5, k.cut.depthMm, k.cut.depthMm, `cut ${diameterText(k.cut.diameterMm, units)}`, fs, INK.accent));
+    }
+    if (cs.mouth.outline.kind === "circle") {
+      const R = cs.mouth.outline.diameterMm / 2;
+      body.push(hdim(cx - R, cx + R, M + fs * 5, M, M, `mouth ${diameterText(cs.mouth.outline.diameterMm, units)}`, fs));
+    }
+    if (P > 0) body.push(vdim(x0 - fs * 2, 0, P, cx - r, `skirt ${lengthText(P, units)} below deck`, fs, color));
+    body.push(hdim(cx - r, cx + r, top - fs * 2, top, top, `skirt ${diameterText(k.skirt.diameterMm, units)}`, fs, color));
+    bottomY = M + fs * 8;
+    const lines = [
+      `Section through the axis along x — ${k.name}`,
+      k.depthClearanceMm === null ? "depth: the cut leaves no step" : `depth clearance ${signedLengthText(k.depthClearanceMm, units)} (skirt bottom to the cut's shallowest point)`,
+      g > 0 ? `base gasket ${lengthText(g, units)} counted; flange drawn schematically` : "no base gasket counted; flange drawn schematically",
+    ];
+    lines.forEach((l, i) => body.push(text(minX + fs, bottomY + fs * 1.5 * i, l, i ? fs * 0.9 : fs * 1.1, { "font-weight": i ? 400 : 600, fill: i ? INK.ink2 : INK.ink })));
+    bottomY += fs * 4.5;
+  } else {
+    body.push(text(cx, M + fs * 1.6, k.name, fs, { "text-anchor": "middle", "font-weight": 600 }));
+  }
+  const minY = top - fs * (options.compact ? 2 : 6);
+  return sheet(`Section through the axis: ${k.name}`, minX, minY, maxX - minX, bottomY - minY, body.join(""));
+}

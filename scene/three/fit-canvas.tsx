@@ -1,0 +1,43 @@
+"use client";
+
+import { OrbitControls } from "@react-three/drei";
+import { Canvas } from "@react-three/fiber";
+import type { FitStore } from "../store";
+import { CameraRig, FrameRenderer, type FitCanvasApi } from "./frame";
+import { FitScene } from "./fit-scene";
+import { cameraPosition, type ViewState } from "./view";
+
+export type { FitCanvasApi } from "./frame";
+
+export interface FitCanvasProps {
+  readonly store: FitStore;
+  readonly view: ViewState;
+  readonly onReady?: (api: FitCanvasApi) => void;
+}
+
+const START = cameraPosition("three-quarter", 0).toArray();
+
+/** The 3D fit view: case, planned cut, skirt and flange, interference, drawn from the core's result in the store. */
+export default function FitCanvas({ store, view, onReady }: FitCanvasProps) {
+  return (
+    <Canvas
+      frameloop="demand"
+      dpr={[1, 1.5]}
+      gl={{ preserveDrawingBuffer: true, antialias: true }}
+      camera={{ fov: 30, near: 1, far: 4000, position: START }}
+      onCreated={({ gl }) => {
+        gl.localClippingEnabled = true;
+      }}
+      data-testid="fit-canvas"
+    >
+      <color attach="background" args={["#f1eee6"]} />
+      <hemisphereLight args={["#fffdf7", "#8a8577", 1.6]} />
+      <directionalLight position={[90, 160, 120]} intensity={1.6} />
+      <directionalLight position={[-140, 40, -90]} intensity={0.5} />
+      <FitScene store={store} view={view} />
+      <OrbitControls makeDefault enableDamping={false} />
+      <CameraRig view={view} />
+      <FrameRenderer store={store} onReady={onReady} />
+    </Canvas>
+  );
+}

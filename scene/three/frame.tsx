@@ -1,0 +1,82 @@
+"use client";
+
+import { useFrame, useThree } from "@react-three/fiber";
+import { useEffect, useRef } from "react";
+import type { FitStore } from "../store";
+import { TARGET, cameraPosition, type ViewState } from "./view";
+
+/** What the studio can ask of the canvas. */
+export interface FitCanvasApi {
+  /** A PNG data URL of the view as it is now. */
+  snapshot(): string;
+}
+
+declare global {
+  interface Window {
+    /** Input-to-frame times of the cut sliders, ms (read by the benchmark). */
+    __fitFrames?: number[];
+  }
+}
+
+/** Renders on demand, after the scene updated from the store, and records the time from the input to this frame. */
+export function FrameRenderer({ store, onReady }: { store: FitStore; onReady?: (api: FitCanvasApi) => void }) {
+  const gl = useThree((s) => s.gl);
+  const scene = useThree((s) => s.scene);
+  const camera = useThree((s) => s.camera);
+  const invalidate = useThree((s) => s.invalidate);
+  const advance = useThree((s) => s.advance);
+  const measured = useRef(0);
+
+  // A cut input is drawn at once, inside the input's own task, so the canvas is ready for the next
+  // composited frame; anything else waits for the next animation frame.
+  useEffect(
+    () =>
+      store.subscribe(() => {
+        const at = store.get().inputAt;
+        if (at > 0 && at !== measured.current) advance(performance.now());
+        else invalidate();
+      }),
+    [store, invalidate, advance],
+  );
+  useEffect(() => {
+    onReady?.({
+      snapshot: () => {
+        gl.render(scene, camera);
+        return gl.domElement.toDataURL("image/png");
+      },
+    });
+  }, [gl, scene, camera, onReady]);
+
+  useFrame(() => {
+    const t0 = performance.now();
+    gl.render(scene, camera);
+    performance.measure("studio:render", { start: t0, duration: performance.now() - t0 });
+    const at = store.get().inputAt;
+    if (at > 0 && at !== measured.current) {
+      measured.current = at;
+      const ms = performance.now() - at;
+      (window.__fitFrames ??= []).push(ms);
+      performance.measure("studio:input-to-frame", { start: at, duration: ms });
+      requestAnimationFrame(() => performance.measure("studio:input-to-animation-frame", { start: at, duration: performance.now() - at }));
+    }
+  }, 1);
+  return null;
+}
+
+/** Moves the camera to the chosen preset whenever the preset (or its nonce) changes. */
+export function CameraRig({ view }: { view: ViewState }) {
+  const camera = useThree((s) => s.camera);
+  const controls = useThree((s) => s.controls) as unknown as { target: { copy(v: unknown): void }; update(): void } | null;
+  const invalidate = useThree((s) => s.invalidate);
+  const angle = view.camera === "section" ? view.sectionAngleDeg : 0;
+  useEffect(() => {
+    cameraPosition(view.camera, angle, camera.position);
+    camera.lookAt(TARGET);
+    if (controls) {
+      controls.target.copy(TARGET);
+      controls.update();
+    }
+    invalidate();
+  }, [view.camera, view.cameraNonce, angle, camera, controls, invalidate]);
+  return null;
+}

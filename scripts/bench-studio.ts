@@ -1,0 +1,114 @@
+// Benchmark of the fit studio: opens /try with a study of five kits on a polygon case in headless
+// Chromium (WebGL on SwiftShader), steps the cut-diameter slider 100 times and prints the median and
+// p95 time from each input to the frame that shows it (performance.measure in the page), then the
+// first-load JavaScript of the studio page and of the Library page from the build's manifests.
+// Needs a production build in NEXT_DIST_DIR (default .next). Usage: npm run bench:studio
+import { existsSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { createRequire } from "node:module";
+import { gzipSync } from "node:zlib";
+import { chromium } from "playwright-core";
+import type { StudyInput } from "../geometry";
+import { freePort, root, startNext, waitFor } from "./lib.mjs";
+
+const dist = process.env.NEXT_DIST_DIR || ".next";
+const STEPS = 100;
+
+/** The example study made harder: a polygon deck and a twelve-sided mouth, five invented kits. */
+function benchStudy(): StudyInput {
+  const s = JSON.parse(readFileSync(join(root, "public/examples/study.json"), "utf8")) as StudyInput;
+  const mouth: [number, number][] = Array.from({ length: 12 }, (_, i) => [24 * Math.cos((i * Math.PI) / 6), 22 * Math.sin((i * Math.PI) / 6)]);
+  s.case.mouth = { outline: { kind: "polygon", pointsMm: mouth }, depthMm: 26 };
+  const base = s.kits[0];
+  s.kits = [47, 48, 49, 50, 52].map((bore, i) => ({
+    ...base,
+    id: `bench-${bore}`,
+    name: `Bench ${bore} mm kit`,
+    boreMm: bore,
+    skirtDiameterReadingsMm: [bore + 6.9, bore + 6.95],
+    skirtLengthReadingsMm: [24.6 + i * 0.4],
+  }));
+  s.name = "Bench study: five kits on a polygon case";
+  return s;
+}
+
+const quantile = (xs: number[], q: number) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))];
+};
+const fmt = (xs: number[]) => `median ${quantile(xs, 0.5).toFixed(2)} ms, p95 ${quantile(xs, 0.95).toFixed(2)} ms`;
+
+/** First-load JS of an app route: the root main files plus every entry chunk its client-reference manifest lists. */
+function firstLoad(route: string): { files: string[]; bytes: number; gzip: number; hasThree: boolean } | null {
+  const file = join(root, dist, "server/app", route, "page_client-reference-manifest.js");
+  if (!existsSync(file)) return null;
+  const g = globalThis as { __RSC_MANIFEST?: Record<string, { entryJSFiles: Record<string, string[]> }> };
+  createRequire(import.meta.url)(file);
+  const entry = Object.entries(g.__RSC_MANIFEST ?? {}).find(([k]) => k === `${route.replace(/^\/?/, "/")}/page`)?.[1];
+  if (!entry) return null;
+  const build = JSON.parse(readFileSync(join(root, dist, "build-manifest.json"), "utf8")) as { rootMainFiles: string[] };
+  const files = [...new Set([...build.rootMainFiles, ...Object.values(entry.entryJSFiles).flat()])];
+  let bytes = 0, gzip = 0, hasThree = false;
+  for (const f of files) {
+    const buf = readFileSync(join(root, dist, f));
+    bytes += buf.length;
+    gzip += gzipSync(buf).length;
+    if (buf.includes("WebGLRenderer")) hasThree = true;
+  }
+  return { files, bytes, gzip, hasThree };
+}
+
+async function main() {
+  if (!existsSync(join(root, dist, "BUILD_ID"))) throw new Error(`no production build in ${dist}: run NEXT_DIST_DIR=${dist} npx next build first`);
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const server = startNext({ port, quiet: true, env: { BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: process.env.BETTER_AUTH_SECRET || "bench-only-secret-0123456789abcdef0123456789" } });
+  const browser = await chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"],
+  });
+  try {
+    await waitFor(`${base}/try`, 60_000, server);
+    const page = await browser.newPage({ viewport: { width: 1400, height: 1000 } });
+    const study = JSON.stringify(benchStudy());
+    await page.route("**/examples/study.json", (r) => r.fulfill({ status: 200, contentType: "application/json", body: study }));
+    await page.goto(`${base}/try`);
+    await page.waitForSelector("[data-testid=view] canvas", { timeout: 60_000 });
+    await page.waitForTimeout(1500);
+    const slider = page.getByTestId("cut-diameter");
+    const field = page.getByTestId("cut-diameter-field");
+    await field.fill("52");
+    await field.press("Enter");
+    await page.waitForTimeout(500);
+    await slider.focus();
+    await page.evaluate(() => {
+      window.__fitFrames = [];
+      for (const n of ["studio:input-to-frame", "studio:input-to-animation-frame", "studio:evaluate", "studio:scene-update", "studio:render"]) performance.clearMeasures(n);
+    });
+    for (let i = 1; i <= STEPS; i++) {
+      await slider.press("ArrowRight");
+      await page.waitForFunction((n) => (window.__fitFrames?.length ?? 0) >= n, i, { timeout: 10_000 });
+    }
+    const times = await page.evaluate(() => performance.getEntriesByName("studio:input-to-frame").map((e) => e.duration));
+    const finalValue = await slider.inputValue();
+    console.log(`studio, 5 kits on a polygon case, ${times.length} slider steps (52.00 → ${finalValue} mm):`);
+    console.log(`  input to rendered frame: ${fmt(times)}`);
+    for (const [label, name] of [["input to the next animation frame (when the compositor can show it)", "studio:input-to-animation-frame"], ["core evaluation (kit on show)", "studio:evaluate"], ["scene update", "studio:scene-update"], ["WebGL render call", "studio:render"]]) {
+      const xs = await page.evaluate((n) => performance.getEntriesByName(n).map((e) => e.duration), name);
+      if (xs.length) console.log(`  ${label}: ${fmt(xs)} (${xs.length} samples)`);
+    }
+  } finally {
+    await browser.close();
+    server.kill("SIGTERM");
+  }
+  for (const [name, route] of [["studio (/try)", "try"], ["study page (/studies/[id])", "(shop)/studies/[id]"], ["Library (/library)", "(shop)/library"]] as const) {
+    const fl = firstLoad(route);
+    if (!fl) console.log(`${name}: no manifest in ${dist}`);
+    else console.log(`${name}: first-load JS ${(fl.bytes / 1024).toFixed(0)} kB (${(fl.gzip / 1024).toFixed(0)} kB gzip) in ${fl.files.length} files; three.js in first load: ${fl.hasThree ? "yes" : "no"}`);
+  }
+}
+
+main().catch((e: unknown) => {
+  console.error(e);
+  process.exit(1);
+});

@@ -1,0 +1,136 @@
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { DEMO, signIn, uniqueEmail, waitForMail } from "../support/http";
+import { insertExampleStudy, me, readPdf } from "../integration/jobs-support";
+
+let browser: Browser;
+let studyId: string;
+beforeAll(async () => {
+  browser = await launchBrowser();
+  const owner = await signIn(DEMO.owner.email, DEMO.owner.password);
+  const o = await me(owner);
+  ({ studyId } = await insertExampleStudy(o.shopId, o.userId, `Browser study ${Date.now()}`));
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("a job in the browser, from the study to verified", () => {
+  it("a builder opens a job from a study and shares it; the new customer joins from the mail, sees the fit, approves and pays; the builder records readings and verifies; the setup card prints on one page", async () => {
+    const customerEmail = uniqueEmail("browser-customer");
+    // ── The builder opens the job from the study and shares it.
+    const shop = await newPerson(browser, { width: 1280, height: 900 });
+    const bench = await shop.newPage();
+    await signInThroughForm(bench, DEMO.builder.email, DEMO.builder.password);
+    await bench.goto(`/jobs/new?studyId=${studyId}`);
+    await bench.getByLabel("Title").fill("Harrow's 50 cc scooter, big bore");
+    await bench.getByLabel("Customer's name").fill("Wren Calloway");
+    await bench.getByLabel("Customer's e-mail").fill("not an address");
+    await bench.getByRole("button", { name: "Open the job" }).click();
+    await expect.poll(() => bench.getByText("That does not look like an e-mail address.").count(), { timeout: 10_000 }).toBe(1);
+    expect(await bench.getByLabel("Title").inputValue()).toBe("Harrow's 50 cc scooter, big bore");
+    await bench.getByLabel("Customer's e-mail").fill(customerEmail);
+    await bench.getByLabel("Engine number").fill("QF50-7781");
+    await bench.getByRole("button", { name: "Open the job" }).click();
+    await bench.waitForURL(/\/jobs\/[0-9a-f-]{36}$/);
+    const jobId = bench.url().split("/jobs/")[1];
+    expect(await bench.getByTestId("job-status").textContent()).toBe("Planned");
+    await bench.getByRole("button", { name: "Share with the customer" }).click();
+    await expect.poll(() => bench.getByText(/was invited into the shop as a customer/).count(), { timeout: 10_000 }).toBe(1);
+    await screenshot(bench, "jobs-01-job-planned-and-shared");
+
+    // ── The customer opens the link from the mail, creates an account, joins and sees the fit.
+    const mail = await waitForMail(customerEmail, /shares the plan/);
+    const inviteLink = mail.links.find((l) => l.includes("/invite/"))!;
+    const home = await newPerson(browser, { width: 1180, height: 900 });
+    const sofa = await home.newPage();
+    await sofa.goto(new URL(inviteLink).pathname);
+    await sofa.getByRole("link", { name: "Create an account" }).click();
+    await sofa.getByLabel("Your name").fill("Wren Calloway");
+    expect(await sofa.getByLabel("E-mail").inputValue()).toBe(customerEmail);
+    await sofa.getByLabel("Password").fill("a-long-customer-password");
+    await sofa.getByRole("button", { name: "Create account" }).click();
+    await sofa.waitForURL(/\/invite\//);
+    await sofa.getByRole("button", { name: "Accept the invitation" }).click();
+    await sofa.waitForURL(/\/consult$/);
+    await sofa.getByRole("link", { name: "Harrow's 50 cc scooter, big bore" }).click();
+    await sofa.waitForURL(`**/consult/${jobId}`);
+    await expect.poll(() => sofa.getByRole("heading", { name: "The fit" }).count(), { timeout: 10_000 }).toBe(1);
+    const cautions = (await sofa.getByTestId("consult-cautions").textContent()) ?? "";
+    expect(cautions).toMatch(/legal class/);
+    expect(cautions).toMatch(/local rules decide/);
+    expect(await sofa.getByText("Fits once the case mouth is cut to size.").count()).toBeGreaterThan(0);
+    await sofa.waitForTimeout(1500); // let the 3D view draw
+    await screenshot(sofa, "jobs-02-consult-fit");
+    await sofa.getByRole("button", { name: "Approve this plan" }).click();
+    await expect.poll(() => sofa.getByTestId("approved-line").count(), { timeout: 10_000 }).toBe(1);
+    expect(await sofa.getByTestId("approved-line").textContent()).toContain("Wren Calloway");
+
+    // ── The deposit through the fake checkout; paid only once the signed event arrives.
+    await sofa.getByRole("button", { name: /Pay the deposit \(50\.00 EUR\)/ }).click();
+    await sofa.waitForURL(/\/pay\/cs_test_/);
+    expect(await sofa.getByTestId("amount").textContent()).toBe("EUR 50.00");
+    await sofa.getByLabel("Card number").fill("4242 4242 4242 4242");
+    await sofa.getByLabel("Name on card").fill("Wren Calloway");
+    await screenshot(sofa, "jobs-03-fake-checkout");
+    await sofa.getByRole("button", { name: /^Pay EUR 50\.00/ }).click();
+    await sofa.waitForURL(`**/consult/${jobId}?checkout=done`);
+    await expect.poll(async () => {
+      await sofa.reload();
+      return sofa.getByTestId("deposit-paid").count();
+    }, { timeout: 10_000 }).toBe(1);
+    await screenshot(sofa, "jobs-04-consult-approved-and-paid");
+    // The customer cannot open the shop's library or jobs board, nor another job.
+    const lib = await sofa.goto("/library");
+    expect(lib?.status()).toBe(403);
+    const other = await sofa.goto("/consult/00000000-0000-0000-0000-000000000000");
+    expect(other?.status()).toBe(404);
+
+    // ── The builder marks it machined, records the after-cut readings and verifies.
+    await bench.reload();
+    expect(await bench.getByTestId("deposit-state").textContent()).toContain("paid");
+    await bench.getByRole("button", { name: "Mark machined" }).click();
+    await expect.poll(() => bench.getByTestId("job-status").textContent(), { timeout: 10_000 }).toBe("Machined");
+    const form = bench.getByRole("form", { name: "After-cut readings" });
+    await form.getByLabel("Cut diameter readings").fill("55,10 55.12");
+    await form.getByRole("button", { name: "Save and verify" }).click();
+    await expect.poll(() => form.getByText("Use a point for decimals").count(), { timeout: 10_000 }).toBe(1);
+    await form.getByLabel("Cut diameter readings").fill("55.10 55.12 55.09");
+    await form.getByLabel("Cut depth readings").fill("25.26 25.25");
+    for (const [stud, v] of [["front left", "8.2"], ["front right", "8.25"], ["rear right", "8.3"], ["rear left", "8.22"]]) await form.getByLabel(stud, { exact: true }).fill(v);
+    await form.getByLabel("Gasket stack used").fill("0.2");
+    await form.getByLabel("Trial fit").selectOption("goes-home");
+    await form.getByLabel("Crankcase cleaned of every chip").check();
+    await form.getByRole("button", { name: "Save and verify" }).click();
+    await expect.poll(() => bench.getByTestId("verdict").textContent(), { timeout: 10_000 }).toMatch(/^Within the plan/);
+    await bench.getByRole("button", { name: "Mark verified" }).click();
+    await expect.poll(() => bench.getByTestId("job-status").textContent(), { timeout: 10_000 }).toBe("Verified");
+    await screenshot(bench, "jobs-05-verified-plan-against-actual");
+
+    // ── The setup card: print preview on one page with the rig settings and the cautions; the PDF says the same.
+    await bench.goto(`/setup-card/${jobId}`);
+    const rig = (await bench.getByTestId("rig-settings").textContent()) ?? "";
+    expect(rig).toContain("44.80 mm"); // cutter setting from the core's result for the example's first kit
+    expect(rig).toContain("ring in groove 2");
+    const cardCautions = (await bench.getByTestId("cautions").textContent()) ?? "";
+    for (const c of [/eye protection/, /without crushing it/, /bit and every fastener/, /Remove every chip/, /legal class/, /qualified machinist/]) expect(cardCautions).toMatch(c);
+    await bench.emulateMedia({ media: "print" });
+    await screenshot(bench, "jobs-06-setup-card-print-preview");
+    for (const format of ["A4", "Letter"] as const) {
+      const printed = await bench.pdf({ format, printBackground: true });
+      expect(readPdf(printed).pages, `${format} print`).toBe(1);
+    }
+    await bench.emulateMedia({ media: "screen" });
+    const download = await shop.request.get(`/api/v1/jobs/${jobId}/setup-card.pdf`);
+    expect(download.headers()["content-type"]).toBe("application/pdf");
+    const pdf = readPdf(await download.body());
+    expect(pdf.pages).toBe(1);
+    expect(pdf.fontsEmbedded).toBe(2);
+    expect(pdf.text).toContain("44.80 mm");
+    expect(pdf.text).toMatch(/Wear eye protection/);
+    expect(pdf.text).toMatch(/legal class; local rules decide/);
+    await shop.close();
+    await home.close();
+  });
+});

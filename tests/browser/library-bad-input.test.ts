@@ -1,0 +1,77 @@
+// Bad input in the library forms, in Chromium: a negative diameter, a comma for a decimal point and a
+// 500 mm skirt each get a message next to the field, and a refused save loses nothing that was typed.
+import { mkdirSync } from "node:fs";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
+import { DEMO, freshAddress } from "../support/http";
+
+const SHOTS = "test-results/screenshots";
+const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"];
+
+let browser: Browser;
+let page: Page;
+
+/** The message shown next to an input (its aria-describedby target, or the alert right after it). */
+async function messageNear(p: Page, inputId: string): Promise<string> {
+  const describedBy = await p.locator(`#${inputId}`).getAttribute("aria-describedby");
+  if (describedBy) return p.locator(`#${describedBy.split(" ")[0]}`).innerText();
+  return "";
+}
+
+beforeAll(async () => {
+  mkdirSync(SHOTS, { recursive: true });
+  browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ARGS });
+  const context = await browser.newContext({ viewport: { width: 1024, height: 1300 }, extraHTTPHeaders: { "x-forwarded-for": freshAddress() } });
+  page = await context.newPage();
+  await page.goto(`${inject("baseURL")}/sign-in`);
+  await page.getByLabel("E-mail").fill(DEMO.builder.email);
+  await page.getByLabel("Password").fill(DEMO.builder.password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL(/\/home/);
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("bad input in the kit form", () => {
+  it("names what is wrong next to each field and keeps every character typed", async () => {
+    await page.goto(`${inject("baseURL")}/library/kits/new`);
+    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await page.locator("#f-name").fill("Bad input kit");
+
+    await page.locator("#f-boreMm").fill("-47");
+    await expect.poll(() => messageNear(page, "f-boreMm")).toMatch(/more than 0\.00 mm|more than 0 mm/);
+
+    await page.locator("#f-skirtDiameterReadingsMm-0").fill("54,5");
+    await expect.poll(() => messageNear(page, "f-skirtDiameterReadingsMm-0")).toBe("use a point for decimals: 54.5");
+
+    await page.getByRole("group", { name: /Skirt diameter readings/ }).getByRole("button", { name: "Add a reading" }).click();
+    await page.locator("#f-skirtDiameterReadingsMm-1").fill("500");
+    await expect.poll(() => messageNear(page, "f-skirtDiameterReadingsMm-1")).toMatch(/too large.*at most 200 mm/);
+
+    await page.getByRole("button", { name: "Create" }).click();
+    await expect.poll(() => page.getByRole("alert").first().innerText()).toMatch(/nothing was saved and nothing was lost/);
+    expect(page.url()).toMatch(/\/library\/kits\/new$/);
+    expect(await page.locator("#f-name").inputValue()).toBe("Bad input kit");
+    expect(await page.locator("#f-boreMm").inputValue()).toBe("-47");
+    expect(await page.locator("#f-skirtDiameterReadingsMm-0").inputValue()).toBe("54,5");
+    expect(await page.locator("#f-skirtDiameterReadingsMm-1").inputValue()).toBe("500");
+    await page.screenshot({ path: `${SHOTS}/library-bad-input.png`, fullPage: true });
+
+    // Switching to inches converts what can be read and leaves the rest exactly as typed.
+    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "in" }).click();
+    await expect.poll(() => page.locator("#f-skirtDiameterReadingsMm-1").inputValue()).toBe("19.685");
+    expect(await page.locator("#f-skirtDiameterReadingsMm-0").inputValue()).toBe("54,5");
+    await expect.poll(() => messageNear(page, "f-skirtDiameterReadingsMm-1")).toMatch(/at most 7\.874 in/);
+
+    // Fixing the values clears the messages.
+    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await page.locator("#f-boreMm").fill("47");
+    await page.locator("#f-skirtDiameterReadingsMm-0").fill("54.5");
+    await page.locator("#f-skirtDiameterReadingsMm-1").fill("54.55");
+    await expect.poll(() => messageNear(page, "f-boreMm")).toBe("");
+    await expect.poll(() => messageNear(page, "f-skirtDiameterReadingsMm-0")).toBe("");
+    await expect.poll(() => page.getByTestId("f-skirtDiameterReadingsMm-summary").innerText()).toMatch(/largest counts: 54\.55 mm \(reading 2\) · spread 0\.05 mm/);
+  });
+});

@@ -1,0 +1,182 @@
+import { mkdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { type Browser, type BrowserContext, type Page, chromium } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { evaluateStudy, parseStudy } from "@/geometry";
+import { fitState } from "@/scene/fit";
+
+// The fit studio on the public example page, in Chromium with WebGL on SwiftShader. The verdict
+// threshold is whatever the core gives on the slider's own grid; the page must agree with it.
+
+const SHOTS = "test-results/screenshots";
+const STEP = 0.05;
+let browser: Browser;
+let context: BrowserContext;
+let page: Page;
+
+const example = parseStudy(JSON.parse(readFileSync("public/examples/study.json", "utf8")));
+
+/** Smallest cut diameter on the slider grid at which the core says the first kit's skirt clears by the minimum. */
+function coreThresholdMm(from: number): number {
+  for (let i = 0; i < 400; i++) {
+    const d = Math.round((from + i * STEP) * 100) / 100;
+    const r = evaluateStudy({ ...example, cut: { diameterMm: d } });
+    if (fitState(r.kits[0], r) === "clear") return d;
+  }
+  throw new Error("no clearing cut on the grid");
+}
+
+/** A 64 × 48 sample of the canvas (RGB), taken through a 2D canvas (the WebGL buffer is preserved). */
+async function sample(): Promise<number[]> {
+  await page.waitForTimeout(250);
+  return page.evaluate(() => {
+    const src = document.querySelector<HTMLCanvasElement>("[data-testid=view] canvas");
+    if (!src) throw new Error("no canvas");
+    const c = document.createElement("canvas");
+    c.width = 64;
+    c.height = 48;
+    const ctx = c.getContext("2d");
+    if (!ctx) throw new Error("no 2d context");
+    ctx.drawImage(src, 0, 0, 64, 48);
+    return Array.from(ctx.getImageData(0, 0, 64, 48).data).filter((_, i) => i % 4 !== 3);
+  });
+}
+const difference = (a: number[], b: number[]) => a.reduce((s, v, i) => s + Math.abs(v - b[i]), 0) / a.length;
+
+async function shot(name: string) {
+  await page.screenshot({ path: join(SHOTS, `studio-${name}.png`) });
+}
+
+beforeAll(async () => {
+  mkdirSync(SHOTS, { recursive: true });
+  browser = await chromium.launch({
+    executablePath: "/usr/bin/chromium",
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"],
+    // playwright launches every browser with a fresh temporary profile of its own.
+  });
+  context = await browser.newContext({ viewport: { width: 1400, height: 1000 }, acceptDownloads: true });
+  page = await context.newPage();
+  await page.goto(`${inject("baseURL")}/try`);
+  await page.waitForSelector("[data-testid=view] canvas", { timeout: 30_000 });
+  await page.waitForTimeout(1500);
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("the fit studio on the example study", () => {
+  it("renders the 3D view with more than a background", async () => {
+    const px = await sample();
+    // The background is #f1eee6; count samples that differ from it clearly.
+    let drawn = 0;
+    for (let i = 0; i < px.length; i += 3) if (Math.abs(px[i] - 0xf1) + Math.abs(px[i + 1] - 0xee) + Math.abs(px[i + 2] - 0xe6) > 30) drawn++;
+    expect(drawn / (px.length / 3)).toBeGreaterThan(0.08);
+    await shot("first-load");
+  });
+
+  it("turns from interference to clear at the cut diameter the core gives, stepping the slider", async () => {
+    const start = 53.5;
+    const threshold = coreThresholdMm(start);
+    const field = page.getByTestId("cut-diameter-field");
+    await field.fill(String(start));
+    await field.press("Enter");
+    const verdict = page.getByTestId("verdict");
+    await expect.poll(() => verdict.getAttribute("data-state")).toBe("interfere");
+    await shot("interference");
+    const slider = page.getByTestId("cut-diameter");
+    await slider.focus();
+    const steps = Math.round((threshold - start) / STEP);
+    for (let i = 0; i < steps - 1; i++) await slider.press("ArrowRight");
+    await expect.poll(() => slider.inputValue()).toBe(String(Math.round((threshold - STEP) * 100) / 100));
+    await expect.poll(() => verdict.getAttribute("data-state")).not.toBe("clear");
+    await slider.press("ArrowRight");
+    expect(Number(await slider.inputValue())).toBeCloseTo(threshold, 6);
+    await expect.poll(() => verdict.getAttribute("data-state")).toBe("clear");
+    expect(await verdict.getAttribute("data-verdict")).toBe("fits-after-cut");
+    await shot("clear-at-threshold");
+  });
+
+  it("follows a mouse drag of the cut diameter from interference to clear", async () => {
+    const field = page.getByTestId("cut-diameter-field");
+    await field.fill("52");
+    await field.press("Enter");
+    const verdict = page.getByTestId("verdict");
+    await expect.poll(() => verdict.getAttribute("data-state")).toBe("interfere");
+    const box = await page.getByTestId("cut-diameter").boundingBox();
+    if (!box) throw new Error("no slider box");
+    const min = Number(await page.getByTestId("cut-diameter").getAttribute("min"));
+    const max = Number(await page.getByTestId("cut-diameter").getAttribute("max"));
+    const xOf = (mm: number) => box.x + 8 + ((mm - min) / (max - min)) * (box.width - 16);
+    await page.mouse.move(xOf(52), box.y + box.height / 2);
+    await page.mouse.down();
+    for (let i = 1; i <= 10; i++) await page.mouse.move(xOf(52 + (i * 3.6) / 10), box.y + box.height / 2);
+    await page.mouse.up();
+    const reached = Number(await page.getByTestId("cut-diameter").inputValue());
+    expect(reached).toBeGreaterThan(55.2);
+    await expect.poll(() => verdict.getAttribute("data-state")).toBe(reached >= coreThresholdMm(52) ? "clear" : "tight");
+  });
+
+  it("turns the section plane off and rotates it", async () => {
+    await page.getByTestId("use-least-cut").click();
+    const on = await sample();
+    await page.getByTestId("section-toggle").uncheck();
+    expect(await page.getByTestId("view").getAttribute("data-section")).toBe("off");
+    const off = await sample();
+    expect(difference(on, off)).toBeGreaterThan(2);
+    await shot("section-off");
+    await page.getByTestId("section-toggle").check();
+    const angle = page.getByTestId("section-angle");
+    await angle.focus();
+    for (let i = 0; i < 9; i++) await angle.press("ArrowRight");
+    expect(await page.getByTestId("view").getAttribute("data-section")).toBe("45");
+    const turned = await sample();
+    expect(difference(on, turned)).toBeGreaterThan(2);
+    await shot("section-45");
+  });
+
+  it("moves the camera to each preset", async () => {
+    const views: Record<string, number[]> = {};
+    for (const p of ["plan", "section", "three-quarter"]) {
+      await page.getByTestId(`camera-${p}`).click();
+      expect(await page.getByTestId("view").getAttribute("data-camera")).toBe(p);
+      views[p] = await sample();
+      await shot(`camera-${p}`);
+    }
+    expect(difference(views.plan, views["three-quarter"])).toBeGreaterThan(2);
+    expect(difference(views.section, views["three-quarter"])).toBeGreaterThan(2);
+    expect(difference(views.plan, views.section)).toBeGreaterThan(2);
+  });
+
+  it("downloads a PNG snapshot of the view and the drawings as SVG", async () => {
+    const [png] = await Promise.all([page.waitForEvent("download"), page.getByTestId("snapshot").click()]);
+    expect(png.suggestedFilename()).toMatch(/-fit\.png$/);
+    const bytes = readFileSync((await png.path()) as string);
+    expect(bytes.subarray(0, 8).toString("hex")).toBe("89504e470d0a1a0a");
+    expect(bytes.length).toBeGreaterThan(10_000);
+    const [svg] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-plan").click()]);
+    const text = readFileSync((await svg.path()) as string, "utf8");
+    expect(text).toMatch(/^<svg [^>]*width="[\d.]+mm"/);
+    expect(text).toContain("cut Ø 55.10 mm");
+  });
+
+  it("shows the customer the fit in large type without the editing controls", async () => {
+    await page.getByTestId("customer-toggle").click();
+    await expect.poll(() => page.getByTestId("cut-diameter").count()).toBe(0);
+    expect(await page.getByTestId("verdict").textContent()).toContain("Fits after the cut");
+    await shot("customer");
+    await page.getByTestId("customer-toggle").click();
+    await expect.poll(() => page.getByTestId("cut-diameter").count()).toBe(1);
+  });
+
+  it("compares the kits side by side and overlaid", async () => {
+    await page.getByTestId("compare").selectOption("side");
+    await expect.poll(() => page.getByRole("list", { name: "Kits side by side" }).locator("svg").count()).toBe(example.kits.length);
+    await shot("side-by-side");
+    await page.getByTestId("compare").selectOption("overlay");
+    await page.getByTestId("kit-1").check();
+    await expect.poll(() => page.getByTestId("results").locator("h2").textContent()).toBe(example.kits[1].name);
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await shot("overlay");
+  });
+});

@@ -1,0 +1,225 @@
+// Every POST and PATCH route, fed malformed bodies that fast-check builds from a valid one: each answer
+// is a 4xx in the one JSON error shape, and the shop's rows are exactly as they were.
+import fc from "fast-check";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { z } from "zod";
+import {
+  CaseCreateSchema,
+  CasePatchSchema,
+  CsvImportSchema,
+  KitCreateSchema,
+  KitPatchSchema,
+  RigCreateSchema,
+  RigPatchSchema,
+  SettingsPatchSchema,
+  StudyCreateSchema,
+  StudyPatchSchema,
+  StudySchema,
+} from "../../app/api/v1/_lib/schemas";
+import { Http, testDb } from "../support/http";
+import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, newStudy, ok, rigData } from "./library-fixtures";
+
+type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
+type Path = (string | number)[];
+
+type Target = {
+  method: "POST" | "PATCH";
+  path: string;
+  /** A body the route accepts; every mutation of it is malformed. */
+  valid: () => Json;
+  /** Paths whose removal makes the body malformed. */
+  required: string[];
+  /** The schema that must refuse every mutated body (a check that the mutation really is malformed). */
+  schema?: z.ZodType;
+  /** Routes that take no body: only non-empty bodies are sent. */
+  bodyless?: boolean;
+};
+
+const MB = 1024 * 1024;
+const COORDINATE = /positionMm|pointsMm|centerMm|centerOffsetMm/;
+
+function leaves(v: Json, at: Path = []): { path: Path; value: Json }[] {
+  if (v !== null && typeof v === "object") {
+    const entries = Array.isArray(v) ? v.map((x, i) => [i, x] as const) : Object.entries(v);
+    return [{ path: at, value: v }, ...entries.flatMap(([k, x]) => leaves(x, [...at, k]))];
+  }
+  return [{ path: at, value: v }];
+}
+
+function setAt(root: Json, path: Path, value: Json | undefined): Json {
+  if (path.length === 0) return value === undefined ? null : value;
+  const copy = structuredClone(root) as Record<string | number, Json>;
+  let at = copy as Record<string | number, Json>;
+  for (const k of path.slice(0, -1)) at = at[k] as Record<string | number, Json>;
+  const last = path[path.length - 1];
+  if (value === undefined) {
+    if (Array.isArray(at)) at.splice(Number(last), 1);
+    else delete at[last];
+  } else at[last] = value;
+  return copy as Json;
+}
+
+function wrongTypeFor(value: Json): Json[] {
+  if (typeof value === "number") return ["12", true, { n: 1 }, [1]];
+  if (typeof value === "string") return [12, false, { s: "x" }, ["x"]];
+  if (typeof value === "boolean") return ["true", 1, {}, [true]];
+  if (Array.isArray(value)) return ["a list", 7, { length: 1 }];
+  return ["an object", 7, [1, 2]];
+}
+
+/** One malformed request: a body (or raw text) built from a valid body. */
+type Mutation = { label: string; body?: Json; raw?: string; checkSchema: boolean };
+
+function mutations(t: Target): fc.Arbitrary<Mutation> {
+  const base = t.valid();
+  const all = leaves(base);
+  const numbers = all.filter((l) => typeof l.value === "number");
+  const strings = all.filter((l) => typeof l.value === "string");
+  const objects = all.filter((l) => l.value !== null && typeof l.value === "object" && !Array.isArray(l.value));
+  const nonRoot = all.filter((l) => l.path.length > 0);
+  const name = (p: Path) => p.join(".") || "(body)";
+  const pick = <T,>(xs: T[]) => fc.constantFrom(...xs);
+
+  const extra = pick(objects).chain((o) =>
+    fc.tuple(fc.string({ minLength: 1, maxLength: 12 }), fc.jsonValue()).map(([k, v]): Mutation => ({
+      label: `extra field at ${name(o.path)}`,
+      body: setAt(base, [...o.path, `x_${k}`], v as Json),
+      checkSchema: true,
+    })),
+  );
+  const notAnObject = fc.constantFrom<Json>([], [base], "a string", 42, null, true).map((b): Mutation => ({ label: `body ${JSON.stringify(b).slice(0, 20)}`, body: b, checkSchema: true }));
+  const badJson = fc.constantFrom("{", '{"name": }', "not json at all", "{'single': 1}", '{"a":1}}').map((raw): Mutation => ({ label: `text ${raw}`, raw, checkSchema: false }));
+  if (t.bodyless) return fc.oneof(extra, notAnObject, badJson);
+
+  const kinds: fc.Arbitrary<Mutation>[] = [extra, notAnObject, badJson];
+  if (nonRoot.length) {
+    kinds.push(
+      pick(nonRoot).chain((l) => pick(wrongTypeFor(l.value)).map((v): Mutation => ({ label: `wrong type at ${name(l.path)}`, body: setAt(base, l.path, v), checkSchema: true }))),
+    );
+  }
+  if (t.required.length) {
+    kinds.push(pick(t.required).map((p): Mutation => ({ label: `missing ${p}`, body: setAt(base, p.split(".").map((k) => (/^\d+$/.test(k) ? Number(k) : k)), undefined), checkSchema: true })));
+  }
+  if (numbers.length) {
+    kinds.push(
+      pick(numbers).chain((l) =>
+        pick(["NaN", "1e999", "-1e999"]).map((token): Mutation => ({
+          label: `${token} at ${name(l.path)}`,
+          raw: JSON.stringify(setAt(base, l.path, "@@TOKEN@@")).replace('"@@TOKEN@@"', token),
+          checkSchema: false,
+        })),
+      ),
+    );
+    const signed = numbers.filter((l) => !COORDINATE.test(name(l.path)));
+    if (signed.length) {
+      kinds.push(
+        fc.tuple(pick(signed), fc.double({ min: 0.001, max: 1e6, noNaN: true })).map(([l, d]): Mutation => ({ label: `negative at ${name(l.path)}`, body: setAt(base, l.path, -d), checkSchema: true })),
+      );
+    }
+    const bounded = numbers.filter((l) => !/price|version/.test(name(l.path)));
+    if (bounded.length) {
+      kinds.push(
+        fc.tuple(pick(bounded), fc.double({ min: 1e9, max: 1e300, noNaN: true })).map(([l, d]): Mutation => ({ label: `huge at ${name(l.path)}`, body: setAt(base, l.path, d), checkSchema: true })),
+      );
+    }
+  }
+  if (strings.length) {
+    kinds.push(pick(strings).map((l): Mutation => ({ label: `1 MB string at ${name(l.path)}`, body: setAt(base, l.path, "x".repeat(MB)), checkSchema: true })));
+  }
+  return fc.oneof(...kinds);
+}
+
+let http: Http;
+let shopId: string;
+let userId: string;
+let ids: { caseId: string; kitId: string; rigId: string; studyId: string };
+
+/** Everything of the test shop that a request could change, as one string. */
+async function fingerprint(): Promise<string> {
+  const db = testDb();
+  try {
+    const rows = (table: string) => `(select group_concat(id || ':' || version || ':' || updated_at || ':' || ifnull(archived_at, ''), ',') from (select * from ${table} where organization_id = ?1 order by id))`;
+    const r = await db.execute({
+      sql: `select ${rows("case_profile")} as cases, ${rows("cylinder_kit")} as kits, ${rows("boring_rig")} as rigs, ${rows("study")} as studies,
+              (select count(*) from study_kit where study_id in (select id from study where organization_id = ?1)) as studyKits,
+              (select count(*) from study_event where study_id in (select id from study where organization_id = ?1)) as events,
+              (select version || ':' || units || ':' || limits_json from shop_settings where organization_id = ?1) as settings,
+              (select units || ':' || updated_at from user where id = ?2) as me,
+              (select count(*) from member where user_id = ?2) as memberships`,
+      args: [shopId, userId],
+    });
+    return JSON.stringify(r.rows[0]);
+  } finally {
+    db.close();
+  }
+}
+
+const studyFile = (): Json => ({ name: "Bad input file", case: { name: "File case", ...caseData() }, kits: [{ id: "k", name: "File kit", ...kitData(47, 53.92) }] }) as Json;
+
+const targets = (): Target[] => [
+  { method: "POST", path: "/api/v1/cases", valid: () => ({ name: "Case", notes: "n", data: caseData(), mouthReadingsMm: [46] }) as Json, required: ["name", "data", "data.deck", "data.mouth", "data.studs", "data.stockBoreMm", "data.strokeMm", "data.studHoleDiameterMm"], schema: CaseCreateSchema },
+  { method: "PATCH", path: `/api/v1/cases/${ids.caseId}`, valid: () => ({ version: 1, name: "Case", data: caseData() }) as Json, required: ["version", "data.deck", "data.mouth.depthMm"], schema: CasePatchSchema },
+  { method: "POST", path: "/api/v1/kits", valid: () => ({ name: "Kit", data: kitData(47, 53.92) }) as Json, required: ["name", "data", "data.boreMm", "data.skirtDiameterReadingsMm", "data.skirtLengthReadingsMm", "data.studs"], schema: KitCreateSchema },
+  { method: "PATCH", path: `/api/v1/kits/${ids.kitId}`, valid: () => ({ version: 1, notes: "x", data: kitData(47, 53.92) }) as Json, required: ["version", "data.boreMm"], schema: KitPatchSchema },
+  { method: "POST", path: "/api/v1/rigs", valid: () => ({ name: "Rig", data: rigData() }) as Json, required: ["name", "data", "data.headDiameterMm", "data.calibration", "data.grooves", "data.drillTopRpm"], schema: RigCreateSchema },
+  { method: "PATCH", path: `/api/v1/rigs/${ids.rigId}`, valid: () => ({ version: 1, data: rigData() }) as Json, required: ["version", "data.calibration.maxCutDiameterMm"], schema: RigPatchSchema },
+  { method: "POST", path: "/api/v1/studies", valid: () => ({ name: "Study", caseId: ids.caseId, kitIds: [ids.kitId], rigId: ids.rigId, cut: { diameterMm: 55, depthMm: 25 }, limits: { minWallMm: 2 } }) as Json, required: ["name", "caseId", "kitIds"], schema: StudyCreateSchema },
+  { method: "PATCH", path: `/api/v1/studies/${ids.studyId}`, valid: () => ({ version: 1, name: "Study", cut: { diameterMm: 55 }, readings: { holderHeights: [{ stud: "front left", heightMm: 10 }] }, limits: { minWallMm: 2, displacementClassesCc: [50] } }) as Json, required: ["version", "readings.holderHeights"], schema: StudyPatchSchema },
+  { method: "POST", path: "/api/v1/studies/import", valid: studyFile, required: ["case", "kits", "case.deck", "kits.0.boreMm", "kits.0.id"], schema: StudySchema },
+  { method: "POST", path: "/api/v1/fit", valid: studyFile, required: ["case", "kits", "case.mouth", "kits.0.skirtLengthReadingsMm"], schema: StudySchema },
+  { method: "POST", path: "/api/v1/library/import?kind=kits", valid: () => ({ csv: "name,bore_mm\nA,47\n", confirm: true }), required: ["csv", "confirm"], schema: CsvImportSchema },
+  { method: "POST", path: "/api/v1/library/import?kind=cases", valid: () => ({ csv: "name\nA\n", confirm: true }), required: ["csv", "confirm"], schema: CsvImportSchema },
+  { method: "PATCH", path: "/api/v1/settings", valid: () => ({ version: 1, units: "in", limits: { minWallMm: 2.5 } }), required: ["version"], schema: SettingsPatchSchema },
+  { method: "POST", path: "/api/v1/me", valid: () => ({ units: "in" }), required: ["units"] },
+  { method: "POST", path: "/api/v1/shops", valid: () => ({ name: "Another shop" }), required: [] },
+  ...["cases", "kits", "rigs"].flatMap((e) =>
+    ["archive", "restore"].map((a): Target => ({ method: "POST", path: `/api/v1/${e}/${e === "cases" ? ids.caseId : e === "kits" ? ids.kitId : ids.rigId}/${a}`, valid: () => ({}), required: [], bodyless: true })),
+  ),
+  ...["archive", "restore", "duplicate"].map((a): Target => ({ method: "POST", path: `/api/v1/studies/${ids.studyId}/${a}`, valid: () => ({}), required: [], bodyless: true })),
+];
+
+beforeAll(async () => {
+  http = await freshShopOwner("Bad Input Owner");
+  const me = ok<{ me: { shopId: string; userId: string } }>(await http.get("/api/v1/me")).me;
+  shopId = me.shopId;
+  userId = me.userId;
+  const { study, caseRow, kits, rig } = await newStudy(http);
+  // Rows the PATCH targets edit (version 1, in no study, so nothing else refers to them).
+  const [c, k, r] = [await newCase(http), await newKit(http), await newRig(http)];
+  void caseRow;
+  void kits;
+  void rig;
+  ids = { caseId: c.id, kitId: k.id, rigId: r.id, studyId: study.id };
+});
+
+describe("malformed bodies", () => {
+  it("start from bodies the schemas accept", () => {
+    for (const t of targets()) if (t.schema) expect(t.schema.safeParse(t.valid()).success, `${t.method} ${t.path}`).toBe(true);
+  });
+
+  it("are answered with a 4xx in the one error shape on every POST and PATCH route, and change nothing", async () => {
+    const before = await fingerprint();
+    for (const t of targets()) {
+      await fc.assert(
+        fc.asyncProperty(mutations(t), async (m) => {
+          if (m.checkSchema && t.schema && m.body !== undefined) {
+            expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
+          }
+          const text = m.raw ?? JSON.stringify(m.body);
+          const res = await http.send(t.method, t.path, text, { "content-type": "application/json" });
+          expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
+          expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
+          expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+          expect(await fingerprint(), `${t.method} ${t.path} with ${m.label} changed the database`).toBe(before);
+        }),
+        { numRuns: 25, seed: Number(process.env.FC_SEED ?? Date.now() % 100_000), endOnFailure: true },
+      );
+    }
+  }, 240_000);
+
+  it("answer an oversize body with 413", async () => {
+    const res = await http.send("POST", "/api/v1/cases", JSON.stringify({ name: "Big", notes: "x".repeat(2 * MB), data: caseData() }));
+    expect(res.status).toBe(413);
+    expect(res.json).toMatchObject({ error: { code: "too_large" } });
+  });
+});

@@ -1,0 +1,77 @@
+import { describe, expect, it } from "vitest";
+import { JOB_STATUSES, decideMove, movesFrom, type JobStatus, type MoveActor, type MoveFacts } from "@/db/job-status";
+
+const builder: MoveActor = { role: "builder", isJobCustomer: false };
+const owner: MoveActor = { role: "owner", isJobCustomer: false };
+const customer: MoveActor = { role: "customer", isJobCustomer: true };
+const otherCustomer: MoveActor = { role: "customer", isJobCustomer: false };
+const ready: MoveFacts = { hasPlan: true, verification: "pass" };
+
+// Every allowed move, with who makes it and what it needs.
+const ALLOWED: [JobStatus, JobStatus, MoveActor, string?][] = [
+  ["intake", "planned", builder],
+  ["planned", "approved", customer],
+  ["planned", "approved", owner, "approved by phone"],
+  ["planned", "intake", builder, "wrong case variant"],
+  ["approved", "machined", builder],
+  ["approved", "planned", owner, "customer changed the kit"],
+  ["machined", "verified", builder],
+  ["verified", "closed", owner],
+  ["verified", "machined", builder, "re-cut after a second look"],
+];
+
+describe("the job status machine", () => {
+  it.each(ALLOWED)("%s → %s is allowed for the right person", (from, to, actor, reason) => {
+    expect(decideMove({ from, to, actor, reason, facts: ready })).toMatchObject({ ok: true });
+  });
+
+  it("every move not in the table is refused with a reason in words", () => {
+    const allowed = new Set(ALLOWED.map(([a, b]) => `${a}>${b}`));
+    let refused = 0;
+    for (const from of JOB_STATUSES)
+      for (const to of JOB_STATUSES) {
+        if (allowed.has(`${from}>${to}`)) continue;
+        const d = decideMove({ from, to, actor: owner, reason: "x", facts: ready });
+        expect(d.ok, `${from} → ${to}`).toBe(false);
+        if (!d.ok) expect(d.message.length).toBeGreaterThan(10);
+        refused++;
+      }
+    expect(refused).toBe(36 - allowed.size);
+  });
+
+  it("a job cannot be verified before it is machined", () => {
+    for (const from of ["intake", "planned", "approved"] as const) {
+      const d = decideMove({ from, to: "verified", actor: builder, facts: ready });
+      expect(d).toMatchObject({ ok: false, code: "not_allowed", message: "A job cannot be verified before it is machined." });
+    }
+  });
+
+  it("a builder cannot approve; an owner must give a reason; another customer cannot", () => {
+    expect(decideMove({ from: "planned", to: "approved", actor: builder, facts: ready })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(decideMove({ from: "planned", to: "approved", actor: owner, facts: ready })).toMatchObject({ ok: false, code: "reason_required" });
+    expect(decideMove({ from: "planned", to: "approved", actor: owner, reason: "   ", facts: ready })).toMatchObject({ ok: false, code: "reason_required" });
+    expect(decideMove({ from: "planned", to: "approved", actor: otherCustomer, facts: ready })).toMatchObject({ ok: false, code: "forbidden" });
+  });
+
+  it("a customer cannot move their job on the bench", () => {
+    for (const [from, to] of [["intake", "planned"], ["approved", "machined"], ["machined", "verified"], ["verified", "closed"]] as const) {
+      expect(decideMove({ from, to, actor: customer, facts: ready })).toMatchObject({ ok: false, code: "forbidden" });
+    }
+  });
+
+  it("planning needs a plan; verifying needs readings that pass", () => {
+    expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { hasPlan: false, verification: null } })).toMatchObject({ ok: false, code: "precondition" });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: { hasPlan: true, verification: null } })).toMatchObject({ ok: false, message: /Record the after-cut readings/ });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: { hasPlan: true, verification: "fail" } })).toMatchObject({ ok: false, message: /outside the plan's tolerance/ });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: { hasPlan: true, verification: "incomplete" } })).toMatchObject({ ok: false, message: /missing/ });
+  });
+
+  it("a step back needs a reason", () => {
+    expect(decideMove({ from: "approved", to: "planned", actor: builder, facts: ready })).toMatchObject({ ok: false, code: "reason_required" });
+  });
+
+  it("a closed job is final", () => {
+    expect(movesFrom("closed")).toEqual([]);
+    expect(decideMove({ from: "closed", to: "verified", actor: owner, reason: "x", facts: ready })).toMatchObject({ ok: false, message: /final/ });
+  });
+});
