@@ -4,7 +4,7 @@ import nextTs from "eslint-config-next/typescript";
 const config = [
   ...next,
   ...nextTs,
-  { ignores: [".next/**", "node_modules/**", "data/**", "test-results/**", "next-env.d.ts", "drizzle/**"] },
+  { ignores: [".next/**", ".next-*/**", "bench-results/**", "node_modules/**", "data/**", "test-results/**", "next-env.d.ts", "drizzle/**"] },
 ];
 
 export default config;
