@@ -27,6 +27,8 @@ export default defineConfig({
           // The payment fake and object store first: the app server reads their settings from the environment.
           globalSetup: ["tests/setup/global-jobs.ts", "tests/setup/global-server.ts"],
           testTimeout: 60_000,
+          // Pages under load on two cores can take a few seconds to show a change.
+          expect: { poll: { timeout: 10_000 } },
           hookTimeout: 120_000,
           fileParallelism: true,
           maxWorkers: 2,

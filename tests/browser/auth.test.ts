@@ -126,7 +126,7 @@ describe("in the browser", () => {
     await page.getByRole("link", { name: "Forgot the password?" }).click();
     await page.getByLabel("E-mail").fill(email);
     await page.getByRole("button", { name: "Send the link" }).click();
-    await expect.poll(() => page.getByText("a link to choose a new password is on its way").count()).toBe(1);
+    await expect.poll(() => page.getByRole("main").innerText()).toContain("a link to choose a new password is on its way");
     const mail = await waitForMail(email, /reset/i);
     await page.goto(mail.links.find((l) => l.includes("reset-password"))!);
     await page.waitForURL("**/reset-password?token=**");

@@ -117,8 +117,8 @@ describe("library and studies in the browser", () => {
     await page.getByRole("button", { name: "Create the study" }).click();
     await page.waitForURL(/\/studies\/[^/]+$/);
     studyUrl = page.url();
-    await page.getByTestId("verdict").waitFor();
-    await expect.poll(() => page.getByTestId("verdict").innerText()).toMatch(/Fits after the cut|Cannot fit safely|Fits as it is/);
+    await page.getByTestId("kit-results").getByTestId("verdict").waitFor();
+    await expect.poll(() => page.getByTestId("kit-results").getByTestId("verdict").innerText()).toMatch(/Fits after the cut|Cannot fit safely|Fits as it is/);
     await page.screenshot({ path: `${SHOTS}/library-study.png`, fullPage: true });
 
     await page.getByRole("tab", { name: "Lineup" }).click();

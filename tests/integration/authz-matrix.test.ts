@@ -1,9 +1,12 @@
 // Who may call what: every route under app/api × every kind of caller × a row of their own shop and a row
 // of another shop. A route that exists under app/api but is missing here fails the last test.
+import { randomUUID } from "node:crypto";
 import { readFileSync, readdirSync, statSync } from "node:fs";
 import { join, relative, sep } from "node:path";
-import { beforeAll, describe, expect, it } from "vitest";
-import { DEMO, Http, signIn } from "../support/http";
+import Stripe from "stripe";
+import { beforeAll, describe, expect, inject, it } from "vitest";
+import { DEMO, Http, signIn, testDb, uniqueEmail } from "../support/http";
+import { insertExampleStudy, jobBody, me, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, ok, rigData, type Row } from "./library-fixtures";
 
 type Actor = "owner" | "builder" | "customer" | "stranger" | "anonymous";
@@ -13,7 +16,8 @@ const ACTORS: Actor[] = ["owner", "builder", "customer", "stranger", "anonymous"
 
 /** What one actor's own shop holds, for bodies that must refer to it. */
 type Shop = { http: Http; caseId: string; kitId: string };
-type Ctx = { actor: Actor; shop: Shop; http: Http };
+/** `params` are those the route's `row` hook made (empty without one). */
+type Ctx = { actor: Actor; shop: Shop; http: Http; params: Record<string, string> };
 type Expected = Record<Actor, number>;
 type RouteCase = {
   method: "GET" | "POST" | "PATCH" | "DELETE";
@@ -25,10 +29,16 @@ type RouteCase = {
    * returns the path's parameters ({ id, photoId, … }). Both sides are tried, as for `entity`.
    */
   row?: (shop: Shop) => Promise<Record<string, string>>;
+  /** What the row is, when a route is tried on more than one kind of row. */
+  as?: string;
   /** Whether the call changes the row, so every cell gets a row of its own. */
   mutates?: boolean;
   query?: string;
   body?: (ctx: Ctx) => unknown | Promise<unknown>;
+  /** Extra request headers, made from the body that is sent. */
+  headers?: (ctx: Ctx, body: unknown) => Record<string, string>;
+  /** Runs after each actor's call: what the call must (or must not) have changed. */
+  check?: (ctx: Ctx, body: unknown, status: number) => Promise<void>;
   own: Expected;
   other?: Expected;
   /** A route the matrix lists but does not call, and why. */
@@ -71,6 +81,197 @@ function library(e: Exclude<Entity, "studies">): RouteCase[] {
   ];
 }
 
+// ── Jobs, consult and payments ──────────────────────────────────────────────────────────────────
+// Staff work on their shop's jobs; a customer reaches a job of their shop only once it is shared with
+// them (before that, and for anyone else's job, it is a plain 404); another shop's job is a 404 for
+// everyone the role lets that far. The payment webhook is public: its signature is the authority.
+
+/** The smallest valid PNG: the 8-byte signature (PNG spec, ISO/IEC 15948 §5.2) and a 1×1 image. */
+const PNG = Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000" + "1f15c4890000000d49444154789c6360000002000001e221bc330000000049454e44ae426082", "hex");
+
+const notFound: Expected = { owner: 404, builder: 404, customer: 404, stranger: 404, anonymous: 401 };
+/** Staff see the row; the customer answers `customer` (200 once shared with them, else 404). */
+const jobMember = (ok: number, customer: number): Expected => ({ owner: ok, builder: ok, customer, stranger: ok, anonymous: 401 });
+const customerOnly = (ok: number): Expected => ({ owner: 403, builder: 403, customer: ok, stranger: 403, anonymous: 401 });
+/** Approving for the customer: the owner with a reason, never a builder; the job's own customer once shared. */
+const approval = (customer: number): Expected => ({ owner: 200, builder: 403, customer, stranger: 200, anonymous: 401 });
+
+type JobSetup = { shopId: string; userId: string; studyId: string };
+const jobSetups = new Map<Http, Promise<JobSetup>>();
+/** The shop's study (the shipped example) that the matrix's jobs are planned from. */
+function jobSetup(shop: Shop): Promise<JobSetup> {
+  let setup = jobSetups.get(shop.http);
+  if (!setup) {
+    setup = (async () => {
+      const m = await me(shop.http);
+      const { studyId } = await insertExampleStudy(m.shopId, m.userId, label("jobs study"));
+      return { shopId: m.shopId, userId: m.userId, studyId };
+    })();
+    jobSetups.set(shop.http, setup);
+  }
+  return setup;
+}
+
+type JobKind = { shared?: boolean; status?: "planned" | "approved" | "machined"; forSomeoneElse?: boolean };
+
+/**
+ * A planned job in the shop, made through the shop's owner. In the demo shop it is the demo customer's
+ * job unless `forSomeoneElse`; a job shared in the other shop goes to someone of that shop, so the demo
+ * customer is never invited elsewhere.
+ */
+async function newJob(shop: Shop, kind: JobKind = {}): Promise<string> {
+  const { studyId } = await jobSetup(shop);
+  const customerEmail = kind.forSomeoneElse || (kind.shared && shop !== shopA) ? uniqueEmail("matrix-customer") : DEMO.customer.email;
+  const job = ok<{ item: { id: string; status: string } }>(await shop.http.post("/api/v1/jobs", jobBody({ studyId, customerEmail, title: label("job") })), 201).item;
+  expect(job.status).toBe("planned");
+  if (kind.shared) ok(await shop.http.post(`/api/v1/jobs/${job.id}/share`));
+  if (kind.status === "approved" || kind.status === "machined") ok(await shop.http.post(`/api/v1/jobs/${job.id}/move`, { to: "approved", reason: "approved by phone" }));
+  if (kind.status === "machined") ok(await shop.http.post(`/api/v1/jobs/${job.id}/move`, { to: "machined" }));
+  return job.id;
+}
+
+/** A checked photo on the job, uploaded straight to the object store. */
+async function newPhoto(shop: Shop, jobId: string, shared: boolean): Promise<string> {
+  const start = ok<{ id: string; uploadUrl: string }>(await shop.http.post(`/api/v1/jobs/${jobId}/photos`, { contentType: "image/png", sizeBytes: PNG.length, kind: "after", shared }), 201);
+  const put = await fetch(start.uploadUrl, { method: "PUT", headers: { "content-type": "image/png" }, body: PNG });
+  expect(put.status).toBe(200);
+  ok(await shop.http.post(`/api/v1/jobs/${jobId}/photos/${start.id}/complete`));
+  return start.id;
+}
+
+/** A fresh job for every call (for calls that change it). */
+const jobRow = (kind: JobKind) => async (shop: Shop) => ({ id: await newJob(shop, kind) });
+const photoRow = (kind: JobKind, sharedPhoto: boolean) => async (shop: Shop) => {
+  const id = await newJob(shop, kind);
+  return { id, photoId: await newPhoto(shop, id, sharedPhoto) };
+};
+const rowsMade = new Map<string, Promise<Record<string, string>>>();
+/** One row per shop, made on first use and shared by the calls that leave it as it is. */
+const once = (key: string, make: (shop: Shop) => Promise<Record<string, string>>) => (shop: Shop) => {
+  const k = `${key}:${shop === shopA ? "A" : "B"}`;
+  let made = rowsMade.get(k);
+  if (!made) {
+    made = make(shop);
+    rowsMade.set(k, made);
+  }
+  return made;
+};
+
+const HIDDEN = "the demo customer's job, not shared yet";
+const SHARED = "shared with the demo customer";
+const hiddenJob = once("hidden", jobRow({}));
+const sharedJob = once("shared", jobRow({ shared: true }));
+const someoneElsesJob = once("someone else's", jobRow({ shared: true, forSomeoneElse: true }));
+const machinedJob = once("machined", jobRow({ status: "machined" }));
+const approvedShared = once("approved shared", jobRow({ shared: true, status: "approved" }));
+const approvedHidden = once("approved hidden", jobRow({ status: "approved" }));
+const sharedPhoto = once("shared photo", photoRow({ shared: true }, true));
+
+type PaymentFixture = { jobId: string; sessionId: string };
+let paymentFixture: Promise<PaymentFixture> | undefined;
+/** A job of the demo shop with an open deposit checkout, which a genuine completed event would mark paid. */
+function openPayment(): Promise<PaymentFixture> {
+  paymentFixture ??= (async () => {
+    const jobId = await newJob(shopA, { status: "approved" });
+    const { userId } = await jobSetup(shopA);
+    const sessionId = `cs_matrix_${randomUUID()}`;
+    const db = testDb();
+    try {
+      await db.execute({
+        sql: "insert into job_payment (id, job_id, checkout_session_id, amount, currency, status, created_by_id) values (?, ?, ?, 5000, 'eur', 'open', ?)",
+        args: [randomUUID(), jobId, sessionId, userId],
+      });
+    } finally {
+      db.close();
+    }
+    return { jobId, sessionId };
+  })();
+  return paymentFixture;
+}
+
+/** A "checkout completed, paid" event for the open checkout, as raw text. */
+const completedEvent = async () => {
+  const { sessionId } = await openPayment();
+  return JSON.stringify({
+    id: `evt_matrix_${randomUUID()}`,
+    object: "event",
+    type: "checkout.session.completed",
+    data: { object: { id: sessionId, object: "checkout.session", payment_status: "paid", amount_total: 5000, currency: "eur" } },
+  });
+};
+
+async function paymentState(eventId: string) {
+  const { jobId, sessionId } = await openPayment();
+  const db = testDb();
+  try {
+    const r = await db.execute({
+      sql: `select (select paid_at from job where id = ?1) as paidAt,
+                   (select status from job_payment where checkout_session_id = ?2) as payment,
+                   (select count(*) from job_event where job_id = ?1 and kind = 'payment') as paymentEvents,
+                   (select count(*) from payment_event where id = ?3) as recorded`,
+      args: [jobId, sessionId, eventId],
+    });
+    return { paidAt: r.rows[0]?.paidAt ?? null, payment: r.rows[0]?.payment, paymentEvents: Number(r.rows[0]?.paymentEvents), recorded: Number(r.rows[0]?.recorded) };
+  } finally {
+    db.close();
+  }
+}
+
+const eventId = (body: unknown) => (JSON.parse(String(body)) as { id: string }).id;
+/** A refused event leaves the deposit unpaid, the checkout open and the event unrecorded. */
+const changesNothing = async (_ctx: Ctx, body: unknown) => {
+  expect(await paymentState(eventId(body))).toEqual({ paidAt: null, payment: "open", paymentEvents: 0, recorded: 0 });
+};
+
+const JOBS: RouteCase[] = [
+  { method: "GET", path: "/api/v1/jobs", own: member(200) },
+  { method: "POST", path: "/api/v1/jobs", body: () => jobBody({ customerEmail: uniqueEmail("matrix-walk-in"), title: label("walk-in job") }), own: staff(201) },
+  { method: "GET", path: "/api/v1/jobs/{id}", row: hiddenJob, as: HIDDEN, own: jobMember(200, 404), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}", row: sharedJob, as: SHARED, own: member(200), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}", row: someoneElsesJob, as: "shared with another customer", own: jobMember(200, 404), other: notFound },
+  { method: "PATCH", path: "/api/v1/jobs/{id}", row: jobRow({}), mutates: true, body: () => ({ version: 1, title: label("renamed job") }), own: staff(200), other: staffOther },
+  { method: "POST", path: "/api/v1/jobs/{id}/move", row: jobRow({}), as: `${HIDDEN}, back to intake`, mutates: true, body: () => ({ to: "intake", reason: "re-measure the case" }), own: jobMember(200, 404), other: notFound },
+  { method: "POST", path: "/api/v1/jobs/{id}/move", row: jobRow({ shared: true }), as: `${SHARED}, to approved`, mutates: true, body: () => ({ to: "approved", reason: "approved by phone" }), own: approval(200), other: notFound },
+  { method: "POST", path: "/api/v1/jobs/{id}/move", row: jobRow({}), as: `${HIDDEN}, to approved`, mutates: true, body: () => ({ to: "approved", reason: "approved by phone" }), own: approval(404), other: notFound },
+  { method: "POST", path: "/api/v1/jobs/{id}/readings", row: machinedJob, as: "machined", body: () => PASSING_READINGS, own: staff(201), other: staffOther },
+  { method: "POST", path: "/api/v1/jobs/{id}/share", row: once("to share", jobRow({})), own: staff(200), other: staffOther },
+  { method: "POST", path: "/api/v1/jobs/{id}/questions", row: hiddenJob, as: HIDDEN, body: () => ({ text: "Will the kit clear the transfer ports?" }), own: jobMember(201, 404), other: notFound },
+  { method: "POST", path: "/api/v1/jobs/{id}/questions", row: sharedJob, as: SHARED, body: () => ({ text: "Will the kit clear the transfer ports?" }), own: member(201), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}/photos", row: hiddenJob, as: HIDDEN, own: jobMember(200, 404), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}/photos", row: sharedJob, as: SHARED, own: member(200), other: notFound },
+  { method: "POST", path: "/api/v1/jobs/{id}/photos", row: hiddenJob, body: () => ({ contentType: "image/png", sizeBytes: PNG.length, kind: "before" }), own: staff(201), other: staffOther },
+  { method: "GET", path: "/api/v1/jobs/{id}/photos/{photoId}", row: sharedPhoto, as: `a shared photo, ${SHARED}`, own: member(303), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}/photos/{photoId}", row: once("unshared photo", photoRow({ shared: true }, false)), as: `an unshared photo, ${SHARED}`, own: jobMember(303, 404), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}/photos/{photoId}", row: once("photo of hidden", photoRow({}, true)), as: `a shared photo, ${HIDDEN}`, own: jobMember(303, 404), other: notFound },
+  { method: "PATCH", path: "/api/v1/jobs/{id}/photos/{photoId}", row: sharedPhoto, body: () => ({ caption: label("caption") }), own: staff(200), other: staffOther },
+  { method: "POST", path: "/api/v1/jobs/{id}/photos/{photoId}/complete", row: sharedPhoto, own: staff(200), other: staffOther },
+  { method: "GET", path: "/api/v1/jobs/{id}/setup-card.pdf", row: hiddenJob, own: staff(200), other: staffOther },
+  { method: "GET", path: "/api/v1/consult", own: customerOnly(200) },
+  { method: "POST", path: "/api/v1/consult/{id}/approve", row: jobRow({ shared: true }), as: SHARED, mutates: true, own: customerOnly(200), other: customerOnly(404) },
+  { method: "POST", path: "/api/v1/consult/{id}/approve", row: jobRow({}), as: HIDDEN, mutates: true, own: customerOnly(404), other: customerOnly(404) },
+  { method: "POST", path: "/api/v1/payments/checkout", row: approvedShared, as: `approved, ${SHARED}`, body: ({ params }) => ({ jobId: params.id }), own: customerOnly(201), other: customerOnly(404) },
+  { method: "POST", path: "/api/v1/payments/checkout", row: approvedHidden, as: `approved, ${HIDDEN}`, body: ({ params }) => ({ jobId: params.id }), own: customerOnly(404), other: customerOnly(404) },
+  { method: "POST", path: "/api/v1/payments/webhook", as: "an unsigned completed event", body: completedEvent, check: changesNothing, own: anyone(400) },
+  {
+    method: "POST",
+    path: "/api/v1/payments/webhook",
+    as: "a completed event signed with another secret",
+    body: completedEvent,
+    headers: (_ctx, body) => ({ "stripe-signature": Stripe.webhooks.generateTestHeaderString({ payload: String(body), secret: "whsec_not_the_shops_secret" }) }),
+    check: changesNothing,
+    own: anyone(400),
+  },
+  {
+    method: "POST",
+    path: "/api/v1/payments/webhook",
+    as: "a genuine event of a kind that changes no job",
+    body: () => JSON.stringify({ id: `evt_matrix_${randomUUID()}`, object: "event", type: "payment_intent.created", data: { object: { id: `pi_${randomUUID()}`, object: "payment_intent" } } }),
+    headers: (_ctx, body) => ({ "stripe-signature": Stripe.webhooks.generateTestHeaderString({ payload: String(body), secret: inject("jobFakes").webhookSecret }) }),
+    check: async (_ctx, body) => expect((await paymentState(eventId(body))).recorded).toBe(1),
+    own: anyone(200),
+  },
+];
+
 const MATRIX: RouteCase[] = [
   ...library("cases"),
   ...library("kits"),
@@ -105,6 +306,7 @@ const MATRIX: RouteCase[] = [
   { method: "POST", path: "/api/v1/me", body: () => ({ units: "mm" }), own: member(200) },
   { method: "GET", path: "/api/v1/shops", own: member(200) },
   { method: "POST", path: "/api/v1/shops", body: () => ({ name: label("shop") }), own: member(201) },
+  ...JOBS,
   { method: "GET", path: "/api/auth/{...all}", own: anyone(200), skip: "the sign-in library's own endpoints, covered by the sign-in tests" },
   { method: "POST", path: "/api/auth/{...all}", own: anyone(200), skip: "the sign-in library's own endpoints, covered by the sign-in tests" },
 ];
@@ -148,7 +350,7 @@ describe("authorization matrix", () => {
     const sides: Side[] = route.entity || route.row ? ["own", "other"] : ["none"];
     for (const side of sides) {
       const expected = side === "other" ? route.other : route.own;
-      it(`${route.method} ${route.path}${side === "none" ? "" : ` on ${side === "own" ? "a row of the caller's shop" : "another shop's row"}`}: ${JSON.stringify(expected)}`, async () => {
+      it(`${route.method} ${route.path}${side === "none" ? "" : ` on ${side === "own" ? "a row of the caller's shop" : "another shop's row"}`}${route.as ? ` (${route.as})` : ""}: ${JSON.stringify(expected)}`, async () => {
         expect(expected, "the matrix gives an expectation for each side").toBeDefined();
         const actual: Partial<Expected> = {};
         for (const actor of ACTORS) {
@@ -156,6 +358,7 @@ describe("authorization matrix", () => {
           const shops = shopsFor(actor);
           const rowShop = side === "other" ? shops.other : shops.own;
           let path = route.path;
+          let params: Record<string, string> = {};
           if (route.entity) {
             const key = `${route.entity}:${rowShop === shopA ? "A" : "B"}`;
             let row = route.mutates ? undefined : shared.get(key);
@@ -163,12 +366,14 @@ describe("authorization matrix", () => {
             if (!route.mutates) shared.set(key, row);
             path = path.replace("{id}", row.id);
           } else if (route.row) {
-            const params = await route.row(rowShop);
+            params = await route.row(rowShop);
             for (const [k, v] of Object.entries(params)) path = path.replace(`{${k}}`, encodeURIComponent(v));
           }
-          const body = route.body ? await route.body({ actor, shop: shops.own, http }) : route.method === "POST" ? {} : undefined;
-          const res = await http.send(route.method, path + (route.query ?? ""), body);
+          const ctx: Ctx = { actor, shop: shops.own, http, params };
+          const body = route.body ? await route.body(ctx) : route.method === "POST" ? {} : undefined;
+          const res = await http.send(route.method, path + (route.query ?? ""), body, route.headers?.(ctx, body));
           actual[actor] = res.status;
+          await route.check?.(ctx, body, res.status);
           if (res.status >= 400) {
             expect(res.json, `${actor}: ${res.text.slice(0, 200)}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
             // A refusal never tells whether another shop's row exists.

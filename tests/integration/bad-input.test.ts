@@ -1,7 +1,9 @@
 // Every POST and PATCH route, fed malformed bodies that fast-check builds from a valid one: each answer
 // is a 4xx in the one JSON error shape, and the shop's rows are exactly as they were.
+import { randomUUID } from "node:crypto";
 import fc from "fast-check";
-import { beforeAll, describe, expect, it } from "vitest";
+import Stripe from "stripe";
+import { beforeAll, describe, expect, inject, it } from "vitest";
 import type { z } from "zod";
 import {
   CaseCreateSchema,
@@ -16,7 +18,17 @@ import {
   StudyPatchSchema,
   StudySchema,
 } from "../../app/api/v1/_lib/schemas";
-import { Http, testDb } from "../support/http";
+import {
+  JobCreateSchema,
+  JobMoveSchema,
+  JobPatchSchema,
+  PhotoPatchSchema,
+  PhotoRequestSchema,
+  QuestionSchema,
+  ReadingsBodySchema,
+} from "../../app/api/v1/jobs/_lib/schemas";
+import { Http, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
+import { insertExampleStudy, jobBody, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, newStudy, ok, rigData } from "./library-fixtures";
 
 type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
@@ -33,6 +45,8 @@ type Target = {
   schema?: z.ZodType;
   /** Routes that take no body: only non-empty bodies are sent. */
   bodyless?: boolean;
+  /** Who sends it, when not the shop's owner. */
+  as?: () => Http;
 };
 
 const MB = 1024 * 1024;
@@ -133,6 +147,9 @@ let http: Http;
 let shopId: string;
 let userId: string;
 let ids: { caseId: string; kitId: string; rigId: string; studyId: string };
+/** The shop's own customer (invited through a shared job), and the jobs the targets below work on. */
+let customer: Http;
+let job: { studyId: string; intake: string; shared: string; approved: string; machined: string; photoId: string; unpaid: string; sessionId: string };
 
 /** Everything of the test shop that a request could change, as one string. */
 async function fingerprint(): Promise<string> {
@@ -145,7 +162,16 @@ async function fingerprint(): Promise<string> {
               (select count(*) from study_event where study_id in (select id from study where organization_id = ?1)) as events,
               (select version || ':' || units || ':' || limits_json from shop_settings where organization_id = ?1) as settings,
               (select units || ':' || updated_at from user where id = ?2) as me,
-              (select count(*) from member where user_id = ?2) as memberships`,
+              (select count(*) from member where user_id = ?2) as memberships,
+              (select group_concat(id || ':' || version || ':' || updated_at || ':' || status || ':' || ifnull(shared_at, '') || ':' || ifnull(approved_at, '') || ':' || ifnull(paid_at, '') || ':' || deposit_amount, ',')
+                 from (select * from job where organization_id = ?1 order by id)) as jobs,
+              (select count(*) from job_event where job_id in (select id from job where organization_id = ?1)) as jobEvents,
+              (select count(*) from job_reading where job_id in (select id from job where organization_id = ?1)) as jobReadings,
+              (select count(*) from job_question where job_id in (select id from job where organization_id = ?1)) as jobQuestions,
+              (select group_concat(id || ':' || state || ':' || shared || ':' || caption, ',') from (select * from job_photo where organization_id = ?1 order by id)) as photos,
+              (select group_concat(id || ':' || status || ':' || ifnull(paid_at, ''), ',') from (select * from job_payment where job_id in (select id from job where organization_id = ?1) order by id)) as payments,
+              (select count(*) from payment_event where id like 'evt_bad_input_%') as paymentEvents,
+              (select group_concat(id || ':' || status, ',') from (select * from invitation where organization_id = ?1 order by id)) as invitations`,
       args: [shopId, userId],
     });
     return JSON.stringify(r.rows[0]);
@@ -153,6 +179,63 @@ async function fingerprint(): Promise<string> {
     db.close();
   }
 }
+
+/** The smallest valid PNG: the 8-byte signature (PNG spec, ISO/IEC 15948 §5.2) and a 1×1 image. */
+const PNG = Buffer.from("89504e470d0a1a0a0000000d4948445200000001000000010806000000" + "1f15c4890000000d49444154789c6360000002000001e221bc330000000049454e44ae426082", "hex");
+
+/** A "checkout completed, paid" event for the unpaid job's open checkout (sent unsigned, it must change nothing). */
+const completedEvent = (id = "evt_bad_input_completed"): Json => ({
+  id,
+  object: "event",
+  type: "checkout.session.completed",
+  data: { object: { id: job.sessionId, object: "checkout.session", payment_status: "paid", amount_total: 5000, currency: "eur" } },
+});
+
+/** The job, consult and payment routes, each tried on its own (one route's failure does not hide another's). */
+const jobTargets: { name: string; target: () => Target }[] = [
+  {
+    name: "POST /api/v1/jobs",
+    target: () => ({ method: "POST", path: "/api/v1/jobs", valid: () => jobBody({ studyId: job.studyId, customerEmail: "walk-in@example.test", verifyToleranceMm: 0.05, notes: "n" }) as Json, required: ["title", "customerName", "customerEmail"], schema: JobCreateSchema }),
+  },
+  {
+    name: "PATCH /api/v1/jobs/{id}",
+    target: () => ({ method: "PATCH", path: `/api/v1/jobs/${job.intake}`, valid: () => ({ version: 1, title: "Renamed", depositAmount: 4000, currency: "usd", verifyToleranceMm: 0.08, notes: "n" }), required: ["version"], schema: JobPatchSchema }),
+  },
+  {
+    name: "POST /api/v1/jobs/{id}/move",
+    target: () => ({ method: "POST", path: `/api/v1/jobs/${job.shared}/move`, valid: () => ({ to: "approved", reason: "approved by phone" }), required: ["to"], schema: JobMoveSchema }),
+  },
+  {
+    name: "POST /api/v1/jobs/{id}/readings",
+    target: () => ({
+      method: "POST",
+      path: `/api/v1/jobs/${job.machined}/readings`,
+      valid: () => ({ ...PASSING_READINGS, notes: "measured twice" }) as Json,
+      required: ["cutDiameterMm", "cutDepthMm", "sealingLandMm", "sealingLandMm.0.stud", "sealingLandMm.0.valueMm", "gasketStackMm", "chipsCleaned", "trialFit"],
+      schema: ReadingsBodySchema,
+    }),
+  },
+  { name: "POST /api/v1/jobs/{id}/share", target: () => ({ method: "POST", path: `/api/v1/jobs/${job.shared}/share`, valid: () => ({}), required: [], bodyless: true }) },
+  {
+    name: "POST /api/v1/jobs/{id}/questions",
+    target: () => ({ method: "POST", path: `/api/v1/jobs/${job.shared}/questions`, valid: () => ({ text: "Does the cut leave enough wall at the studs?" }), required: ["text"], schema: QuestionSchema }),
+  },
+  {
+    name: "POST /api/v1/jobs/{id}/photos",
+    target: () => ({ method: "POST", path: `/api/v1/jobs/${job.shared}/photos`, valid: () => ({ contentType: "image/png", sizeBytes: PNG.length, caption: "c", kind: "after", shared: false }), required: ["contentType", "sizeBytes"], schema: PhotoRequestSchema }),
+  },
+  {
+    name: "PATCH /api/v1/jobs/{id}/photos/{photoId}",
+    target: () => ({ method: "PATCH", path: `/api/v1/jobs/${job.shared}/photos/${job.photoId}`, valid: () => ({ shared: true, caption: "after the cut" }), required: [], schema: PhotoPatchSchema }),
+  },
+  { name: "POST /api/v1/jobs/{id}/photos/{photoId}/complete", target: () => ({ method: "POST", path: `/api/v1/jobs/${job.shared}/photos/${job.photoId}/complete`, valid: () => ({}), required: [], bodyless: true }) },
+  { name: "POST /api/v1/consult/{id}/approve", target: () => ({ method: "POST", path: `/api/v1/consult/${job.shared}/approve`, valid: () => ({}), required: [], bodyless: true, as: () => customer }) },
+  { name: "POST /api/v1/payments/checkout", target: () => ({ method: "POST", path: "/api/v1/payments/checkout", valid: () => ({ jobId: job.approved }), required: ["jobId"], as: () => customer }) },
+  {
+    name: "POST /api/v1/payments/webhook (unsigned)",
+    target: () => ({ method: "POST", path: "/api/v1/payments/webhook", valid: () => completedEvent(), required: ["id", "type", "data", "data.object.id", "data.object.payment_status"], as: () => new Http() }),
+  },
+];
 
 const studyFile = (): Json => ({ name: "Bad input file", case: { name: "File case", ...caseData() }, kits: [{ id: "k", name: "File kit", ...kitData(47, 53.92) }] }) as Json;
 
@@ -190,6 +273,44 @@ beforeAll(async () => {
   void kits;
   void rig;
   ids = { caseId: c.id, kitId: k.id, rigId: r.id, studyId: study.id };
+
+  // Jobs of every status the job routes act on, each of which a well-formed request would change.
+  const { studyId } = await insertExampleStudy(shopId, userId, "Bad input example study");
+  const customerEmail = uniqueEmail("bad-input-customer");
+  const newJob = async (over: Record<string, unknown> = { studyId }) => ok<{ item: { id: string } }>(await http.post("/api/v1/jobs", jobBody({ customerEmail, ...over })), 201).item.id;
+  const move = async (id: string, to: string, reason?: string) => ok(await http.post(`/api/v1/jobs/${id}/move`, reason ? { to, reason } : { to }));
+  const shared = await newJob();
+  ok(await http.post(`/api/v1/jobs/${shared}/share`));
+  const mail = await waitForMail(customerEmail, /shares the plan/);
+  const invitationId = mail.links.find((l) => l.includes("/invite/"))!.split("/invite/")[1];
+  customer = await signUp("Wren Tallow", customerEmail);
+  ok(await customer.post("/api/auth/organization/accept-invitation", { invitationId }));
+  ok(await customer.post("/api/auth/organization/set-active", { organizationId: shopId }));
+  expect(ok<{ me: { role: string; shopId: string } }>(await customer.get("/api/v1/me")).me).toMatchObject({ role: "customer", shopId });
+  const intake = await newJob({});
+  const approved = await newJob();
+  ok(await http.post(`/api/v1/jobs/${approved}/share`));
+  await move(approved, "approved", "approved by phone");
+  const machined = await newJob();
+  await move(machined, "approved", "approved by phone");
+  await move(machined, "machined");
+  const start = ok<{ id: string; uploadUrl: string }>(await http.post(`/api/v1/jobs/${shared}/photos`, { contentType: "image/png", sizeBytes: PNG.length, kind: "after" }), 201);
+  expect((await fetch(start.uploadUrl, { method: "PUT", headers: { "content-type": "image/png" }, body: PNG })).status).toBe(200);
+  ok(await http.post(`/api/v1/jobs/${shared}/photos/${start.id}/complete`));
+  // An approved job with an open deposit checkout that a genuine completed event would mark paid.
+  const unpaid = await newJob();
+  await move(unpaid, "approved", "approved by phone");
+  const sessionId = `cs_bad_input_${randomUUID()}`;
+  const db = testDb();
+  try {
+    await db.execute({
+      sql: "insert into job_payment (id, job_id, checkout_session_id, amount, currency, status, created_by_id) values (?, ?, ?, 5000, 'eur', 'open', ?)",
+      args: [randomUUID(), unpaid, sessionId, userId],
+    });
+  } finally {
+    db.close();
+  }
+  job = { studyId, intake, shared, approved, machined, photoId: start.id, unpaid, sessionId };
 });
 
 describe("malformed bodies", () => {
@@ -206,7 +327,7 @@ describe("malformed bodies", () => {
             expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
           }
           const text = m.raw ?? JSON.stringify(m.body);
-          const res = await http.send(t.method, t.path, text, { "content-type": "application/json" });
+          const res = await (t.as?.() ?? http).send(t.method, t.path, text, { "content-type": "application/json" });
           expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
           expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
           expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
@@ -216,6 +337,48 @@ describe("malformed bodies", () => {
       );
     }
   }, 240_000);
+
+  for (const { name, target } of jobTargets) {
+    it(`are answered with a 4xx in the one error shape, changing nothing: ${name}`, async () => {
+      const t = target();
+      if (t.schema) expect(t.schema.safeParse(t.valid()).success, "the starting body is accepted").toBe(true);
+      const before = await fingerprint();
+      await fc.assert(
+        fc.asyncProperty(mutations(t), async (m) => {
+          if (m.checkSchema && t.schema && m.body !== undefined) {
+            expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
+          }
+          const text = m.raw ?? JSON.stringify(m.body);
+          const res = await (t.as?.() ?? http).send(t.method, t.path, text, { "content-type": "application/json" });
+          expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
+          expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
+          expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+          expect(await fingerprint(), `${t.method} ${t.path} with ${m.label} changed the database`).toBe(before);
+        }),
+        { numRuns: 40, seed: Number(process.env.FC_SEED ?? Date.now() % 100_000), endOnFailure: true },
+      );
+    }, 60_000);
+  }
+
+  it("refuse an after-cut reading whose stud label is longer than any stud label a plan can have, and write nothing", async () => {
+    // The core names a stud in at most 80 characters; a reading names one of the plan's studs.
+    const before = await fingerprint();
+    const sealingLandMm = PASSING_READINGS.sealingLandMm.map((s, i) => (i === 0 ? { ...s, stud: "x".repeat(100_000) } : s));
+    const res = await http.post(`/api/v1/jobs/${job.machined}/readings`, { ...PASSING_READINGS, sealingLandMm });
+    expect(res.status, res.text.slice(0, 200)).toBe(400);
+    expect(res.json).toMatchObject({ error: { code: expect.any(String), message: expect.any(String), fields: { "sealingLandMm.0.stud": expect.any(String) } } });
+    expect(await fingerprint()).toBe(before);
+  });
+
+  it("leave the open checkout live: the same completed event, signed by the payment service, marks the deposit paid", async () => {
+    const payload = JSON.stringify(completedEvent(`evt_bad_input_${randomUUID()}`));
+    const signature = Stripe.webhooks.generateTestHeaderString({ payload, secret: inject("jobFakes").webhookSecret });
+    const res = await new Http().post("/api/v1/payments/webhook", payload, { "stripe-signature": signature });
+    expect(res.status, res.text).toBe(200);
+    expect(res.json).toMatchObject({ received: true, applied: true });
+    const detail = ok<{ job: { deposit: { paid: boolean } } }>(await http.get(`/api/v1/jobs/${job.unpaid}`));
+    expect(detail.job.deposit.paid).toBe(true);
+  });
 
   it("answer an oversize body with 413", async () => {
     const res = await http.send("POST", "/api/v1/cases", JSON.stringify({ name: "Big", notes: "x".repeat(2 * MB), data: caseData() }));
