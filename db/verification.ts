@@ -28,7 +28,7 @@ export const AfterCutReadingsSchema = z.strictObject({
   cutDiameterMm: z.array(mm("A diameter reading")).min(1, "Take at least one diameter reading.").max(20, "Keep to 20 readings or fewer."),
   cutDepthMm: z.array(mm("A depth reading")).min(1, "Take at least one depth reading.").max(20, "Keep to 20 readings or fewer."),
   sealingLandMm: z
-    .array(z.strictObject({ stud: z.string().trim().min(1, "Name the stud."), valueMm: z.number({ error: "The sealing land is a number in mm." }).min(0, "A sealing land cannot be negative.").max(100, "A sealing land above 100 mm cannot be right.") }))
+    .array(z.strictObject({ stud: z.string().trim().min(1, "Name the stud.").max(80, "A stud label has at most 80 characters."), valueMm: z.number({ error: "The sealing land is a number in mm." }).min(0, "A sealing land cannot be negative.").max(100, "A sealing land above 100 mm cannot be right.") }))
     .max(16),
   gasketStackMm: z.number({ error: "The gasket stack is a number in mm." }).min(0, "The gasket stack cannot be negative.").max(10, "A gasket stack above 10 mm cannot be right."),
   chipsCleaned: z.boolean({ error: "Say whether the crankcase was cleaned of chips." }),
