@@ -5,9 +5,8 @@ import { useState } from "react";
 import type { Evaluation } from "./assemble";
 import { TONE_TEXT, VERDICT } from "./fmt";
 import { KitResults } from "./kit-results";
-import { StudioSlot } from "./studio-slot";
 
-/** The live results: the fit view's slot, a kit picker and everything the core says about that kit. */
+/** The live results: a kit picker and everything the core says about that kit. */
 export function ResultsView({
   shown,
   units,
@@ -25,7 +24,6 @@ export function ResultsView({
   const current = kits.find((k) => k.kitId === picked) ?? kits.find((k) => k.kitId === chosen) ?? kits[0];
   return (
     <div className="flex flex-col gap-4" aria-label="Results">
-      <StudioSlot study={shown.study} result={shown.result} kitId={current?.kitId ?? null} units={units} />
       <div className="flex flex-wrap gap-2" role="group" aria-label="Kit shown">
         {kits.map((k) => {
           const v = VERDICT[k.verdict];

@@ -23,6 +23,7 @@ import { ResultsView } from "./results-view";
 import { SaveStatusBadge } from "./save-status";
 import { SelectionPanel } from "./selection-panel";
 import { studyBody } from "./study-body";
+import { StudioSlot } from "./studio-slot";
 import { StudyInputsSchema, studyDefaults, studyToCore, type StudyFormValues, type StudyInputs } from "./study-values";
 import { useAutosave } from "./use-autosave";
 import { readStudyInputs, useStudyInputs } from "./use-study-inputs";
@@ -149,6 +150,9 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
           </p>
         ) : null}
 
+        {tab === "plan" && shown ? (
+          <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} />
+        ) : null}
         {tab === "plan" ? (
           <div className="grid gap-5 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
             <div className="flex flex-col gap-4">
