@@ -2,6 +2,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { AccessError } from "@/db/access";
+import { DataError } from "@/db/errors";
 
 /** The one JSON error shape every API route answers with. */
 export type ApiErrorBody = { error: { code: string; message: string; fields?: Record<string, string> } };
@@ -39,6 +40,7 @@ const STATUS: Record<AccessError["code"], number> = { unauthenticated: 401, forb
 export function toErrorResponse(error: unknown) {
   if (error instanceof ApiError) return errorResponse(error.status, error.code, error.message, error.fields);
   if (error instanceof AccessError) return errorResponse(STATUS[error.code], error.code, error.message);
+  if (error instanceof DataError) return errorResponse(error.status, error.code, error.message, error.fields);
   if (error instanceof z.ZodError) return errorResponse(400, "invalid_input", "Some fields are not valid.", fieldsOf(error));
   console.error("unexpected error in an API route:", error);
   return errorResponse(500, "internal", "Something went wrong on the server. Nothing was saved.");
