@@ -2,6 +2,7 @@ import "server-only";
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { join } from "node:path";
+import type { Drawing } from "@/scene/drawing/svg";
 import type { SetupCard } from "./setup-card";
 
 // The setup card as a PDF, drawn on the server with pdfkit, one A4 page, with the app's own fonts
@@ -14,7 +15,8 @@ import type { SetupCard } from "./setup-card";
 // dropped, which a PDF viewer does not use). The result is a valid embedded TrueType subset.
 
 // pdfkit and fontkit read data files next to their own code, so they are loaded from node_modules at
-// run time rather than bundled.
+// run time rather than bundled; so is svg-to-pdfkit, which tells its pattern objects apart by their
+// function name (a name a minifying bundler may rename).
 const nodeRequire = createRequire(join(process.cwd(), "package.json"));
 
 type Point = { x: number; y: number; onCurve: boolean };
@@ -122,9 +124,36 @@ const INK2 = "#5b6167";
 const ACCENT = "#0f5e5c";
 const WARN = "#b3362c";
 
-/** The card as a one-page A4 PDF. */
-export async function setupCardPdf(card: SetupCard): Promise<Buffer> {
+const MM = 72 / 25.4;
+/** The drawings' height on the card, in points: at most this, and below the least they are left out. */
+const DRAWING_HEIGHT = { max: 230, min: 90 };
+
+type Svg2Pdf = typeof import("svg-to-pdfkit");
+
+/**
+ * The card as a one-page A4 PDF, with the plan and section drawings side by side when given. The page
+ * is laid out once without the drawings to learn how much room the text leaves them, then for real:
+ * the drawings take that room (up to DRAWING_HEIGHT.max), so a card with many warnings still fits one page.
+ */
+export async function setupCardPdf(card: SetupCard, drawings: readonly Drawing[] = []): Promise<Buffer> {
   const PDFDocument = nodeRequire("pdfkit") as typeof import("pdfkit");
+  const SVGtoPDF = nodeRequire("svg-to-pdfkit") as Svg2Pdf;
+  let drawingHeight = 0;
+  if (drawings.length) {
+    const probe = layOut(PDFDocument, SVGtoPDF, card, drawings, 0);
+    const room = probe.doc.page.height - probe.doc.page.margins.bottom - probe.endY - 2;
+    probe.doc.end();
+    await probe.done;
+    drawingHeight = Math.min(DRAWING_HEIGHT.max, Math.floor(room));
+  }
+  const card1 = layOut(PDFDocument, SVGtoPDF, card, drawingHeight >= DRAWING_HEIGHT.min ? drawings : [], drawingHeight);
+  repairUnicodeMaps(card1.doc);
+  card1.doc.end();
+  return card1.done;
+}
+
+/** Draws the card; with drawings and a height of 0 it draws their heading and captions only (the measuring pass). */
+function layOut(PDFDocument: typeof import("pdfkit"), SVGtoPDF: Svg2Pdf, card: SetupCard, drawings: readonly Drawing[], drawingHeight: number) {
   const doc = new PDFDocument({ size: "A4", margin: 36, info: { Title: card.title, Author: card.shopName, Subject: "Bench setup card", Creator: "Borewright" } });
   doc.registerFont("body", embeddableFont(join(process.cwd(), FONT_FILES.body)) as unknown as string);
   doc.registerFont("num", embeddableFont(join(process.cwd(), FONT_FILES.numbers)) as unknown as string);
@@ -137,43 +166,65 @@ export async function setupCardPdf(card: SetupCard): Promise<Buffer> {
 
   const left = 36;
   const width = doc.page.width - 72;
-  const heading = (t: string) => {
-    doc.moveDown(0.4).font("body").fontSize(10.5).fillColor(ACCENT).text(t.toUpperCase(), left, undefined, { characterSpacing: 0.6 });
+  const gutter = 16;
+  const half = (width - gutter) / 2;
+  const heading = (t: string, x = left, w = width) => {
+    doc.moveDown(0.4).font("body").fontSize(10.5).fillColor(ACCENT).text(t.toUpperCase(), x, undefined, { characterSpacing: 0.6, width: w });
     const y = doc.y + 1;
-    doc.moveTo(left, y).lineTo(left + width, y).lineWidth(0.5).strokeColor("#d9d3c6").stroke();
+    doc.moveTo(x, y).lineTo(x + w, y).lineWidth(0.5).strokeColor("#d9d3c6").stroke();
     doc.moveDown(0.25);
   };
-  const lines = (items: { label: string; value: string; warn?: boolean }[], labelWidth = 190) => {
+  const lines = (items: { label: string; value: string; warn?: boolean }[], labelWidth = 190, x = left, w = width, size = 8.5) => {
     for (const l of items) {
       const y = doc.y;
-      doc.font("body").fontSize(8.5).fillColor(INK2).text(l.label, left, y, { width: labelWidth });
+      doc.font("body").fontSize(size).fillColor(INK2).text(l.label, x, y, { width: labelWidth });
       const h1 = doc.y - y;
-      doc.font("num").fontSize(8.5).fillColor(l.warn ? WARN : INK).text(l.value, left + labelWidth + 6, y, { width: width - labelWidth - 6 });
+      doc.font("num").fontSize(size).fillColor(l.warn ? WARN : INK).text(l.value, x + labelWidth + 6, y, { width: w - labelWidth - 6 });
       doc.y = Math.max(doc.y, y + h1) + 1.5;
     }
   };
 
   doc.font("body").fontSize(16).fillColor(INK).text(card.title, left, 36);
   doc.font("body").fontSize(8.5).fillColor(INK2).text(`${card.shopName} · bench setup card · one page`);
-  heading("Job");
-  lines(card.header, 110);
-  heading("The plan");
-  lines(card.plan);
+  // The job and the plan side by side, as on the printable page, to leave room for the drawings.
+  const top = doc.y;
+  heading("Job", left, half);
+  lines(card.header, 62, left, half, 8);
+  const leftEnd = doc.y;
+  doc.y = top;
+  heading("The plan", left + half + gutter, half);
+  lines(card.plan, 122, left + half + gutter, half, 8);
+  doc.y = Math.max(leftEnd, doc.y);
   heading("Rig settings");
   if (card.rig) lines(card.rig);
   else doc.font("body").fontSize(8.5).fillColor(WARN).text(card.rigMissing ?? "", left);
-  heading("Set-up checks, in order");
+  if (drawings.length) {
+    heading("Drawings");
+    drawingsRow(doc, SVGtoPDF, drawings, left, width, drawingHeight);
+  }
+  // The checks beside the cautions and the plan's warnings, as on the printable page.
+  const below = doc.y;
+  heading("Set-up checks, in order", left, half);
   card.checks.forEach((c, i) => {
     const y = doc.y;
     doc.rect(left, y + 1, 7, 7).lineWidth(0.6).strokeColor(INK2).stroke();
-    doc.font("body").fontSize(8.5).fillColor(INK).text(`${i + 1}. ${c}`, left + 12, y, { width: width - 12 });
+    doc.font("body").fontSize(8).fillColor(INK).text(`${i + 1}. ${c}`, left + 12, y, { width: half - 12 });
+    doc.y += 1;
   });
-  heading("Cautions");
-  for (const c of card.cautions) doc.font("body").fontSize(8.5).fillColor(INK).text(`!  ${c}`, left, undefined, { width });
-  if (card.warnings.length) {
-    heading("Warnings from the plan");
-    for (const w of card.warnings) doc.font("body").fontSize(8).fillColor(WARN).text(`•  ${w}`, left, undefined, { width });
+  const checksEnd = doc.y;
+  const right = left + half + gutter;
+  doc.y = below;
+  heading("Cautions", right, half);
+  for (const c of card.cautions) {
+    doc.font("body").fontSize(8).fillColor(INK).text(`!  ${c}`, right, undefined, { width: half });
+    doc.y += 1;
   }
+  if (card.warnings.length) {
+    heading("Warnings from the plan", right, half);
+    for (const w of card.warnings) doc.font("body").fontSize(8).fillColor(WARN).text(`•  ${w}`, right, undefined, { width: half });
+  }
+  doc.x = left;
+  doc.y = Math.max(checksEnd, doc.y);
   heading("After-cut readings");
   for (const b of card.blanks) {
     const y = doc.y;
@@ -188,7 +239,44 @@ export async function setupCardPdf(card: SetupCard): Promise<Buffer> {
     doc.y = Math.max(doc.y, y + 17) + 2;
   }
   doc.moveDown(0.5).font("body").fontSize(7).fillColor(INK2).text("Borewright plans cuts; it does not replace the kit maker's instructions, local regulations or a qualified machinist.", left, undefined, { width });
-  repairUnicodeMaps(doc);
-  doc.end();
-  return done;
+  return { doc, done, endY: doc.y };
+}
+
+/**
+ * The drawings side by side, the first (the plan) as tall as the room allows but at most PLAN_SHARE of
+ * the width, the others (the section, wide and low) sharing the rest of the width, centred in the row.
+ * Vector paths, text in the body font, and under each its scale: the drawings are dimensioned, the print
+ * is not to be measured.
+ */
+function drawingsRow(doc: PDFKit.PDFDocument, SVGtoPDF: Svg2Pdf, drawings: readonly Drawing[], left: number, width: number, height: number) {
+  const gap = 14;
+  const PLAN_SHARE = 0.5;
+  const ratio = drawings.map((d) => d.widthMm / d.heightMm);
+  const size: { w: number; h: number }[] = [];
+  const first = { h: Math.min(height, (width * PLAN_SHARE) / ratio[0]), w: 0 };
+  first.w = first.h * ratio[0];
+  size.push(first);
+  const rest = drawings.length > 1 ? (width - first.w - gap * (drawings.length - 1)) / (drawings.length - 1) : 0;
+  for (let i = 1; i < drawings.length; i++) {
+    const h = Math.min(height, rest / ratio[i]);
+    size.push({ w: h * ratio[i], h });
+  }
+  const rowH = Math.max(...size.map((z) => z.h));
+  const total = size.reduce((a, z) => a + z.w, 0) + gap * (drawings.length - 1);
+  const y = doc.y + 2;
+  let x = left + (width - total) / 2;
+  drawings.forEach((d, i) => {
+    const { w, h } = size[i];
+    const top = y + (rowH - h) / 2;
+    if (h > 0) {
+      // The drawing's own size attributes are in millimetres; on the card its size is set in points.
+      const svg = d.svg.replace(/^<svg([^>]*?) width="[^"]*" height="[^"]*"/, `<svg$1 width="${w}" height="${h}"`);
+      SVGtoPDF(doc, svg, x, top, { width: w, height: h, assumePt: true, fontCallback: () => "body", warningCallback: () => undefined });
+    }
+    const percent = Math.round((h / d.heightMm / MM) * 100);
+    doc.font("body").fontSize(6.5).fillColor(INK2).text(`shown at ${percent} % of full size; do not measure the print`, x, y + rowH + 2, { width: Math.max(w, 60), align: "center", lineBreak: false });
+    x += w + gap;
+  });
+  doc.x = left;
+  doc.y = y + rowH + 12;
 }

@@ -1,6 +1,9 @@
 // The content of a job's bench setup card, built once from the plan snapshot so the printable page and
 // the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
 import { formatLength, type LengthUnits } from "@/geometry";
+import { planDrawing, type PlanOptions } from "@/scene/drawing/plan";
+import { sectionDrawing } from "@/scene/drawing/section";
+import type { Drawing } from "@/scene/drawing/svg";
 import type { PlanSnapshot } from "./jobs";
 
 export type CardLine = { label: string; value: string; warn?: boolean };
@@ -144,4 +147,17 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     warnings: k.warnings.map((w) => w.message),
     kitIndex,
   };
+}
+
+/**
+ * The card's two drawings of the planned kit (plan at the deck, section through the axis), the same for the
+ * printable page and the PDF. A plan the drawing code cannot draw leaves the card without drawings rather
+ * than without its figures.
+ */
+export function setupCardDrawings(plan: PlanSnapshot, kitIndex: number, units: LengthUnits, options: PlanOptions = {}): Drawing[] {
+  try {
+    return [planDrawing(plan.study, plan.result, kitIndex, units, options), sectionDrawing(plan.study, plan.result, kitIndex, units)];
+  } catch {
+    return [];
+  }
 }

@@ -11,8 +11,14 @@ export const STATE_COLOR = { interfere: INK.interfere, tight: INK.tight, clear: 
 const flip = (p: Vec2): Vec2 => [p[0], -p[1]];
 const path = (ring: readonly Vec2[]) => ringPath(ring.map(flip));
 
+/** Options of planDrawing. */
+export interface PlanOptions {
+  /** The scale note in the corner; null leaves it out (for a sheet that shows the drawing scaled down and says so itself). */
+  readonly scaleNote?: string | null;
+}
+
 /** The plan drawing of one kit of a study: deck, mouth, pockets, stud holes, the planned cut, the skirt, the interference at the deck and the thinnest wall, dimensioned. */
-export function planDrawing(study: Study, result: StudyResult, kitIndex: number, units: LengthUnits): Drawing {
+export function planDrawing(study: Study, result: StudyResult, kitIndex: number, units: LengthUnits, options: PlanOptions = {}): Drawing {
   const cs = study.case;
   const k = result.kits[kitIndex];
   const state = fitState(k, result);
@@ -87,7 +93,8 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
     ty += fs * 1.3;
     body.push(text(minX + fs * 2, ty, `${s.label}: x ${lengthText(s.positionMm[0], units)}, y ${lengthText(s.positionMm[1], units)}`, fs * 0.9, { class: "num" }));
   }
-  body.push(text(maxX - fs, -b.maxY - fs * 5.5, "1:1 when printed at 100 %", fs * 0.85, { "text-anchor": "end", fill: INK.ink2 }));
+  const scaleNote = options.scaleNote === undefined ? "1:1 when printed at 100 %" : options.scaleNote;
+  if (scaleNote) body.push(text(maxX - fs, -b.maxY - fs * 5.5, scaleNote, fs * 0.85, { "text-anchor": "end", fill: INK.ink2 }));
   return sheet(`Plan at the deck: ${k.name}`, minX, minY, maxX - minX, maxY - minY, body.join(""));
 }
 

@@ -63,6 +63,12 @@ describe("a job in the browser, from the study to verified", () => {
     expect(await sofa.getByText("Fits once the case mouth is cut to size.").count()).toBeGreaterThan(0);
     await sofa.waitForTimeout(1500); // let the 3D view draw
     await screenshot(sofa, "jobs-02-consult-fit");
+    // The customer's studio is locked in customer mode: no way to the bench view and its cut controls.
+    expect(await sofa.getByTestId("studio").getAttribute("data-customer")).toBe("true");
+    expect(await sofa.getByTestId("customer-toggle").count()).toBe(0);
+    expect(await sofa.getByText("Back to the bench view").count()).toBe(0);
+    expect(await sofa.getByLabel("Planned cut").count()).toBe(0);
+    expect(await sofa.getByTestId("cut-diameter").count()).toBe(0);
     await sofa.getByRole("button", { name: "Approve this plan" }).click();
     await expect.poll(() => sofa.getByTestId("approved-line").count(), { timeout: 10_000 }).toBe(1);
     expect(await sofa.getByTestId("approved-line").textContent()).toContain("Wren Calloway");
@@ -129,7 +135,16 @@ describe("a job in the browser, from the study to verified", () => {
     expect(pdf.fontsEmbedded).toBe(2);
     expect(pdf.text).toContain("44.80 mm");
     expect(pdf.text).toMatch(/Wear eye protection/);
-    expect(pdf.text).toMatch(/legal class; local rules decide/);
+    expect(pdf.text).toMatch(/legal class;\s+local rules decide/);
+    expect(pdf.text).toContain("Plan at the deck");
+
+    // ── Closing the job: no moves are left, and the page says so in one line instead of an empty box.
+    await bench.goto(`/jobs/${jobId}`);
+    await bench.getByRole("button", { name: "Close the job" }).click();
+    await expect.poll(() => bench.getByTestId("job-status").textContent(), { timeout: 10_000 }).toBe("Closed");
+    expect(await bench.getByTestId("job-closed").textContent()).toBe("This job is closed.");
+    expect(await bench.getByRole("button", { name: /Share|Move|Mark|Back to/ }).count()).toBe(0);
+    await screenshot(bench, "jobs-07-job-closed");
     await shop.close();
     await home.close();
   });

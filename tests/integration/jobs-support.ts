@@ -84,8 +84,12 @@ export const jobBody = (over: Record<string, unknown> = {}) => ({
   ...over,
 });
 
-/** Pages, embedded TrueType fonts and the text of a pdfkit PDF: inflates each stream and maps glyph ids back through the fonts' ToUnicode maps. */
-export function readPdf(pdf: Buffer): { pages: number; fontsEmbedded: number; text: string } {
+/**
+ * Pages, embedded TrueType fonts, the text and the drawing operators of a pdfkit PDF: inflates each stream
+ * and maps glyph ids back through the fonts' ToUnicode maps; `content` is every inflated content stream
+ * (pages, patterns) that is not a font, a character map or a cross-reference table.
+ */
+export function readPdf(pdf: Buffer): { pages: number; fontsEmbedded: number; text: string; content: string } {
   const raw = pdf.toString("latin1");
   const objects = new Map<string, string>();
   for (const m of raw.matchAll(/(\d+) 0 obj([\s\S]*?)endobj/g)) objects.set(m[1], m[2]);
@@ -124,6 +128,7 @@ export function readPdf(pdf: Buffer): { pages: number; fontsEmbedded: number; te
   const resources = new Map<string, string>();
   for (const body of objects.values()) for (const r of body.matchAll(/\/(F\d+) (\d+) 0 R/g)) resources.set(r[1], r[2]);
   let text = "";
+  let streams = "";
   for (const body of objects.values()) {
     if (!/stream/.test(body) || /\/Length1|\/Type \/XRef|CMapName|\/Subtype \/Type1C/.test(body)) continue;
     let content: string;
@@ -132,6 +137,7 @@ export function readPdf(pdf: Buffer): { pages: number; fontsEmbedded: number; te
     } catch {
       continue;
     }
+    streams += content + "\n";
     if (!/BT[\s\S]*ET/.test(content)) continue;
     let font: Map<string, string> | undefined;
     for (const op of content.matchAll(/\/(F\d+) [\d.]+ Tf|\[([^\]]*)\] TJ|<([0-9a-f]+)> Tj|(ET)/gi)) {
@@ -146,5 +152,5 @@ export function readPdf(pdf: Buffer): { pages: number; fontsEmbedded: number; te
       }
     }
   }
-  return { pages, fontsEmbedded, text };
+  return { pages, fontsEmbedded, text, content: streams };
 }

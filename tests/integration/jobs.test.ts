@@ -302,7 +302,7 @@ describe("photos through presigned URLs against the object store", () => {
 });
 
 describe("the setup card PDF", () => {
-  it("is one A4 page with the fonts embedded and the rig settings and cautions in its text", async () => {
+  it("is one A4 page with the fonts embedded, the rig settings, cautions and the plan and section drawings", async () => {
     const job = await plannedJob();
     const res = await fetch(`${builder.base}/api/v1/jobs/${job.id}/setup-card.pdf`, {
       headers: { cookie: [...builder.cookies].map(([k, v]) => `${k}=${v}`).join("; "), "x-forwarded-for": builder.address },
@@ -310,17 +310,30 @@ describe("the setup card PDF", () => {
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toBe("application/pdf");
     const pdf = Buffer.from(await res.arrayBuffer());
-    const { pages, fontsEmbedded, text } = readPdf(pdf);
+    const { pages, fontsEmbedded, text, content } = readPdf(pdf);
     expect(pages).toBe(1);
+    // Only the app's two faces: the drawings' text is set in the body face, not in a standard PDF font.
     expect(fontsEmbedded).toBe(2);
+    expect(pdf.toString("latin1")).not.toMatch(/\/BaseFont \/(Helvetica|Times|Courier)/);
     // Figures from the core's result for the example's first kit: cutter setting 44.80 mm, groove 2 with 2 × 0.10 + 1 × 0.50 mm.
     expect(text).toContain("44.80 mm");
     expect(text).toContain("ring in groove 2, 2 × 0.10 mm + 1 × 0.50 mm");
     expect(text).toMatch(/Wear eye protection/);
     expect(text).toMatch(/without crushing it/);
     expect(text).toMatch(/Remove every chip from the crankcase/);
-    expect(text).toMatch(/legal class; local rules decide/);
+    expect(text).toMatch(/legal class;\s+local rules decide/);
     expect(text).toMatch(/qualified machinist/);
+    // The drawings, by their titles and dimension labels (the example's first kit: cut 55.10 mm, mouth 46.00 mm, skirt 53.96 mm).
+    expect(text).toContain("Plan at the deck — Example 47 mm five-port kit");
+    expect(text).toContain("Section through the axis along x — Example 47 mm five-port kit");
+    expect(text.match(/cut Ø 55\.10 mm/g)?.length).toBe(2);
+    expect(text).toContain("mouth Ø 46.00 mm");
+    expect(text).toContain("skirt Ø 53.96 mm");
+    expect(text).toMatch(/shown at \d+ % of full size; do not measure the print/);
+    // Drawn as vector paths: the circles of the plan are Bézier curves (the text blocks draw none), the
+    // section's case material a hatch pattern.
+    expect((content.match(/^[-\d.e ]+ c$/gm) ?? []).length).toBeGreaterThan(20);
+    expect(content).toMatch(/\/Pattern cs/);
   });
 });
 

@@ -4,9 +4,7 @@ import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
 import { jobDetail } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
-import { buildSetupCard } from "@/db/setup-card";
-import { planDrawing } from "@/scene/drawing/plan";
-import { sectionDrawing } from "@/scene/drawing/section";
+import { buildSetupCard, setupCardDrawings } from "@/db/setup-card";
 import { requirePage } from "../../../_ui/guard";
 import { PrintButton } from "./print-button";
 import "./card.css";
@@ -30,12 +28,7 @@ export default async function SetupCardPage({ params }: { params: Promise<{ jobI
     );
   }
   const card = buildSetupCard(detail.job, detail.plan, caller.shopName, caller.units);
-  let drawings: { title: string; svg: string }[] = [];
-  try {
-    drawings = [planDrawing(detail.plan.study, detail.plan.result, card.kitIndex, caller.units), sectionDrawing(detail.plan.study, detail.plan.result, card.kitIndex, caller.units)];
-  } catch {
-    drawings = [];
-  }
+  const drawings = setupCardDrawings(detail.plan, card.kitIndex, caller.units);
   return (
     <main className="setup-card mx-auto bg-white text-[#2b2f33]">
       <div className="no-print mb-4 flex items-center gap-3">

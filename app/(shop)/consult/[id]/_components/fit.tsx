@@ -3,7 +3,7 @@
 import type { Study, StudyResult } from "@/geometry";
 import { Studio } from "../../../studies/[id]/_components/studio/studio";
 
-/** The studio's large-type customer mode, showing the shop's choice. */
+/** The studio's large-type customer mode, locked (no way to the bench view and its cut controls), showing the shop's choice. */
 export function FitForCustomer(props: { study: Study; result: StudyResult; units: "mm" | "in"; chosenKitId: string }) {
-  return <Studio study={props.study} result={props.result} units={props.units} customerMode chosenKitId={props.chosenKitId} />;
+  return <Studio study={props.study} result={props.result} units={props.units} customerMode lockCustomerMode chosenKitId={props.chosenKitId} />;
 }

@@ -65,6 +65,19 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
   }
 
   const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner"));
+  const canShare = hasPlan && job.status !== "closed";
+  const waiting = job.status === "planned" && role !== "owner";
+  // Nothing to do from here (a closed job): no empty box, a one-line note instead.
+  if (moves.length === 0 && !canShare && !waiting) {
+    const closed = job.status === "closed";
+    if (!closed && !notice) return null;
+    return (
+      <div className="flex flex-col gap-2">
+        {closed ? <p className="text-sm text-ink-2" data-testid="job-closed">This job is closed.</p> : null}
+        {notice && !(closed && notice.tone === "ok") ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+      </div>
+    );
+  }
   return (
     <div className="card flex flex-col gap-3 p-4">
       <div className="flex flex-wrap items-center gap-2">
@@ -73,12 +86,12 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
             {pending === to ? "Moving…" : (VERB[`${job.status}>${to}`] ?? `Move to ${STATUS_LABEL[to].toLowerCase()}`)}
           </button>
         ))}
-        {hasPlan && job.status !== "closed" ? (
+        {canShare ? (
           <button type="button" className="btn-quiet" disabled={pending !== null} onClick={share}>
             {pending === "share" ? "Sharing…" : job.sharedAt ? "Share again with the customer" : "Share with the customer"}
           </button>
         ) : null}
-        {job.status === "planned" && role !== "owner" ? <span className="text-sm text-ink-2">Waiting for the customer&apos;s approval.</span> : null}
+        {waiting ? <span className="text-sm text-ink-2">Waiting for the customer&apos;s approval.</span> : null}
       </div>
       {reasonFor || moves.some((to) => NEEDS_REASON.has(`${job.status}>${to}`)) ? (
         <div>

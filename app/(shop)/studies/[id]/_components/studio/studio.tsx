@@ -25,18 +25,21 @@ export interface StudioProps {
   readonly customerMode?: boolean;
   /** The kit marked as the choice, highlighted in the lineup. */
   readonly chosenKitId?: string;
+  /** Customer mode with no way out: no bench-view toggle and so never the cut controls (the consult page). */
+  readonly lockCustomerMode?: boolean;
 }
 
 const STEP_MM = 0.05;
 
 /** The fit studio: the 3D view, the results in words, the cut controls, the kit lineup and the drawings. */
-export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId }: StudioProps) {
+export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
   const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
   const live = useDeferredValue(snap);
   const settled = useSettled(live);
   const proposed = useProposedCuts(study);
-  const [customer, setCustomer] = useState(customerMode);
+  const [customerChosen, setCustomer] = useState(customerMode);
+  const customer = lockCustomerMode || customerChosen;
   const [compare, setCompare] = useState<CompareMode>("one");
   const [view, setView] = useState<Omit<ViewState, "customer" | "units" | "overlay">>({
     section: true,
@@ -88,9 +91,11 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
         <p className="text-sm text-ink-2">
           {study.case.name} · {study.kits.length} {study.kits.length === 1 ? "kit" : "kits"}
         </p>
-        <button type="button" className={customer ? "btn" : "btn-quiet"} aria-pressed={customer} onClick={() => setCustomer((c) => !c)} data-testid="customer-toggle">
-          {customer ? "Back to the bench view" : "Show the customer"}
-        </button>
+        {!lockCustomerMode && (
+          <button type="button" className={customer ? "btn" : "btn-quiet"} aria-pressed={customer} onClick={() => setCustomer((c) => !c)} data-testid="customer-toggle">
+            {customer ? "Back to the bench view" : "Show the customer"}
+          </button>
+        )}
       </div>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
         <div className="flex min-w-0 flex-col gap-3">
