@@ -70,7 +70,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
           value: k.thinnestWall ? `${L(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}` : "—",
           warn: k.thinnestWall ? !k.thinnestWall.ok : false,
         },
-        { label: "Displacement", value: `${k.displacementCc.stockRounded} cc → ${k.displacementCc.kitRounded} cc` },
+        { label: "Displacement", value: `${k.displacementCc.stockRounded} cc to ${k.displacementCc.kitRounded} cc` },
       ]
     : [{ label: "Cut", value: "This kit needs no cut.", warn: false }];
   let rig: CardLine[] | null = null;
