@@ -79,7 +79,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     const r = k.rig;
     const shims = r.depthStop.shims.length ? r.depthStop.shims.map((s) => `${s.count} × ${L(s.thicknessMm)}`).join(" + ") : "no shims";
     rig = [
-      { label: "Cutter setting (caliper across head and bit)", value: L(r.cutterSettingMm) },
+      { label: "Cutter setting (caliper across head and bit)", value: L(r.cutterSettingToSetMm ?? r.cutterSettingMm) },
       {
         label: "Bit length",
         value: r.bitReaches
@@ -120,7 +120,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
       ? `Holder heights read at each stud and within tolerance (planned: ${heights.map((h) => `${h.stud} ${L(h.heightMm + h.straightedgeMm)}`).join(", ")}${align ? `; tilt ${align.tiltDeg.toFixed(3)}°, rocking ${L(align.rockMm)} of ${L(maxRock)} allowed` : ""}).`
       : `Holder heights read at each stud and within tolerance (rocking at most ${L(maxRock)}).`,
     "Bit orientation: cutting edge leading in the direction of rotation; bit tight in the head.",
-    k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",
+    k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",
     k.rig?.depthStop.reached
       ? `Depth stop confirmed with the bit resting on the deck: ring in ${k.rig.depthStop.groove}, stack ${L(k.rig.depthStop.shimStackMm)}.`
       : "Depth stop confirmed with the bit resting on the deck.",

@@ -341,9 +341,13 @@ function rigSetup(rig: BoringRig, diameterMm: number, depthMm: number, L: Resolv
   if (!depthStop.reached) warnings.push(warning("depth-stop-unreachable", messages.depthStopUnreachable(depthMm, depthStop.travelMm)));
   const speed = spindleSpeed(diameterMm, L.cuttingSpeedMinMPerMin, L.cuttingSpeedMaxMPerMin, rig.drillTopRpm);
   if (speed.drillTooSlow) warnings.push(warning("drill-too-slow", messages.drillTooSlow(speed.drillTopRpm, speed.min)));
+  const resolutionMm = rig.settingResolutionMm ?? DEFAULT_SETTING_RESOLUTION_MM;
+  const toSetMm = cleanDecimal(roundUpTo(cutterSettingMm(diameterMm, rig.headDiameterMm), resolutionMm, tol));
   return {
     cutterSettingMm: cutterSettingMm(diameterMm, rig.headDiameterMm),
-    settingResolutionMm: rig.settingResolutionMm ?? DEFAULT_SETTING_RESOLUTION_MM,
+    cutterSettingToSetMm: toSetMm,
+    cutAtSettingMm: cleanDecimal(cutDiameterFromSettingMm(toSetMm, rig.headDiameterMm)),
+    settingResolutionMm: resolutionMm,
     bitLengthMm: rig.bitLengthMm,
     bitReachMm: bit.reachMm,
     bitReaches: bit.reaches,

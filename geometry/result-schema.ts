@@ -84,6 +84,10 @@ export const DepthStopResultSchema = z.object({
 
 export const RigResultSchema = z.object({
   cutterSettingMm: num(),
+  /** The setting to dial in: the exact one rounded up to the rig's resolution, so the cut never comes out smaller. */
+  cutterSettingToSetMm: num().optional(),
+  /** The cut diameter that setting gives: 2·setting − head diameter. */
+  cutAtSettingMm: num().optional(),
   settingResolutionMm: num(),
   bitLengthMm: num(),
   bitReachMm: RangeSchema,

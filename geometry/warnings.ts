@@ -17,7 +17,9 @@ export const messages = {
     `The installed bit is too long to cut ${mm(cutMm)}: grind at least ${mm(grindMm)} off it, or fit a shorter bit.`,
   bitTooShort: (byMm: number, cutMm: number) => `The installed bit is too short to reach ${mm(cutMm)}: fit a bit at least ${mm(byMm)} longer.`,
   hardwareStrikes: (clearMm: number, marginMm: number) =>
-    `The screw heads on the cutter head stick out to within ${mm(clearMm)} of the cut radius (margin wanted ${mm(marginMm)}): they will strike the case before the bit cuts. Use lower-profile screws or a smaller head.`,
+    clearMm < 0
+      ? `The screw heads on the cutter head reach ${mm(-clearMm)} past the cut radius (they should stay ${mm(marginMm)} inside it): they will strike the case before the bit cuts. Use lower-profile screws or a smaller head.`
+      : `The screw heads on the cutter head come within ${mm(clearMm)} of the cut radius (margin wanted ${mm(marginMm)}): they will strike the case before the bit cuts. Use lower-profile screws or a smaller head.`,
   threadMismatch: (caseThread: string, rigThread: string) =>
     `The case studs are ${caseThread} but the rig's studs or nuts are ${rigThread}: they will not thread on. Do not force them.`,
   kitThreadDiffers: (caseThread: string, kitThread: string) =>

@@ -99,3 +99,19 @@ describe("spindle speed window", () => {
     expect(spindleSpeed(55, 100, 150, 500).drillTooSlow).toBe(true);
   });
 });
+
+describe("the setting to dial in", () => {
+  it("rounds the exact cutter setting up to the rig's resolution, so the cut never comes out smaller than planned", async () => {
+    const { evaluateStudy, parseStudy } = await import("../../geometry/index");
+    const example = JSON.parse((await import("node:fs")).readFileSync("public/examples/study.json", "utf8"));
+    // A planned cut whose exact setting falls between two 0.05 mm marks: (55.13 + head) / 2.
+    const study = parseStudy({ ...example, cut: { ...(example.cut ?? {}), diameterMm: 55.13 } });
+    const rig = evaluateStudy(study).kits[0].rig!;
+    const resolution = rig.settingResolutionMm;
+    expect(rig.cutterSettingToSetMm! + 1e-9).toBeGreaterThanOrEqual(rig.cutterSettingMm);
+    expect(rig.cutterSettingToSetMm! - rig.cutterSettingMm).toBeLessThan(resolution + 1e-9);
+    // On the grid: a whole number of resolution steps (common practice: a caliper reads to 0.05 mm or 0.01 mm).
+    expect(Math.abs(rig.cutterSettingToSetMm! / resolution - Math.round(rig.cutterSettingToSetMm! / resolution))).toBeLessThan(1e-6);
+    expect(rig.cutAtSettingMm!).toBeGreaterThanOrEqual(55.13 - 1e-9);
+  });
+});

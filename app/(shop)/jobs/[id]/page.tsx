@@ -69,7 +69,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
             <dl className="grid grid-cols-2 gap-y-1 text-sm sm:grid-cols-4">
               <dt className="text-ink-2">Kit</dt><dd className="sm:col-span-3">{kit.name} <span className="text-ink-3">(study “{plan.studyName}”{job.studyId ? <> · <Link href={`/studies/${job.studyId}`}>open</Link></> : null})</span></dd>
               <dt className="text-ink-2">Cut</dt><dd className="num sm:col-span-3">{kit.cut ? `⌀ ${L(kit.cut.diameterMm)} × ${L(kit.cut.depthMm)} deep` : "no cut needed"}</dd>
-              <dt className="text-ink-2">Cutter setting</dt><dd className="num">{kit.rig ? L(kit.rig.cutterSettingMm) : "—"}</dd>
+              <dt className="text-ink-2">Cutter setting</dt><dd className="num">{kit.rig ? L(kit.rig.cutterSettingToSetMm ?? kit.rig.cutterSettingMm) : "—"}</dd>
               <dt className="text-ink-2">Depth stop</dt><dd>{kit.rig ? `${kit.rig.depthStop.groove}, stack ${L(kit.rig.depthStop.shimStackMm)}` : "—"}</dd>
               <dt className="text-ink-2">Displacement</dt><dd className="num">{kit.displacementCc.stockRounded} → {kit.displacementCc.kitRounded} cc</dd>
               <dt className="text-ink-2">Taken</dt><dd className="num">{plan.takenAt.slice(0, 16).replace("T", " ")}</dd>

@@ -84,7 +84,7 @@ export function KitResults({ kit, result, units }: { kit: KitResult; result: Stu
 
       <section aria-label="Alignment" className="flex flex-col gap-2">
         <h3 className="font-semibold">Alignment</h3>
-        <AlignmentFigures a={kit.alignment} units={units} />
+        <AlignmentFigures a={kit.alignment} units={units} kit={kit} limits={L} />
       </section>
 
       <section aria-label="Stud pattern" className="text-sm">

@@ -1,6 +1,6 @@
-import type { KitResult, LengthUnits, RigResult } from "@/geometry";
+import type { KitResult, LengthUnits, RigResult, StudyResult } from "@/geometry";
 import { Figure } from "./figure";
-import { len } from "./fmt";
+import { len, signedLen } from "./fmt";
 
 /** How to set the boring rig for the cut: cutter setting, bit reach, hardware, depth stop, speed. */
 export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null; units: LengthUnits; cutDiameterMm: number | null }) {
@@ -12,8 +12,8 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
     <div className="grid gap-2 sm:grid-cols-2" data-testid="rig-setup">
       <Figure
         label="Cutter setting (caliper across the head and the bit)"
-        value={len(rig.cutterSettingMm, units)}
-        note={`read to ${len(rig.settingResolutionMm, units)} · gives a ${len(cutDiameterMm, units)} cut`}
+        value={len(rig.cutterSettingToSetMm ?? rig.cutterSettingMm, units)}
+        note={`exact ${len(rig.cutterSettingMm, units)}, rounded up to the ${len(rig.settingResolutionMm, units)} the calipers read · cuts ${len(rig.cutAtSettingMm ?? cutDiameterMm, units)}`}
       />
       <Figure
         label="Bit"
@@ -24,8 +24,20 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
       <Figure
         label="Screw heads on the head"
         tone={rig.hardwareClears === null ? undefined : rig.hardwareClears ? "clear" : "interfere"}
-        value={rig.hardwareClearanceMm === null ? "not given" : rig.hardwareClears ? `clear by ${len(rig.hardwareClearanceMm, units)}` : `strike: ${len(rig.hardwareClearanceMm, units)}`}
-        note="distance from the cut radius to the outermost rotating hardware"
+        value={
+          rig.hardwareClearanceMm === null
+            ? "not given"
+            : rig.hardwareClears
+              ? `clear by ${len(rig.hardwareClearanceMm, units)}`
+              : rig.hardwareClearanceMm < 0
+                ? `strike: ${len(-rig.hardwareClearanceMm, units)} past the cut`
+                : `strike: only ${len(rig.hardwareClearanceMm, units)} inside the cut`
+        }
+        note={
+          rig.hardwareClears === false
+            ? "the screw heads would hit the case before the bit cuts: lower-profile screws or a smaller head"
+            : "distance from the cut radius to the outermost rotating hardware"
+        }
       />
       <Figure
         label="Depth stop"
@@ -44,13 +56,34 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
 }
 
 /** The holder's tilt and what it costs. */
-export function AlignmentFigures({ a, units }: { a: KitResult["alignment"]; units: LengthUnits }) {
+export function AlignmentFigures({ a, units, kit, limits }: { a: KitResult["alignment"]; units: LengthUnits; kit?: KitResult; limits?: StudyResult["limits"]["values"] }) {
   if (!a) return <p className="text-sm text-ink-2">Enter holder heights at three or more studs to see the tilt.</p>;
+  // What the tilt (and any centring offset) takes off the radial clearance to the cut.
+  const asCut = kit?.radialClearanceMm.vsCut ?? null;
+  const withTilt = kit?.effectiveRadialClearanceMm ?? null;
+  const cost = asCut !== null && withTilt !== null ? Math.max(0, asCut - withTilt) : null;
+  const rocks = limits ? a.rockMm > limits.maxRockMm : false;
+  const short = limits && withTilt !== null ? withTilt < limits.minRadialClearanceMm : false;
   return (
-    <div className="grid gap-2 sm:grid-cols-3">
+    <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
       <Figure label="Holder tilt" value={`${a.tiltDeg.toFixed(3)}°`} note={`towards ${Math.round(a.directionDeg)}°`} />
       <Figure label="Rocking" value={len(a.rockMm, units)} note="how far the readings leave one plane" />
       <Figure label="Shift at the cut's bottom" value={len(a.lateralShiftMm, units)} note={`depth varies ${len(a.depthVariationMm, units)} across the bottom`} />
+      {cost !== null ? (
+        <Figure
+          label="What the tilt costs"
+          testId="tilt-cost"
+          tone={rocks || short ? "tight" : "clear"}
+          value={`${len(cost, units)} of clearance`}
+          note={
+            rocks
+              ? "the holder rocks: re-seat it and read again before cutting"
+              : short
+                ? `leaves ${signedLen(withTilt, units)}: shim the holder level before cutting`
+                : `leaves ${signedLen(withTilt, units)}: no shim needed`
+          }
+        />
+      ) : null}
     </div>
   );
 }

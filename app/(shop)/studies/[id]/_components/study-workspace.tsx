@@ -11,7 +11,7 @@ import type { StudyDetail } from "../../../../_ui/query/types";
 import { coreResolver, type FormContext } from "../../../library/_components/form/core-resolver";
 import { errorAt } from "../../../library/_components/form/field-error";
 import { UnitToggle } from "../../../library/_components/form/unit-toggle";
-import { convertLengthTexts } from "../../../library/_components/form/units-text";
+import { convertLengthTexts, type UnitSwitchMemory } from "../../../library/_components/form/units-text";
 import { evaluateInBrowser, type Evaluation } from "./assemble";
 import { ConflictBanner } from "./conflict-banner";
 import { CutPanel } from "./cut-panel";
@@ -31,13 +31,20 @@ import { useStudyRows } from "./use-study-rows";
 
 type Tab = "plan" | "lineup";
 
+/** The study's inputs read from its texts turned into mm (the unit switches' memory gives back what was typed in mm). */
+function inputsInMm(values: StudyFormValues, units: LengthUnits, memory: UnitSwitchMemory): StudyInputs | null {
+  return readStudyInputs(units === "mm" ? values : convertLengthTexts(values, units, "mm", new Map(memory)), "mm");
+}
+
 /** The study page's data side: inputs, live results from the core, background saving, lineup and history. */
 export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: StudyDetail; initialUnits: LengthUnits; onReloaded: () => void }) {
   const item = detail.item;
   const [units, setUnitsState] = useState<LengthUnits>(initialUnits);
   const [tab, setTab] = useState<Tab>("plan");
-  const [defaults] = useState(() => studyDefaults(item, initialUnits));
   const [resolver] = useState(() => coreResolver<StudyFormValues, typeof StudyInputsSchema>(StudyInputsSchema, studyToCore));
+  // Remembers the texts each unit switch replaced, so that switching back restores them as typed.
+  const [unitMemory] = useState<UnitSwitchMemory>(() => new Map());
+  const [defaults] = useState(() => convertLengthTexts(studyDefaults(item, "mm"), "mm", initialUnits, unitMemory));
   const form = useForm<StudyFormValues, FormContext, StudyInputs>({ mode: "onChange", defaultValues: defaults, resolver, context: { units } });
   const values = useWatch({ control: form.control }) as StudyFormValues;
   const inputs = useStudyInputs(values, units);
@@ -57,14 +64,16 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
   const stale = !evaluation?.ok && Boolean(lastGood);
 
   const sel = { caseId: values.caseId, kitIds: values.kitIds, rigId: values.rigId, chosenKitId: values.chosenKitId };
-  const body = studyBody(inputs, sel);
-  const [initialBody] = useState(() => studyBody(readStudyInputs(defaults, initialUnits), defaults) ?? "");
+  // What is saved is read from the texts as millimetres, so a switch of units alone saves nothing.
+  const savedInputs = inputsInMm(values, units, unitMemory);
+  const body = studyBody(savedInputs, sel);
+  const [initialBody] = useState(() => studyBody(inputsInMm(defaults, initialUnits, unitMemory), defaults) ?? "");
   const save = useAutosave(item.id, item.version, initialBody, body);
 
   const setUnits = (next: LengthUnits) => {
     const v = form.getValues();
     setUnitsState(next);
-    form.reset(convertLengthTexts(v, units, next), { keepDefaultValues: true, keepDirty: true });
+    form.reset(convertLengthTexts(v, units, next, unitMemory), { keepDefaultValues: true, keepDirty: true });
     setTimeout(() => void form.trigger(), 0);
   };
   const choose = useCallback((kitId: string) => form.setValue("chosenKitId", kitId, { shouldDirty: true }), [form]);

@@ -38,7 +38,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, propo
   rows.push(["Displacement", `${d.stockRounded} → ${d.kitRounded} cc`, `${d.change >= 0 ? "+" : ""}${d.change.toFixed(1)} cc`]);
   if (k.cut) rows.push(["Aluminium removed", `${(k.removal.volumeMm3 / 1000).toFixed(2)} cm³, ${k.removal.massG.toFixed(1)} g`]);
   if (k.rig) {
-    rows.push(["Cutter setting", `${f(k.rig.cutterSettingMm)} across head and bit`, k.rig.bitReaches ? "bit reaches" : "bit cannot reach"]);
+    rows.push(["Cutter setting", `${f(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)} across head and bit`, k.rig.bitReaches ? "bit reaches" : "bit cannot reach"]);
     const ds = k.rig.depthStop;
     rows.push(["Depth stop", `${ds.groove}${ds.shimCount ? ` + ${ds.shims.map((s) => `${s.count}×${f(s.thicknessMm)}`).join(" + ")}` : ""}`, ds.reached ? `overshoot ${f(ds.overshootMm)}` : "cannot reach"]);
     rows.push(["Spindle", `${Math.round(k.rig.spindleRpm.min)}–${Math.round(k.rig.spindleRpm.max)} rpm`, k.rig.spindleRpm.drillTooSlow ? "drill too slow" : `drill tops at ${k.rig.spindleRpm.drillTopRpm}`]);
