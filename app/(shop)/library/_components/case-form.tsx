@@ -25,7 +25,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
     version: row?.version ?? null,
     schema: CaseProfileSchema,
     initialUnits,
-    defaults: caseDefaults(row, initialUnits),
+    defaults: caseDefaults(row, "mm"),
     toCore: caseToCore,
     toBody: (core, values: CaseFormValues, u) => {
       const { name, ...data } = core;

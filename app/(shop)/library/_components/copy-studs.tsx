@@ -7,7 +7,7 @@ import { studsText } from "./form/read-shapes";
 
 /** Copies a case profile's studs into the kit, for a kit made for that stud pattern. */
 export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
-  const { setValue } = useFormContext();
+  const { setValue, getValues } = useFormContext();
   const cases = useLibraryOptions("cases");
   const items = cases.data?.items ?? [];
   if (items.length === 0) return null;
@@ -20,7 +20,10 @@ export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
         aria-label="Copy studs from a case profile"
         onChange={(e) => {
           const c = items.find((x) => x.id === e.target.value);
-          if (c) setValue("studs", studsText(c.data.studs, units), { shouldDirty: true, shouldValidate: true });
+          if (!c) return;
+          setValue("studs", studsText(c.data.studs, units), { shouldDirty: true, shouldValidate: true });
+          // The case's stud thread goes with its studs, unless the kit already names one.
+          if (c.data.studThread && !String(getValues("studThread") ?? "").trim()) setValue("studThread", c.data.studThread, { shouldDirty: true, shouldValidate: true });
         }}
       >
         <option value="">choose…</option>

@@ -14,6 +14,9 @@ import { UnitToggle } from "./form/unit-toggle";
 import { useLibraryForm } from "./form/use-library-form";
 import { kitDefaults, kitToCore, type KitFormValues } from "./kit-values";
 
+/** Half the last digit of a length shown in inches (0.0001 in): a reading shown in inches still finds its stamp. */
+const INCH_TEXT_MM = 0.0013;
+
 /** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets, price. */
 export function KitForm({ row, units: initialUnits }: { row: KitRow | null; units: LengthUnits }) {
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
@@ -22,7 +25,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
     version: row?.version ?? null,
     schema: CylinderKitSchema,
     initialUnits,
-    defaults: kitDefaults(row, initialUnits),
+    defaults: kitDefaults(row, "mm"),
     toCore: kitToCore,
     toBody: (core, values: KitFormValues) => {
       const { id: _id, name, ...data } = core;
@@ -31,7 +34,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
     },
   });
   const stamp = (list: KitRow["readings"]["skirtDiameter"] | undefined) => (v: number | undefined) => {
-    const r = v === undefined ? undefined : list?.find((x) => Math.abs(x.valueMm - v) < 1e-6);
+    const r = v === undefined ? undefined : list?.find((x) => Math.abs(x.valueMm - v) < INCH_TEXT_MM);
     return r ? { takenBy: r.takenBy.name, takenAt: r.takenAt } : undefined;
   };
 
@@ -79,6 +82,8 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
             label="Base gasket thicknesses supplied"
             units={units}
             counts="smallest"
+            itemLabel="Gasket"
+            addLabel="Add a gasket"
             hint="Each gasket that comes with the kit; blank list when it comes with none."
           />
           <GasketSwitch />

@@ -20,7 +20,7 @@ export function RigForm({ row, units: initialUnits }: { row: RigRow | null; unit
     version: row?.version ?? null,
     schema: BoringRigSchema,
     initialUnits,
-    defaults: rigDefaults(row, initialUnits),
+    defaults: rigDefaults(row, "mm"),
     toCore: rigToCore,
     toBody: (core, values: RigFormValues) => {
       const { name, ...data } = core;

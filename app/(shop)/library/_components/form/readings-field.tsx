@@ -19,6 +19,8 @@ export function ReadingsField<FV extends FieldValues>({
   hint,
   stamps,
   extraError,
+  itemLabel = "Reading",
+  addLabel = "Add a reading",
 }: {
   name: Path<FV>;
   label: string;
@@ -27,6 +29,9 @@ export function ReadingsField<FV extends FieldValues>({
   hint?: string;
   stamps?: (valueMm: number | undefined, index: number) => ReadingStamp;
   extraError?: string;
+  /** What one entry is called ("Reading 2", "Gasket 2"). */
+  itemLabel?: string;
+  addLabel?: string;
 }) {
   const { control, formState } = useFormContext<FV>();
   const { field } = useController({ control, name });
@@ -56,7 +61,7 @@ export function ReadingsField<FV extends FieldValues>({
             <li key={i} className="flex flex-col">
               <div className="flex items-center gap-2">
                 <label htmlFor={`${baseId}-${i}`} className="w-20 shrink-0 text-sm text-ink-2">
-                  Reading {i + 1}
+                  {itemLabel} {i + 1}
                 </label>
                 <input
                   id={`${baseId}-${i}`}
@@ -70,7 +75,7 @@ export function ReadingsField<FV extends FieldValues>({
                   onBlur={field.onBlur}
                 />
                 {isWorst ? <span className="shrink-0 rounded bg-accent-soft px-1.5 py-0.5 text-xs text-accent">counts</span> : null}
-                <button type="button" className="btn-quiet shrink-0" aria-label={`Remove reading ${i + 1}`} onClick={() => set(texts.filter((_, j) => j !== i))}>
+                <button type="button" className="btn-quiet shrink-0" aria-label={`Remove ${itemLabel.toLowerCase()} ${i + 1}`} onClick={() => set(texts.filter((_, j) => j !== i))}>
                   Remove
                 </button>
               </div>
@@ -90,13 +95,13 @@ export function ReadingsField<FV extends FieldValues>({
       </ul>
       <div className="flex flex-wrap items-center gap-3">
         <button type="button" className="btn-quiet" onClick={() => set([...texts, ""])}>
-          Add a reading
+          {addLabel}
         </button>
         <p id={`${baseId}-summary`} className="text-sm text-ink-2" data-testid={`${baseId}-summary`}>
           {worst ? (
             <>
               The {counts} counts: <span className="num text-ink">{formatLength(worst[0], units, { digits: units === "mm" ? 2 : 4 })}</span>
-              {good.length > 1 ? <> (reading {worst[1] + 1})</> : null}
+              {good.length > 1 ? <> ({itemLabel.toLowerCase()} {worst[1] + 1})</> : null}
               {spread !== null ? (
                 <>
                   {" "}

@@ -9,8 +9,8 @@ import { ApiFailure } from "../../../../_ui/query/fetch";
 import { useSaveLibraryRow } from "../../../../_ui/query/library/use-library-mutations";
 import type { LibraryKind } from "../../../../_ui/query/types";
 import { coreResolver, type FormContext } from "./core-resolver";
-import type { FormReader } from "./form-reader";
-import { convertLengthTexts } from "./units-text";
+import { FormReader } from "./form-reader";
+import { convertLengthTexts, type UnitSwitchMemory } from "./units-text";
 
 type Notice = { tone: "error" | "ok"; text: string } | null;
 
@@ -24,6 +24,7 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   version: number | null;
   schema: S;
   initialUnits: LengthUnits;
+  /** The form's first texts, lengths in mm (shown in the initial units). */
   defaults: DefaultValues<FV>;
   toCore: (values: FV, read: FormReader) => unknown;
   toBody: (core: z.output<S>, values: FV, units: LengthUnits) => Record<string, unknown>;
@@ -36,12 +37,28 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   const [version, setVersion] = useState(opts.version);
   const save = useSaveLibraryRow(opts.kind, opts.id);
   const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, opts.toCore));
-  const form = useForm<FV, FormContext, z.output<S>>({ mode: "onChange", defaultValues: opts.defaults, resolver, context: { units } });
+  // Remembers the texts each unit switch replaced, so that switching back restores them as typed.
+  const [unitMemory] = useState<UnitSwitchMemory>(() => new Map());
+  const [defaults] = useState(() => convertLengthTexts(opts.defaults, "mm", opts.initialUnits, unitMemory));
+  const form = useForm<FV, FormContext, z.output<S>>({ mode: "onChange", defaultValues: defaults, resolver, context: { units } });
+
+  /**
+   * What is saved is read from the texts as millimetres: a value shown in inches and left alone goes
+   * back exactly as it was stored (a kept reading keeps who took it and when).
+   */
+  const inMm = (core: z.output<S>): { core: z.output<S>; values: FV; units: LengthUnits } => {
+    const asTyped = { core, values: form.getValues(), units };
+    if (units === "mm") return asTyped;
+    const values = convertLengthTexts(form.getValues(), units, "mm", new Map(unitMemory));
+    const read = new FormReader("mm");
+    const parsed = opts.schema.safeParse(opts.toCore(values, read));
+    return read.issues.length === 0 && parsed.success ? { core: parsed.data as z.output<S>, values, units: "mm" } : asTyped;
+  };
 
   const setUnits = (next: LengthUnits) => {
     const values = form.getValues();
     setUnitsState(next);
-    form.reset(convertLengthTexts(values, units, next), { keepDefaultValues: true, keepDirty: true, keepTouched: true });
+    form.reset(convertLengthTexts(values, units, next, unitMemory), { keepDefaultValues: true, keepDirty: true, keepTouched: true });
     // The context (units) reaches the resolver on the next render; validate after it.
     setTimeout(() => void form.trigger(), 0);
   };
@@ -49,7 +66,8 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   const onSubmit = form.handleSubmit(
     async (core) => {
       setNotice(null);
-      const body = opts.toBody(core, form.getValues(), units);
+      const mm = inMm(core);
+      const body = opts.toBody(mm.core, mm.values, mm.units);
       try {
         const row = await save.mutateAsync(opts.id ? { ...body, version } : body);
         setVersion(row.version);
