@@ -7,6 +7,7 @@ import { EmptyState } from "../../../../_ui/empty-state";
 import { DataTable } from "../../../../_ui/table/data-table";
 import { len, TONE_TEXT, VERDICT } from "./fmt";
 import type { LineupRow } from "./lineup-rows";
+import { blockingReason } from "./reasons";
 
 const h = createColumnHelper<LineupRow>();
 const VERDICT_ORDER = { "fits-as-is": 0, "fits-after-cut": 1, "cannot-fit": 2 } as const;
@@ -43,7 +44,13 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
           header: "Verdict",
           cell: ({ row }) => {
             const v = VERDICT[row.original.kit.verdict];
-            return <span className={`font-medium ${TONE_TEXT[v.tone]}`}>{v.words}</span>;
+            const why = blockingReason(row.original.kit);
+            return (
+              <span className={`font-medium ${TONE_TEXT[v.tone]}`}>
+                {v.words}
+                {why ? <span className="block text-xs font-normal text-ink-2">{why}</span> : null}
+              </span>
+            );
           },
         }),
         h.accessor("needDiameterMm", {

@@ -16,3 +16,12 @@ export const REASON_WORDS: Record<ReasonCode, string> = {
   "cut-breaks-through-deck": "the cut would break through the outside of the case",
   "cut-larger-than-case-allows": "the cut needed is larger than the case can take",
 };
+
+const NOT_A_BLOCK: readonly ReasonCode[] = ["clears-existing-mouth", "needs-cut"];
+
+/** For a kit that cannot fit: the first reason that blocks it, in plain words (null otherwise). */
+export function blockingReason(kit: { verdict: string; reasons: readonly ReasonCode[] }): string | null {
+  if (kit.verdict !== "cannot-fit") return null;
+  const code = kit.reasons.find((r) => !NOT_A_BLOCK.includes(r));
+  return code ? REASON_WORDS[code] : null;
+}

@@ -1,6 +1,7 @@
 import { mmToIn, type LengthUnits, type StudyResult } from "@/geometry";
 import { len, VERDICT } from "./fmt";
 import type { LineupRow } from "./lineup-rows";
+import { blockingReason } from "./reasons";
 
 const COLOR = { clear: "var(--color-clear)", tight: "var(--color-tight)", interfere: "var(--color-interfere)" } as const;
 const ROW_H = 34;
@@ -84,8 +85,10 @@ export function WindowChart({
           const fits = need <= max;
           const a = x(Math.min(need, max));
           const b = x(Math.max(need, max));
-          const words =
-            r.needDiameterMm === null
+          const blocked = blockingReason(r.kit);
+          const words = blocked
+            ? blocked
+            : r.needDiameterMm === null
               ? `no cut needed · case takes up to ${len(max, units)}`
               : fits
                 ? `needs ${len(need, units)} · window ${len(max - need, units)}`
@@ -93,6 +96,7 @@ export function WindowChart({
           return (
             <g key={r.kitId} data-testid="window-row">
               <text x={LEFT - 10} y={y + ROW_H / 2 + 4} fontSize="12" textAnchor="end" fill="var(--color-ink)">
+                <title>{r.name}</title>
                 {r.name.length > 26 ? `${r.name.slice(0, 25)}…` : r.name}
               </text>
               <rect
@@ -108,7 +112,8 @@ export function WindowChart({
               />
               <line x1={x(need)} x2={x(need)} y1={y + 4} y2={y + ROW_H - 4} stroke={COLOR[v.tone]} strokeWidth={2} />
               <text x={WIDTH - RIGHT + 12} y={y + ROW_H / 2 + 4} fontSize="11" fill="var(--color-ink-2)">
-                {v.short}: {words}
+                <title>{`${v.short}: ${words}`}</title>
+                {v.short}: {words.length > 52 ? `${words.slice(0, 51)}…` : words}
               </text>
             </g>
           );
