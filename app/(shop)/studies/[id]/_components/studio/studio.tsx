@@ -2,6 +2,7 @@
 
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
+import { lengthValue } from "@/scene/format";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
 import type { ViewState } from "@/scene/three/view";
 import { Cautions } from "./cautions";
@@ -123,7 +124,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
                 maxMm={ranges.dMax}
                 stepMm={STEP_MM}
                 units={units}
-                hint={p ? `Least that clears this kit: ${p.diameterMm.toFixed(2)} mm` : undefined}
+                hint={p ? `Least that clears this kit: ${lengthValue(p.diameterMm, units)} ${units}` : undefined}
                 onLive={(mm, at) => change({ diameterMm: mm }, false, at)}
                 onCommit={(mm) => change({ diameterMm: mm }, true)}
               />
@@ -135,7 +136,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
                 maxMm={ranges.zMax}
                 stepMm={STEP_MM}
                 units={units}
-                hint={p ? `Least for this kit: ${p.depthMm.toFixed(2)} mm` : undefined}
+                hint={p ? `Least for this kit: ${lengthValue(p.depthMm, units)} ${units}` : undefined}
                 onLive={(mm, at) => change({ depthMm: mm }, false, at)}
                 onCommit={(mm) => change({ depthMm: mm }, true)}
               />
