@@ -124,6 +124,9 @@ describe("in the browser", () => {
     await page.waitForURL("**/sign-in");
 
     await page.getByRole("link", { name: "Forgot the password?" }).click();
+    // The sign-in page has an e-mail field too: wait for the reset form before typing.
+    await page.waitForURL("**/forgot-password");
+    await page.getByRole("form", { name: "Reset the password" }).waitFor();
     await page.getByLabel("E-mail").fill(email);
     await page.getByRole("button", { name: "Send the link" }).click();
     await expect.poll(() => page.getByRole("main").innerText()).toContain("a link to choose a new password is on its way");
