@@ -4,6 +4,19 @@ import { startFakeStripe } from "./fake-stripe.mjs";
 import { startMailSink } from "./mail-sink.mjs";
 import { startObjectStore } from "./object-store.mjs";
 
+/** The environment the app reads to reach the payment fake and the object store. */
+export function fakesEnv({ payments, store, secretKey, webhookSecret }) {
+  return {
+    STRIPE_SECRET_KEY: secretKey,
+    STRIPE_WEBHOOK_SECRET: webhookSecret,
+    STRIPE_API_HOST: payments.host,
+    STRIPE_API_PORT: String(payments.port),
+    STRIPE_API_PROTOCOL: "http",
+    ...store.env,
+    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
+  };
+}
+
 /** Starts every local service; resolves with the environment the app needs and a stop function. */
 export async function startLocalServices() {
   const sink = await startMailSink({
@@ -21,13 +34,7 @@ export async function startLocalServices() {
     SMTP_PORT: String(sink.smtpPort),
     SMTP_IGNORE_TLS: "true",
     MAIL_SINK_URL: sink.url,
-    STRIPE_SECRET_KEY: secretKey,
-    STRIPE_WEBHOOK_SECRET: webhookSecret,
-    STRIPE_API_HOST: payments.host,
-    STRIPE_API_PORT: String(payments.port),
-    STRIPE_API_PROTOCOL: "http",
-    ...store.env,
-    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
+    ...fakesEnv({ payments, store, secretKey, webhookSecret }),
   };
   return { env, stop: () => Promise.allSettled([sink.stop(), payments.stop(), store.stop()]) };
 }

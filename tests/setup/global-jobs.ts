@@ -5,6 +5,7 @@ import { randomBytes } from "node:crypto";
 import type { TestProject } from "vitest/node";
 import { startFakeStripe } from "../../scripts/fake-stripe.mjs";
 import { startObjectStore } from "../../scripts/object-store.mjs";
+import { fakesEnv } from "../../scripts/services.mjs";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -17,15 +18,7 @@ export default async function setup(project: TestProject) {
   const secretKey = `sk_test_${randomBytes(24).toString("hex")}`;
   const payments = await startFakeStripe({ port: 0, webhookSecret, secretKey, quiet: true });
   const store = await startObjectStore({ port: 0 });
-  const env = {
-    STRIPE_SECRET_KEY: secretKey,
-    STRIPE_WEBHOOK_SECRET: webhookSecret,
-    STRIPE_API_HOST: payments.host,
-    STRIPE_API_PORT: String(payments.port),
-    STRIPE_API_PROTOCOL: "http",
-    ...store.env,
-    AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: "true",
-  };
+  const env = fakesEnv({ payments, store, secretKey, webhookSecret });
   Object.assign(process.env, env);
   project.provide("jobFakes", { stripeURL: payments.url, webhookSecret, secretKey, s3: store.env });
   return async () => {
