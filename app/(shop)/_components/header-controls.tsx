@@ -41,6 +41,7 @@ export function HeaderControls({ shops, activeShopId, units }: { shops: Shop[]; 
           </select>
         </label>
       ) : null}
+      {/* A new preference reloads the page, so a study or form already open shows it too. */}
       <div role="group" aria-label="Length units" className="inline-flex overflow-hidden rounded-md border border-rule">
         {(["mm", "in"] as const).map((u) => (
           <button
@@ -48,7 +49,7 @@ export function HeaderControls({ shops, activeShopId, units }: { shops: Shop[]; 
             type="button"
             aria-pressed={units === u}
             disabled={busy}
-            onClick={() => units !== u && run("/api/v1/me", { units: u }, () => go(window.location.pathname))}
+            onClick={() => units !== u && run("/api/v1/me", { units: u }, () => window.location.reload())}
             className={`px-2.5 py-1 num ${units === u ? "bg-accent text-paper" : "bg-card text-ink-2 hover:text-ink"}`}
           >
             {u}
