@@ -11,7 +11,7 @@ import { DEMO_CASES, DEMO_KITS, DEMO_STUDIES, seedLibrary } from "../../db/seed-
 
 const dir = mkdtempSync(join(tmpdir(), "borewright-seed-"));
 const url = `file:${join(dir, "seed.db")}`;
-const client = createClient({ url });
+const client = createClient({ url, timeout: 10_000 });
 const db = drizzle(client, { schema });
 const [owner, builder] = DEMO_PEOPLE;
 

@@ -92,9 +92,9 @@ export async function waitForMail(to: string, subject: RegExp, timeoutMs = 10_00
   throw new Error(`no mail to ${to} matching ${subject} within ${timeoutMs} ms`);
 }
 
-/** The test server's database, opened beside it (WAL lets both read and write). */
+/** The test server's database, opened beside it (WAL lets both read; a writer waits up to 10 s for the server's). */
 export function testDb() {
-  return createClient({ url: inject("databaseURL") });
+  return createClient({ url: inject("databaseURL"), timeout: 10_000 });
 }
 
 /** Counts the rows of a table, for checks that nothing was half-written. */
