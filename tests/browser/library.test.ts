@@ -186,3 +186,33 @@ describe("library and studies in the browser", () => {
     await expect.poll(() => second.getByTestId("save-status").getAttribute("data-status"), { timeout: 10_000 }).toBe("saved");
   });
 });
+
+describe("the library's tabs", () => {
+  // Every ordered pair of shelves once: cases→kits→cases→rigs→kits→rigs→cases.
+  const walk = ["cases", "kits", "cases", "rigs", "kits", "rigs", "cases"] as const;
+  const tab = { cases: "Case profiles", kits: "Cylinder kits", rigs: "Boring rigs" } as const;
+
+  it("moves between every pair of shelves by clicking, each showing its own table", async () => {
+    const errorsBefore = pageErrors.length;
+    await page.goto(`${base()}/library`);
+    await page.getByTestId("table-cases").waitFor();
+    const nav = page.getByRole("navigation", { name: "Library sections" });
+    for (const kind of walk.slice(1)) {
+      await nav.getByRole("link", { name: tab[kind] }).click();
+      await expect.poll(() => nav.getByRole("link", { name: tab[kind] }).getAttribute("aria-current")).toBe("page");
+      await page.getByTestId(`table-${kind}`).locator("tbody tr").first().waitFor();
+      expect(await page.getByText("Something went wrong").count()).toBe(0);
+      expect(pageErrors.slice(errorsBefore)).toEqual([]);
+    }
+  });
+
+  it("starts each shelf on its own sort, so a column of another shelf is never asked for", async () => {
+    await page.goto(`${base()}/library?kind=kits`);
+    const kits = page.getByTestId("table-kits");
+    await kits.getByRole("button", { name: /Bore/ }).click();
+    await expect.poll(() => kits.locator("th[aria-sort]").first().innerText()).toMatch(/Bore/);
+    await page.getByRole("navigation", { name: "Library sections" }).getByRole("link", { name: "Boring rigs" }).click();
+    await page.getByTestId("table-rigs").locator("tbody tr").first().waitFor();
+    expect(await page.getByText(/could not be loaded/).count()).toBe(0);
+  });
+});

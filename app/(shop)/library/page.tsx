@@ -24,7 +24,8 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
       <LibraryTabs active={kind} />
       {saved ? <FormNotice tone="ok">Saved “{saved}”.</FormNotice> : null}
       <QueryProvider>
-        <LibraryList kind={kind} units={caller.units} />
+        {/* Keyed by kind: sorting, paging and filter belong to one shelf and start afresh on another. */}
+        <LibraryList key={kind} kind={kind} units={caller.units} />
         {kind !== "rigs" ? <CsvPanel kind={kind} /> : null}
       </QueryProvider>
     </div>

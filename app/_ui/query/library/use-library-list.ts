@@ -1,16 +1,19 @@
 "use client";
 
-import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import type { LibraryKind, ListParams } from "../types";
 import { fetchLibraryList } from "./fetchers";
 import { libraryKeys } from "./keys";
 
-/** One page of a library table, keeping the previous page on screen while the next loads. */
+/**
+ * One page of a library table, keeping the previous page of the same kind on screen while the next loads.
+ * A page of another kind is never kept: its rows do not have the columns of this kind.
+ */
 export function useLibraryList<K extends LibraryKind>(kind: K, params: ListParams) {
   return useQuery({
     queryKey: libraryKeys.list(kind, params),
     queryFn: () => fetchLibraryList(kind, params),
-    placeholderData: keepPreviousData,
+    placeholderData: (previous, previousQuery) => (previousQuery?.queryKey[1] === kind ? previous : undefined),
   });
 }
 
