@@ -5,17 +5,17 @@ import { FormProvider } from "react-hook-form";
 import { FormNotice } from "../../../_ui/field";
 import type { CaseRow } from "../../../_ui/query/types";
 import { caseDefaults, caseToCore, type CaseFormValues } from "./case-values";
-import { lengthText, parseLengthText } from "./form/number-text";
-import { OutlineField } from "./form/outline-field";
-import { PocketsField } from "./form/pockets-field";
-import { ReadingsField } from "./form/readings-field";
-import { SaveBar } from "./form/save-bar";
-import { StudsField } from "./form/studs-field";
-import { TextField } from "./form/text-field";
-import { UnitToggle } from "./form/unit-toggle";
-import { useLibraryForm } from "./form/use-library-form";
+import { lengthText, parseLengthText } from "@/app/_ui/form/number-text";
+import { OutlineField } from "@/app/_ui/form/outline-field";
+import { PocketsField } from "@/app/_ui/form/pockets-field";
+import { ReadingsField } from "@/app/_ui/form/readings-field";
+import { SaveBar } from "@/app/_ui/form/save-bar";
+import { StudsField } from "@/app/_ui/form/studs-field";
+import { TextField } from "@/app/_ui/form/text-field";
+import { UnitToggle } from "@/app/_ui/form/unit-toggle";
+import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import { FormSection } from "./form-section";
-import { errorAt } from "./form/field-error";
+import { errorAt } from "@/app/_ui/form/field-error";
 
 /** Create or edit a case profile: deck, mouth (read several times), studs, pockets, stock bore and stroke. */
 export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; units: LengthUnits }) {

@@ -1,9 +1,9 @@
 import type { LengthUnits } from "@/geometry";
 import type { CaseRow } from "../../../_ui/query/types";
-import type { FormReader } from "./form/form-reader";
-import { lengthText, numberText } from "./form/number-text";
-import { outlineText, readOutline, readStuds, studsText } from "./form/read-shapes";
-import { emptyOutline, type OutlineText, type StudText } from "./form/text-values";
+import type { FormReader } from "@/app/_ui/form/form-reader";
+import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import { outlineText, readOutline, readStuds, studsText } from "@/app/_ui/form/read-shapes";
+import { emptyOutline, type OutlineText, type StudText } from "@/app/_ui/form/text-values";
 
 export type CaseFormValues = {
   name: string;

@@ -3,7 +3,7 @@
 import type { LengthUnits } from "@/geometry";
 import { useFormContext } from "react-hook-form";
 import { useLibraryOptions } from "../../../_ui/query/library/use-library-list";
-import { studsText } from "./form/read-shapes";
+import { studsText } from "@/app/_ui/form/read-shapes";
 
 /** Copies a case profile's studs into the kit, for a kit made for that stud pattern. */
 export function CopyStudsFromCase({ units }: { units: LengthUnits }) {

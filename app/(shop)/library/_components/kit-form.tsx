@@ -6,12 +6,12 @@ import { FormNotice } from "../../../_ui/field";
 import type { KitRow } from "../../../_ui/query/types";
 import { CopyStudsFromCase } from "./copy-studs";
 import { FormSection } from "./form-section";
-import { ReadingsField } from "./form/readings-field";
-import { SaveBar } from "./form/save-bar";
-import { StudsField } from "./form/studs-field";
-import { TextField } from "./form/text-field";
-import { UnitToggle } from "./form/unit-toggle";
-import { useLibraryForm } from "./form/use-library-form";
+import { ReadingsField } from "@/app/_ui/form/readings-field";
+import { SaveBar } from "@/app/_ui/form/save-bar";
+import { StudsField } from "@/app/_ui/form/studs-field";
+import { TextField } from "@/app/_ui/form/text-field";
+import { UnitToggle } from "@/app/_ui/form/unit-toggle";
+import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import { kitDefaults, kitToCore, type KitFormValues } from "./kit-values";
 
 /** Half the last digit of a length shown in inches (0.0001 in): a reading shown in inches still finds its stamp. */

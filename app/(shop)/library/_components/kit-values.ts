@@ -1,9 +1,9 @@
 import type { LengthUnits } from "@/geometry";
 import type { KitRow } from "../../../_ui/query/types";
-import type { FormReader } from "./form/form-reader";
-import { lengthText, numberText } from "./form/number-text";
-import { readStuds, studsText } from "./form/read-shapes";
-import type { StudText } from "./form/text-values";
+import type { FormReader } from "@/app/_ui/form/form-reader";
+import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import { readStuds, studsText } from "@/app/_ui/form/read-shapes";
+import type { StudText } from "@/app/_ui/form/text-values";
 
 export type KitFormValues = {
   name: string;

@@ -5,10 +5,10 @@ import { FormProvider } from "react-hook-form";
 import { FormNotice } from "../../../_ui/field";
 import type { RigRow } from "../../../_ui/query/types";
 import { FormSection } from "./form-section";
-import { SaveBar } from "./form/save-bar";
-import { TextField } from "./form/text-field";
-import { UnitToggle } from "./form/unit-toggle";
-import { useLibraryForm } from "./form/use-library-form";
+import { SaveBar } from "@/app/_ui/form/save-bar";
+import { TextField } from "@/app/_ui/form/text-field";
+import { UnitToggle } from "@/app/_ui/form/unit-toggle";
+import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import { GroovesField, ShimsField } from "./rig-lists";
 import { rigDefaults, rigToCore, type RigFormValues } from "./rig-values";
 

@@ -2,8 +2,8 @@
 
 import type { LengthUnits } from "@/geometry";
 import { useFieldArray, useFormContext } from "react-hook-form";
-import { errorAt } from "./form/field-error";
-import { TextField } from "./form/text-field";
+import { errorAt } from "@/app/_ui/form/field-error";
+import { TextField } from "@/app/_ui/form/text-field";
 import type { RigFormValues } from "./rig-values";
 
 /** The shaft's stop grooves: travel with the ring in each, measured with the bit resting on the deck. */

@@ -1,7 +1,7 @@
 import type { LengthUnits } from "@/geometry";
 import type { RigRow } from "../../../_ui/query/types";
-import type { FormReader } from "./form/form-reader";
-import { lengthText, numberText } from "./form/number-text";
+import type { FormReader } from "@/app/_ui/form/form-reader";
+import { lengthText, numberText } from "@/app/_ui/form/number-text";
 
 export type RigFormValues = {
   name: string;

@@ -1,8 +1,8 @@
 "use client";
 
 import type { CutResult, LengthUnits } from "@/geometry";
-import { PairInputs } from "../../../library/_components/form/pair-inputs";
-import { TextField } from "../../../library/_components/form/text-field";
+import { PairInputs } from "@/app/_ui/form/pair-inputs";
+import { TextField } from "@/app/_ui/form/text-field";
 import { len } from "./fmt";
 import type { StudyFormValues } from "./study-values";
 

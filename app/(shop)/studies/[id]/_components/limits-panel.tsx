@@ -2,7 +2,7 @@
 
 import type { LengthUnits } from "@/geometry";
 import { useFormContext, useWatch } from "react-hook-form";
-import { TextField } from "../../../library/_components/form/text-field";
+import { TextField } from "@/app/_ui/form/text-field";
 import { len } from "./fmt";
 import { LIMIT_KEYS, type LimitKey, type StudyFormValues } from "./study-values";
 

@@ -2,8 +2,8 @@
 
 import type { LengthUnits } from "@/geometry";
 import { useFieldArray, useFormContext } from "react-hook-form";
-import { errorAt } from "../../../library/_components/form/field-error";
-import { TextField } from "../../../library/_components/form/text-field";
+import { errorAt } from "@/app/_ui/form/field-error";
+import { TextField } from "@/app/_ui/form/text-field";
 import type { StudyFormValues } from "./study-values";
 
 /** The holder's height above the deck at each stud, as read (plus a straightedge where the deck is not under the gauge). */

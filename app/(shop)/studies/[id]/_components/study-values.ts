@@ -1,8 +1,8 @@
 import { CutPlanSchema, DEFAULT_LIMITS, ReadingsSchema, StudyLimitsSchema, type LengthUnits } from "@/geometry";
 import { z } from "zod";
-import type { FormReader } from "../../../library/_components/form/form-reader";
-import { lengthText, numberText } from "../../../library/_components/form/number-text";
-import type { PairText } from "../../../library/_components/form/text-values";
+import type { FormReader } from "@/app/_ui/form/form-reader";
+import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import type { PairText } from "@/app/_ui/form/text-values";
 import type { StudyRow } from "../../../../_ui/query/types";
 
 export const LIMIT_KEYS = Object.keys(DEFAULT_LIMITS) as (keyof typeof DEFAULT_LIMITS)[];

@@ -2,7 +2,7 @@
 
 import type { LengthUnits } from "@/geometry";
 import { useMemo } from "react";
-import { FormReader } from "../../../library/_components/form/form-reader";
+import { FormReader } from "@/app/_ui/form/form-reader";
 import { StudyInputsSchema, studyToCore, type StudyFormValues, type StudyInputs } from "./study-values";
 
 /** The form's texts read into the core's inputs, or null while any field is wrong. */

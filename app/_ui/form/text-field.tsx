@@ -2,7 +2,7 @@
 
 import { useFormContext, type FieldValues, type Path } from "react-hook-form";
 import type { ReactNode } from "react";
-import { Field } from "../../../../_ui/field";
+import { Field } from "../field";
 import { errorAt } from "./field-error";
 
 /** A registered text input; `unit` is shown beside the label ("mm", "in", "rpm"). */
