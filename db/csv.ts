@@ -12,7 +12,7 @@ import {
   type KitCreate,
   type KitData,
   type LibraryCsvKind,
-} from "@/app/api/v1/_lib/schemas";
+} from "@/model/schemas";
 import type { Caller } from "./access";
 import { getDb } from "./client";
 import { DataError } from "./errors";

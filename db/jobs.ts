@@ -3,7 +3,7 @@ import { randomUUID } from "node:crypto";
 import { and, asc, count, desc, eq, inArray, isNotNull, isNull, like, or, sql, type SQL } from "drizzle-orm";
 import type { Study, StudyResult } from "@/geometry";
 import { ApiError } from "@/app/api/_lib/respond";
-import type { JobCreate, JobListQuery, JobPatch } from "@/app/api/v1/jobs/_lib/schemas";
+import type { JobCreate, JobListQuery, JobPatch } from "@/model/schemas/jobs";
 import { AccessError, type Caller } from "./access";
 import { appUrl } from "./auth";
 import { getDb } from "./client";

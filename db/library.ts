@@ -17,7 +17,7 @@ import type {
   RigData,
   RigPatch,
   RigRow,
-} from "@/app/api/v1/_lib/schemas";
+} from "@/model/schemas";
 import type { Caller } from "./access";
 import { getDb } from "./client";
 import { DataError, conflict } from "./errors";

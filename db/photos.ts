@@ -2,7 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, eq } from "drizzle-orm";
 import { ApiError } from "@/app/api/_lib/respond";
-import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/app/api/v1/jobs/_lib/schemas";
+import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { jobFor } from "./jobs";

@@ -4,7 +4,7 @@ import { eq, inArray } from "drizzle-orm";
 import type { drizzle } from "drizzle-orm/libsql";
 import type { z } from "zod";
 import { CutPlanSchema, ReadingsSchema, StudyLimitsSchema } from "../geometry";
-import { CaseDataSchema, KitDataSchema, RigDataSchema, type CaseDataInput, type KitDataInput, type RigDataInput } from "../app/api/v1/_lib/schemas";
+import { CaseDataSchema, KitDataSchema, RigDataSchema, type CaseDataInput, type KitDataInput, type RigDataInput } from "@/model/schemas";
 import * as schema from "./schema";
 
 type SeedDb = ReturnType<typeof drizzle<typeof schema>>;

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import { LimitsSchema, StudyLimitsSchema, resolveLimits, type StudyLimits } from "@/geometry";
-import type { SettingsPatch, ShopSettings } from "@/app/api/v1/_lib/schemas";
+import type { SettingsPatch, ShopSettings } from "@/model/schemas";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { DataError, conflict } from "./errors";

@@ -13,7 +13,7 @@ import {
   type StudyLimits,
   type StudyResult,
 } from "@/geometry";
-import { without, type HistoryItem, type KitData, type ListQuery, type Page, type RigData, type StudyCreate, type StudyPatch, type StudyRow } from "@/app/api/v1/_lib/schemas";
+import { without, type HistoryItem, type KitData, type ListQuery, type Page, type RigData, type StudyCreate, type StudyPatch, type StudyRow } from "@/model/schemas";
 import type { Caller } from "./access";
 import { getClient, getDb } from "./client";
 import { DataError, conflict } from "./errors";

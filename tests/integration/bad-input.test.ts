@@ -17,7 +17,7 @@ import {
   StudyCreateSchema,
   StudyPatchSchema,
   StudySchema,
-} from "../../app/api/v1/_lib/schemas";
+} from "@/model/schemas";
 import {
   JobCreateSchema,
   JobMoveSchema,
@@ -26,7 +26,7 @@ import {
   PhotoRequestSchema,
   QuestionSchema,
   ReadingsBodySchema,
-} from "../../app/api/v1/jobs/_lib/schemas";
+} from "@/model/schemas/jobs";
 import { Http, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
 import { insertExampleStudy, jobBody, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, newStudy, ok, rigData } from "./library-fixtures";

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { JOB_STATUSES, STATUS_LABEL } from "@/db/job-status";
 import { listJobs } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
-import { JobListQuerySchema } from "@/app/api/v1/jobs/_lib/schemas";
+import { JobListQuerySchema } from "@/model/schemas/jobs";
 import { EmptyState } from "../../_ui/empty-state";
 import { requirePage } from "../../_ui/guard";
 import { StatusBadge, money } from "./_components/status-badge";

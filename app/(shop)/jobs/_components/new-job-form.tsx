@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { callApi } from "../../../_ui/api-client";
 import { Field, FormNotice } from "../../../_ui/field";
-import { JobCreateSchema } from "@/app/api/v1/jobs/_lib/schemas";
+import { JobCreateSchema } from "@/model/schemas/jobs";
 
 type StudyOption = { id: string; name: string; kitIds: string[]; chosenKitId: string | null };
 

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { listStudies } from "@/db/studies";
 import { SHOP_STAFF } from "@/db/roles";
-import { listQuerySchema } from "@/app/api/v1/_lib/schemas";
+import { listQuerySchema } from "@/model/schemas";
 import { requirePage } from "../../../_ui/guard";
 import { NewJobForm } from "../_components/new-job-form";
 

@@ -1,7 +1,7 @@
 import { GeometryError, evaluateStudy } from "@/geometry";
 import { requireCaller } from "@/db/access";
 import { ApiError } from "../../_lib/respond";
-import { StudySchema } from "../_lib/schemas";
+import { StudySchema } from "@/model/schemas";
 import { api, bodyOf, json } from "../_lib/http";
 
 const MAX_STUDY_BYTES = 1024 * 1024;

@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { createJob, listJobs } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
-import { JobCreateSchema, JobListQuerySchema } from "./_lib/schemas";
+import { JobCreateSchema, JobListQuerySchema } from "@/model/schemas/jobs";
 
 /** The jobs board: the shop's jobs for staff, the caller's own shared jobs for a customer. */
 export const GET = handle(async (req: Request) => {

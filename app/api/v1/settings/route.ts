@@ -1,6 +1,6 @@
 import { requireCaller } from "@/db/access";
 import { getSettings, updateSettings } from "@/db/settings";
-import { SettingsPatchSchema } from "../_lib/schemas";
+import { SettingsPatchSchema } from "@/model/schemas";
 import { api, bodyOf, json, staff } from "../_lib/http";
 
 /** The shop's units and limits, each limit filled and the defaulted ones named (owner and builder). */

@@ -1,5 +1,5 @@
 import { createStudy, listStudies } from "@/db/studies";
-import { StudyCreateSchema, listQuerySchema } from "../_lib/schemas";
+import { StudyCreateSchema, listQuerySchema } from "@/model/schemas";
 import { api, bodyOf, json, queryOf, staff } from "../_lib/http";
 
 const query = listQuerySchema("studies");

@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { jobDetail, updateJob } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
-import { JobPatchSchema } from "../_lib/schemas";
+import { JobPatchSchema } from "@/model/schemas/jobs";
 
 type Ctx = { params: Promise<{ id: string }> };
 

@@ -1,5 +1,5 @@
 import { exportLibraryCsv } from "@/db/csv";
-import { LibraryKindQuerySchema } from "../../_lib/schemas";
+import { LibraryKindQuerySchema } from "@/model/schemas";
 import { api, queryOf, staff } from "../../_lib/http";
 import { attachmentName } from "../../_lib/files";
 

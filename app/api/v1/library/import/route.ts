@@ -1,5 +1,5 @@
 import { importLibraryCsv } from "@/db/csv";
-import { CsvImportSchema, LibraryKindQuerySchema } from "../../_lib/schemas";
+import { CsvImportSchema, LibraryKindQuerySchema } from "@/model/schemas";
 import { api, bodyOf, json, queryOf, staff } from "../../_lib/http";
 
 const MAX_IMPORT_BYTES = 2 * 1024 * 1024;

@@ -1,5 +1,5 @@
 import { getStudy, updateStudy } from "@/db/studies";
-import { StudyPatchSchema } from "../../_lib/schemas";
+import { StudyPatchSchema } from "@/model/schemas";
 import { api, bodyOf, idOf, json, staff, type IdContext } from "../../_lib/http";
 
 /** The study's row and the assembled Study the core evaluates. */

@@ -1,5 +1,5 @@
 import { importStudy } from "@/db/studies";
-import { StudySchema } from "../../_lib/schemas";
+import { StudySchema } from "@/model/schemas";
 import { api, bodyOf, json, staff } from "../../_lib/http";
 
 export const MAX_STUDY_FILE_BYTES = 1024 * 1024;

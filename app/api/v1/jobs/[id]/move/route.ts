@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { moveJob } from "@/db/jobs";
-import { JobMoveSchema } from "../../_lib/schemas";
+import { JobMoveSchema } from "@/model/schemas/jobs";
 
 /** Moves the job to another status; the status machine decides, and a refusal says why. */
 export const POST = handle(async (req: Request, ctx: { params: Promise<{ id: string }> }) => {

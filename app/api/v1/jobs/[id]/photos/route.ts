@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { listPhotos, requestUpload } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
-import { PhotoRequestSchema } from "../../_lib/schemas";
+import { PhotoRequestSchema } from "@/model/schemas/jobs";
 
 type Ctx = { params: Promise<{ id: string }> };
 

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { askQuestion } from "@/db/jobs";
-import { QuestionSchema } from "../../_lib/schemas";
+import { QuestionSchema } from "@/model/schemas/jobs";
 
 /** A question about the plan, kept on the job and mailed to the shop. */
 export const POST = handle(async (req: Request, ctx: { params: Promise<{ id: string }> }) => {

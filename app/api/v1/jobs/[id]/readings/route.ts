@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { recordReadings } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
-import { ReadingsBodySchema } from "../../_lib/schemas";
+import { ReadingsBodySchema } from "@/model/schemas/jobs";
 
 /** Records the after-cut readings and answers with their verification against the plan. */
 export const POST = handle(async (req: Request, ctx: { params: Promise<{ id: string }> }) => {

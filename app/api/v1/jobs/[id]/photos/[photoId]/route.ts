@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { photoDownload, updatePhoto } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
-import { PhotoPatchSchema } from "../../../_lib/schemas";
+import { PhotoPatchSchema } from "@/model/schemas/jobs";
 
 type Ctx = { params: Promise<{ id: string; photoId: string }> };
 

@@ -1,6 +1,6 @@
 // Request shapes of the jobs, photos, payments and consult API. No server-only code: the forms use them too.
 import { z } from "zod";
-import { JOB_STATUSES } from "@/db/job-status";
+import { JOB_STATUSES } from "@/model/job-status";
 import { AfterCutReadingsSchema } from "@/db/verification";
 
 const text = (max: number, what: string) => z.string({ error: `${what} must be text.` }).trim().max(max, `Keep ${what.toLowerCase()} to ${max} characters or fewer.`);
