@@ -8,7 +8,7 @@ import { AccessError, type Caller } from "./access";
 import { appUrl } from "./auth";
 import { getDb } from "./client";
 import { DataError } from "./errors";
-import { decideMove, movesFrom, STATUS_LABEL, isJobStatus, type JobStatus } from "./job-status";
+import { decideMove, movesFrom, STATUS_LABEL, isJobStatus, type JobStatus } from "@/model/job-status";
 import { actionMail, sendMail } from "./mail";
 import { SHOP_STAFF } from "./roles";
 import * as schema from "./schema";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { JOB_STATUSES, decideMove, movesFrom, type JobStatus, type MoveActor, type MoveFacts } from "@/db/job-status";
+import { JOB_STATUSES, decideMove, movesFrom, type JobStatus, type MoveActor, type MoveFacts } from "@/model/job-status";
 
 const builder: MoveActor = { role: "builder", isJobCustomer: false };
 const owner: MoveActor = { role: "owner", isJobCustomer: false };

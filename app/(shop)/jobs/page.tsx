@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { JOB_STATUSES, STATUS_LABEL } from "@/db/job-status";
+import { JOB_STATUSES, STATUS_LABEL } from "@/model/job-status";
 import { listJobs } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
 import { JobListQuerySchema } from "@/model/schemas/jobs";

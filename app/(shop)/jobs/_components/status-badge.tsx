@@ -1,4 +1,4 @@
-import { STATUS_LABEL, type JobStatus } from "@/db/job-status";
+import { STATUS_LABEL, type JobStatus } from "@/model/job-status";
 
 const TONE: Record<JobStatus, string> = {
   intake: "bg-paper-2 text-ink-2",

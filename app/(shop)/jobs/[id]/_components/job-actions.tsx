@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { JobView } from "@/db/jobs";
-import { STATUS_LABEL, type JobStatus } from "@/db/job-status";
+import { STATUS_LABEL, type JobStatus } from "@/model/job-status";
 import { callApi } from "../../../../_ui/api-client";
 import { FormNotice } from "../../../../_ui/field";
 
