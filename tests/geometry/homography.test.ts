@@ -1,0 +1,172 @@
+import PerspT from "perspective-transform";
+import { Matrix, SingularValueDecomposition } from "ml-matrix";
+import { describe, expect, it } from "vitest";
+import {
+  applyHomography,
+  invertHomography,
+  mmToPx,
+  orderAsRectangle,
+  pxToMm,
+  rectangleFit,
+  ReferencePointsError,
+  solveHomography,
+  twoPointScale,
+  type Point,
+} from "@/geometry/homography";
+
+/** A pinhole camera looking down at the deck plane: tilted about x then y, the deck's +y shown up in the photo. */
+function camera(opts: { f: number; principal: Point; tiltXDeg: number; tiltYDeg: number; distanceMm: number }) {
+  const a = (opts.tiltXDeg * Math.PI) / 180;
+  const b = (opts.tiltYDeg * Math.PI) / 180;
+  return (p: Point): Point => {
+    // Ry(b) then Rx(a), applied to (x, y, 0), then moved away along the optical axis.
+    const x1 = p[0] * Math.cos(b);
+    const z1 = -p[0] * Math.sin(b);
+    const y2 = p[1] * Math.cos(a) - z1 * Math.sin(a);
+    const z2 = p[1] * Math.sin(a) + z1 * Math.cos(a) + opts.distanceMm;
+    return [opts.principal[0] + (opts.f * x1) / z2, opts.principal[1] - (opts.f * y2) / z2];
+  };
+}
+
+const near = (got: readonly number[], want: readonly number[], tol: number) => {
+  got.forEach((v, i) => expect(Math.abs(v - want[i])).toBeLessThanOrEqual(tol));
+};
+
+describe("solveHomography", () => {
+  const square: Point[] = [[-28, -28], [28, -28], [28, 28], [-28, 28]];
+  const photo: Point[] = [[812.25, 1490.5], [2210.75, 1421.0], [2044.125, 362.375], [931.5, 402.0]];
+
+  it("sends four known points onto their targets and back within 1e-9", () => {
+    // Round trip: the solve is exact for four pairs, so only rounding remains (double precision).
+    const h = solveHomography(square, photo);
+    square.forEach((p, i) => near(applyHomography(h, p), photo[i], 1e-9));
+    const back = invertHomography(h);
+    photo.forEach((p, i) => near(applyHomography(back, p), square[i], 1e-9));
+  });
+
+  it("agrees with the perspective-transform package's matrix", () => {
+    // Outside reference: perspective-transform (npm) solves the same 8 unknowns by its own normal equations
+    // and rounds each coefficient to 1e-10, so the two agree to that order on points of unit size.
+    const from: Point[] = [[0, 0], [1, 0], [1, 1], [0, 1]];
+    const to: Point[] = [[0.1, 0.2], [1.3, 0.05], [1.1, 1.4], [-0.2, 0.9]];
+    const theirs = PerspT(from.flat(), to.flat());
+    const ours = solveHomography(from, to);
+    near(ours, theirs.coeffs, 1e-8);
+    for (const p of [[0.5, 0.5], [0.25, 0.8], [2, -1]] as Point[]) near(applyHomography(ours, p), theirs.transform(p[0], p[1]), 1e-8);
+  });
+
+  it("agrees with the null vector of the direct linear transform by ml-matrix's SVD", () => {
+    // Outside reference: the DLT of Hartley and Zisserman, Multiple View Geometry, 2nd ed., algorithm 4.1 —
+    // the homography is the right singular vector of the smallest singular value of the 8×9 system.
+    const rows: number[][] = [];
+    square.forEach(([x, y], i) => {
+      const [u, v] = photo[i];
+      rows.push([-x, -y, -1, 0, 0, 0, u * x, u * y, u]);
+      rows.push([0, 0, 0, -x, -y, -1, v * x, v * y, v]);
+    });
+    rows.push(new Array(9).fill(0)); // square the system so the SVD gives all nine right singular vectors
+    const svd = new SingularValueDecomposition(new Matrix(rows));
+    const v = svd.rightSingularVectors.getColumn(svd.diagonal.indexOf(Math.min(...svd.diagonal)));
+    const dlt = v.map((x) => x / v[8]);
+    const ours = solveHomography(square, photo);
+    ours.forEach((x, i) => expect(Math.abs(x - dlt[i])).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(dlt[i]))));
+  });
+
+  it("matches the closed-form square-to-quadrilateral map of a texture-mapping text", () => {
+    // Heckbert, "Fundamentals of Texture Mapping and Image Warping" (1989), §2.2.3: the projective map of the
+    // unit square onto the quadrilateral (x0,y0)…(x3,y3), formulas reproduced from memory.
+    const q: Point[] = [[2, 1], [9, 2], [8, 7], [1, 6]];
+    const [[x0, y0], [x1, y1], [x2, y2], [x3, y3]] = q;
+    const sx = x0 - x1 + x2 - x3;
+    const sy = y0 - y1 + y2 - y3;
+    const dx1 = x1 - x2, dx2 = x3 - x2, dy1 = y1 - y2, dy2 = y3 - y2;
+    const den = dx1 * dy2 - dx2 * dy1;
+    const g = (sx * dy2 - dx2 * sy) / den;
+    const hh = (dx1 * sy - sx * dy1) / den;
+    const expected = [x1 - x0 + g * x1, x3 - x0 + hh * x3, x0, y1 - y0 + g * y1, y3 - y0 + hh * y3, y0, g, hh, 1];
+    // Worked by hand for this quadrilateral: Σx = 2−9+8−1 = 0, Σy = 1−2+7−6 = 0, so it is affine (g = h = 0).
+    expect(Math.abs(g)).toBe(0);
+    const ours = solveHomography([[0, 0], [1, 0], [1, 1], [0, 1]], q);
+    near(ours, expected, 1e-12);
+
+    const skew: Point[] = [[0, 0], [4, 0], [3, 2], [1, 2]]; // a trapezoid: a true perspective (g ≠ 0 or h ≠ 0)
+    const [[a0, b0], [a1, b1], [a2, b2], [a3, b3]] = skew;
+    const Sx = a0 - a1 + a2 - a3, Sy = b0 - b1 + b2 - b3;
+    const ex1 = a1 - a2, ex2 = a3 - a2, ey1 = b1 - b2, ey2 = b3 - b2;
+    const d = ex1 * ey2 - ex2 * ey1;
+    const G = (Sx * ey2 - ex2 * Sy) / d, H = (ex1 * Sy - Sx * ey1) / d;
+    // By hand: Σx = 0−4+3−1 = −2, Σy = 0, Δx1 = 1, Δx2 = −2, Δy1 = −2, Δy2 = 0, det = 0−4 = −4, g = 0, h = (0−4)/−4 = 1.
+    expect([Math.abs(G), H]).toEqual([0, 1]);
+    near(solveHomography([[0, 0], [1, 0], [1, 1], [0, 1]], skew), [a1 - a0 + G * a1, a3 - a0 + H * a3, a0, b1 - b0 + G * b1, b3 - b0 + H * b3, b0, G, H, 1], 1e-12);
+  });
+
+  it("refuses points on one spot or on one line, saying which", () => {
+    const err = (f: () => unknown) => {
+      try {
+        f();
+      } catch (e) {
+        return e as ReferencePointsError;
+      }
+      throw new Error("expected a refusal");
+    };
+    const same = err(() => solveHomography([[0, 0], [10, 0], [10, 0], [0, 10]], square));
+    expect(same).toBeInstanceOf(ReferencePointsError);
+    expect(same.problem).toBe("coincident");
+    expect(same.code).toBe("degenerate-geometry");
+    expect(same.message).toMatch(/same spot/);
+    const line = err(() => solveHomography([[0, 0], [10, 0], [20, 0], [0, 10]], square));
+    expect(line.problem).toBe("collinear");
+    expect(line.message).toMatch(/one line/);
+    expect(err(() => twoPointScale([5, 5], [5, 5], 40)).problem).toBe("coincident");
+    expect(err(() => twoPointScale([5, 5], [50, 5], 0)).problem).toBe("bad-distance");
+    // One point inside the triangle of the other three: no photo of a rectangle shows that.
+    expect(err(() => orderAsRectangle([[0, 0], [100, 0], [50, 100], [50, 30]])).problem).toBe("not-convex");
+  });
+});
+
+describe("twoPointScale", () => {
+  it("scales by the measured distance with the origin midway and photo-up as +y", () => {
+    // 200 px between the points and 50 mm measured: 0.25 mm a pixel; (200, 0) is 100 px above the midpoint.
+    const map = twoPointScale([100, 100], [300, 100], 50);
+    near(pxToMm(map, [200, 0]), [0, 25], 1e-12);
+    near(pxToMm(map, [300, 100]), [25, 0], 1e-12);
+    near(mmToPx(map, [0, 25]), [200, 0], 1e-12);
+  });
+});
+
+describe("rectangleFit", () => {
+  const photoSize = { width: 2000, height: 1500 };
+  const cam = camera({ f: 1600, principal: [1000, 750], tiltXDeg: 25, tiltYDeg: -12, distanceMm: 300 });
+  const studs: Point[] = [[-28, -28], [28, -28], [28, 28], [-28, 28]];
+
+  it("squares up a tilted photo: other points of the deck come back in mm", () => {
+    // Synthetic check: the camera above projects known deck points; the fit must invert it.
+    const clicked = [studs[2], studs[0], studs[3], studs[1]].map(cam); // clicked in no particular order
+    const fit = rectangleFit(clicked, 56, 56, photoSize);
+    expect(fit.fits).toBe(true);
+    expect(fit.judgedFlat).toBe(false);
+    expect(fit.misfitMm).toBeLessThan(1e-6);
+    expect(fit.summary).toBe("The four points fit a 56 mm × 56 mm rectangle within 0 mm.");
+    for (const p of [[45, -38], [-50, 12.5], [0, 0], [33.3, 47.1]] as Point[]) near(pxToMm(fit.map, cam(p)), p, 1e-6);
+  });
+
+  it("warns when the typed spacing is not what the photo shows", () => {
+    // The studs are 56 × 56 but 56 × 60 is typed. Same size √(56·60) = 57.966 mm a side for the square the photo
+    // shows; a corner is off by √(((57.966−56)/2)² + ((57.966−60)/2)²) = √(0.983² + 1.017²) = 1.414 mm, above the
+    // threshold of max(0.5, 1% of the 82.07 mm diagonal) = 0.82 mm.
+    const fit = rectangleFit(studs.map(cam), 56, 60, photoSize);
+    expect(fit.fits).toBe(false);
+    expect(fit.misfitMm).toBeCloseTo(1.414, 3);
+    expect(fit.warnAboveMm).toBeCloseTo(0.8207, 4);
+    expect(fit.summary).toMatch(/do not fit a 56 mm × 60 mm rectangle: they show one about 58 mm × 58 mm/);
+  });
+
+  it("judges a photo from straight above as a parallelogram", () => {
+    const above = camera({ f: 1600, principal: [1000, 750], tiltXDeg: 0, tiltYDeg: 0, distanceMm: 300 });
+    // Straight above a 70 × 50 rectangle the photo shows it as drawn, so 70 × 50 fits and 50 × 70 does not.
+    expect(rectangleFit([[-35, -25], [35, -25], [35, 25], [-35, 25]].map((p) => above(p as Point)), 70, 50, photoSize).fits).toBe(true);
+    const wrong = rectangleFit([[-35, -25], [35, -25], [35, 25], [-35, 25]].map((p) => above(p as Point)), 50, 70, photoSize);
+    expect(wrong.judgedFlat).toBe(true);
+    expect(wrong.fits).toBe(false);
+  });
+});
