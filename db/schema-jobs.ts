@@ -42,6 +42,19 @@ export const job = sqliteTable(
     approvedById: text("approved_by_id"),
     approvedByName: text("approved_by_name"),
     approvalReason: text("approval_reason"),
+    /**
+     * An owner's override of the study's "cannot fit safely" for this plan: who, when and why. Null when the
+     * plan fits (or none is taken); cleared when the plan is taken again.
+     */
+    planOverrideReason: text("plan_override_reason"),
+    planOverrideById: text("plan_override_by_id"),
+    planOverrideByName: text("plan_override_by_name"),
+    planOverrideAt: integer("plan_override_at", { mode: "timestamp_ms" }),
+    /** An owner's reason for verifying a job whose after-cut readings are outside the plan; cleared when it goes back to machined. */
+    verifyOverrideReason: text("verify_override_reason"),
+    verifyOverrideById: text("verify_override_by_id"),
+    verifyOverrideByName: text("verify_override_by_name"),
+    verifyOverrideAt: integer("verify_override_at", { mode: "timestamp_ms" }),
     /** Tolerance for after-cut verification, mm. */
     verifyToleranceMm: real("verify_tolerance_mm").notNull().default(0.05),
     notes: text("notes").notNull().default(""),
