@@ -3,6 +3,7 @@ import {
   DEFAULT_LIMITS,
 } from "./limits";
 import { selfIntersections, signedArea } from "./polygon";
+import { CaptureSchema } from "./shapes";
 
 // Input schemas of the core. Every length is in millimetres and says so in its name.
 
@@ -75,6 +76,8 @@ export const CaseProfileSchema = z
     cylinders: z.number().int().min(1).max(12).default(1),
     /** Density of the case alloy; the A356.0-T6 default (MatWeb) applies when absent. */
     densityGPerCm3: z.number().positive().max(25).optional(),
+    /** The measurements its shapes were drawn from (geometry/shapes.ts), kept to edit them again; the computation never reads them. */
+    capture: CaptureSchema.optional(),
   })
   .superRefine((c, ctx) => {
     const seen = new Set<string>();
@@ -98,6 +101,8 @@ export const CylinderKitSchema = z.strictObject({
   /** True when the kit is always run with a base gasket, so the thinnest one may be subtracted from the skirt length. */
   alwaysWithGasket: z.boolean().default(false),
   price: z.number().nonnegative().optional(),
+  /** The measurements its base-gasket shapes were drawn from (geometry/shapes.ts); the computation never reads them. */
+  capture: CaptureSchema.optional(),
 });
 
 export const BitCalibrationSchema = z
