@@ -1,5 +1,6 @@
 // The life of a job as a pure status machine: which moves are allowed, by whom, and why a refused move
-// is refused. No I/O, so the data layer, the pages and the tests share it.
+// is refused. No I/O and no server code, so the data layer, the pages (server and browser) and the tests
+// share it.
 
 export const JOB_STATUSES = ["intake", "planned", "approved", "machined", "verified", "closed"] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
@@ -21,12 +22,19 @@ export const STATUS_LABEL: Record<JobStatus, string> = {
 /** Who asks for a move: their role in the shop, and whether they are this job's own customer. */
 export type MoveActor = { role: "owner" | "builder" | "customer"; isJobCustomer: boolean };
 
+/** The study's verdict for the planned kit, as the core gives it. */
+export type PlanVerdict = "fits-as-is" | "fits-after-cut" | "cannot-fit";
+
 /** What the machine needs to know about the job to judge a move. */
 export type MoveFacts = {
   /** A plan (study and chosen kit) is attached. */
   hasPlan: boolean;
   /** The after-cut verification verdict, when readings were recorded. */
   verification: "pass" | "fail" | "incomplete" | null;
+  /** The study's verdict for the planned kit (absent or null: not known, judged as a kit that fits). */
+  planVerdict?: PlanVerdict | null;
+  /** An owner's override of a cannot-fit verdict is already recorded for this plan. */
+  planOverridden?: boolean;
 };
 
 export type MoveRequest = { from: JobStatus; to: JobStatus; actor: MoveActor; reason?: string; facts: MoveFacts };
@@ -70,11 +78,29 @@ export function movesFrom(from: JobStatus): JobStatus[] {
   return Object.keys(RULES[from] ?? {}) as JobStatus[];
 }
 
+export type PlanDecision = { ok: true; override: boolean } | MoveRefusal;
+
+/**
+ * Whether this actor may plan a kit with this verdict: a kit that fits is planned by the shop's staff; a kit
+ * the study calls cannot-fit only by an owner who records why (the override is kept with the plan).
+ */
+export function decidePlan({ verdict, actor, reason }: { verdict: PlanVerdict | null | undefined; actor: MoveActor; reason?: string }): PlanDecision {
+  if (actor.role === "customer") return { ok: false, code: "forbidden", message: "Only the shop's owner or builders plan a job." };
+  if (verdict !== "cannot-fit") return { ok: true, override: false };
+  if (actor.role !== "owner")
+    return { ok: false, code: "forbidden", message: "The study says this kit cannot fit safely; only the shop's owner can plan it anyway, with a recorded reason." };
+  if (!hasText(reason))
+    return { ok: false, code: "reason_required", message: "The study says this kit cannot fit safely. To plan it anyway, record why (for example: the customer accepts a passage welded and re-cut)." };
+  return { ok: true, override: true };
+}
+
+const hasText = (s: string | undefined) => (s ?? "").trim().length > 0;
+
 /** Whether a move is allowed for this actor on this job; a refusal says why. */
 export function decideMove({ from, to, actor, reason, facts }: MoveRequest): MoveDecision {
   const rule = RULES[from]?.[to];
   if (!rule) return { ok: false, code: "not_allowed", message: notAllowed(from, to) };
-  const hasReason = (reason ?? "").trim().length > 0;
+  const hasReason = hasText(reason);
   const staff = actor.role === "owner" || actor.role === "builder";
 
   if (to === "approved") {
@@ -91,12 +117,31 @@ export function decideMove({ from, to, actor, reason, facts }: MoveRequest): Mov
   }
 
   if (rule.reasonRequired && !hasReason) return { ok: false, code: "reason_required", message: "Say why the job goes back a step; the reason is kept in its history." };
-  if (to === "planned" && from === "intake" && !facts.hasPlan) return { ok: false, code: "precondition", message: "Attach a study and choose its kit before planning the job." };
+  if (to === "planned" && from === "intake") {
+    if (!facts.hasPlan) return { ok: false, code: "precondition", message: "Attach a study and choose its kit before planning the job." };
+    if (!facts.planOverridden) {
+      const plan = decidePlan({ verdict: facts.planVerdict, actor, reason });
+      if (!plan.ok) return plan;
+      if (plan.override) return { ok: true, needsReason: true };
+    }
+  }
   if (to === "approved" && !facts.hasPlan) return { ok: false, code: "precondition", message: "The job has no plan to approve." };
   if (to === "verified") {
     if (facts.verification === null) return { ok: false, code: "precondition", message: "Record the after-cut readings before verifying." };
     if (facts.verification === "incomplete") return { ok: false, code: "precondition", message: "Some after-cut readings are missing; complete them before verifying." };
-    if (facts.verification === "fail") return { ok: false, code: "precondition", message: "The after-cut readings are outside the plan's tolerance; the job cannot be verified as it stands." };
+    if (facts.verification === "fail") {
+      if (actor.role !== "owner")
+        return { ok: false, code: "forbidden", message: "The after-cut readings are outside the plan's tolerance; only the shop's owner can verify the job as it stands, with a recorded reason." };
+      if (!hasReason)
+        return { ok: false, code: "reason_required", message: "The after-cut readings are outside the plan's tolerance. To verify the job as it stands, record why (for example: trial fit checked, clearance accepted)." };
+      return { ok: true, needsReason: true };
+    }
   }
   return { ok: true, needsReason: Boolean(rule.reasonRequired || (to === "approved" && actor.role === "owner")) };
+}
+
+/** Whether a move asks the actor for a reason before it is tried (for the buttons a page offers). */
+export function moveNeedsReason(from: JobStatus, to: JobStatus, actor: MoveActor, facts: MoveFacts): boolean {
+  const probe = decideMove({ from, to, actor, facts });
+  return !probe.ok && probe.code === "reason_required";
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { JOB_STATUSES, decideMove, movesFrom, type JobStatus, type MoveActor, type MoveFacts } from "@/model/job-status";
+import { JOB_STATUSES, decideMove, decidePlan, moveNeedsReason, movesFrom, type JobStatus, type MoveActor, type MoveFacts } from "@/model/job-status";
 
 const builder: MoveActor = { role: "builder", isJobCustomer: false };
 const owner: MoveActor = { role: "owner", isJobCustomer: false };
@@ -73,5 +73,39 @@ describe("the job status machine", () => {
   it("a closed job is final", () => {
     expect(movesFrom("closed")).toEqual([]);
     expect(decideMove({ from: "closed", to: "verified", actor: owner, reason: "x", facts: ready })).toMatchObject({ ok: false, message: /final/ });
+  });
+
+  it("a kit the study calls cannot-fit is planned only by an owner who records why", () => {
+    const cannot: MoveFacts = { hasPlan: true, verification: null, planVerdict: "cannot-fit" };
+    expect(decideMove({ from: "intake", to: "planned", actor: builder, reason: "customer insists", facts: cannot })).toMatchObject({ ok: false, code: "forbidden", message: /only the shop's owner/ });
+    expect(decideMove({ from: "intake", to: "planned", actor: owner, facts: cannot })).toMatchObject({ ok: false, code: "reason_required", message: /cannot fit safely/ });
+    expect(decideMove({ from: "intake", to: "planned", actor: owner, reason: "  ", facts: cannot })).toMatchObject({ ok: false, code: "reason_required" });
+    expect(decideMove({ from: "intake", to: "planned", actor: owner, reason: "passage to be welded first", facts: cannot })).toEqual({ ok: true, needsReason: true });
+    expect(moveNeedsReason("intake", "planned", owner, cannot)).toBe(true);
+    expect(moveNeedsReason("intake", "planned", builder, { ...cannot, planVerdict: "fits-after-cut" })).toBe(false);
+  });
+
+  it("a kit that fits is planned by a builder without a reason; an override already recorded is not asked again", () => {
+    for (const planVerdict of ["fits-as-is", "fits-after-cut", null] as const) {
+      expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { hasPlan: true, verification: null, planVerdict } })).toEqual({ ok: true, needsReason: false });
+    }
+    expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { hasPlan: true, verification: null, planVerdict: "cannot-fit", planOverridden: true } })).toMatchObject({ ok: true });
+  });
+
+  it("the plan rule alone: staff plan a fitting kit, only an owner with a reason a cannot-fit one, a customer never", () => {
+    expect(decidePlan({ verdict: "fits-after-cut", actor: builder })).toEqual({ ok: true, override: false });
+    expect(decidePlan({ verdict: "cannot-fit", actor: builder, reason: "why" })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(decidePlan({ verdict: "cannot-fit", actor: owner })).toMatchObject({ ok: false, code: "reason_required" });
+    expect(decidePlan({ verdict: "cannot-fit", actor: owner, reason: "welded passage" })).toEqual({ ok: true, override: true });
+    expect(decidePlan({ verdict: "fits-as-is", actor: customer })).toMatchObject({ ok: false, code: "forbidden" });
+  });
+
+  it("readings outside the plan are verified only by an owner who records why", () => {
+    const failed: MoveFacts = { hasPlan: true, verification: "fail" };
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, reason: "looks fine", facts: failed })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(decideMove({ from: "machined", to: "verified", actor: owner, facts: failed })).toMatchObject({ ok: false, code: "reason_required", message: /outside the plan's tolerance/ });
+    expect(decideMove({ from: "machined", to: "verified", actor: owner, reason: "trial fit checked, 0.02 mm accepted", facts: failed })).toEqual({ ok: true, needsReason: true });
+    expect(decideMove({ from: "machined", to: "verified", actor: owner, reason: "x", facts: { hasPlan: true, verification: "incomplete" } })).toMatchObject({ ok: false, code: "precondition" });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: ready })).toEqual({ ok: true, needsReason: false });
   });
 });
