@@ -185,6 +185,14 @@ function evaluateKit(kit: CylinderKit, ctx: StudyContext): KitResult {
 
   const given = study.cut;
   const planCut = !clearsMouth || given?.diameterMm !== undefined || given?.depthMm !== undefined;
+  const proposeDepth = (diameterMm: number) =>
+    cleanDecimal(roundUpTo(requiredCutDepthMm(Math.max(0, protrusionMm), L.minDepthClearanceMm, diameterMm * slope, cs.mouth.depthMm), DEFAULT_DEPTH_RESOLUTION_MM, tol));
+  // The least cut that clears this kit, whatever cut is planned: the cut the core proposes when none is given.
+  let leastCut: KitResult["leastCut"] = null;
+  if (!clearsMouth) {
+    const leastDiameterMm = proposeCutDiameterMm(r, L.minRadialClearanceMm, worstAxisOffsetMm, rig, tol);
+    leastCut = { diameterMm: leastDiameterMm, depthMm: proposeDepth(leastDiameterMm) };
+  }
 
   let cut: KitResult["cut"] = null;
   let vsCut: number | null = null;
@@ -203,9 +211,7 @@ function evaluateKit(kit: CylinderKit, ctx: StudyContext): KitResult {
     const R = diameterMm / 2;
     depthVariation = diameterMm * slope;
     const depthProposed = given?.depthMm === undefined;
-    const depthMm =
-      given?.depthMm ??
-      cleanDecimal(roundUpTo(requiredCutDepthMm(Math.max(0, protrusionMm), L.minDepthClearanceMm, depthVariation, cs.mouth.depthMm), DEFAULT_DEPTH_RESOLUTION_MM, tol));
+    const depthMm = given?.depthMm ?? proposeDepth(diameterMm);
 
     vsCut = R - r - distance(bearing, skirtCenter);
     effective = R - r - worstAxisOffsetMm;
@@ -298,6 +304,7 @@ function evaluateKit(kit: CylinderKit, ctx: StudyContext): KitResult {
     reasons,
     skirt: { centerMm: skirtCenter, diameterMm: skirtDiameterMm, lengthMm: depth.lengthMm, gasketMm: depth.gasketMm, protrusionMm },
     cut,
+    leastCut,
     radialClearanceMm: { vsMouth: vsMouth.clearanceMm, vsCut },
     effectiveRadialClearanceMm: effective,
     depthClearanceMm,

@@ -48,8 +48,9 @@ export {
   WallResultSchema,
   RigResultSchema,
   CutResultSchema,
+  LeastCutSchema,
 } from "./result-schema";
-export type { StudyResult, KitResult, Verdict, ReasonCode, WarningCode, Warning, RigResult, CutResult, WallResult } from "./result-schema";
+export type { StudyResult, KitResult, Verdict, ReasonCode, WarningCode, Warning, RigResult, CutResult, WallResult, LeastCut } from "./result-schema";
 
 export { evaluateStudy, resolveLimits, proposeCutDiameterMm } from "./evaluate";
 export type { EvaluateOptions, ResolvedLimits } from "./evaluate";

@@ -120,6 +120,8 @@ export const CutResultSchema = z.object({
   throughMouth: z.boolean(),
 });
 
+export const LeastCutSchema = z.object({ diameterMm: num(), depthMm: num() });
+
 export const KitAlignmentSchema = z.object({
   tiltDeg: num(),
   directionDeg: num(),
@@ -148,6 +150,12 @@ export const KitResultSchema = z.object({
     protrusionMm: num(),
   }),
   cut: CutResultSchema.nullable(),
+  /**
+   * The least cut that clears this kit, whatever cut is planned: D = 2·(r + c_min + worst axis offset) rounded up so
+   * the cutter setting lands on the rig's resolution (0.1 mm of diameter without a rig), depth = protrusion + c_min
+   * + bottom tilt variation rounded up to 0.05 mm; null when the skirt already clears the mouth.
+   */
+  leastCut: LeastCutSchema.nullable(),
   radialClearanceMm: z.object({
     /** Against the existing mouth, at the deck. */
     vsMouth: num(),
@@ -235,3 +243,4 @@ export type StudyResult = z.infer<typeof StudyResultSchema>;
 export type RigResult = z.infer<typeof RigResultSchema>;
 export type CutResult = z.infer<typeof CutResultSchema>;
 export type WallResult = z.infer<typeof WallResultSchema>;
+export type LeastCut = z.infer<typeof LeastCutSchema>;
