@@ -24,6 +24,8 @@ export const job = sqliteTable(
     customerUserId: text("customer_user_id").references(() => user.id, { onDelete: "set null" }),
     customerName: text("customer_name").notNull(),
     customerEmail: text("customer_email").notNull(),
+    /** The shop's own engine (a hobby builder's, or the shop's stock): no customer to share with; the owner approves. */
+    ownEngine: integer("own_engine", { mode: "boolean" }).notNull().default(false),
     engineNumber: text("engine_number").notNull().default(""),
     caseNumber: text("case_number").notNull().default(""),
     caseVariant: text("case_variant").notNull().default(""),

@@ -1,0 +1,1 @@
+ALTER TABLE `job` ADD `own_engine` integer DEFAULT false NOT NULL;
