@@ -1,7 +1,7 @@
 // After-cut verification: what was actually cut, compared with the plan the core gave for the chosen kit.
 // Pure: no I/O and no server-only import, so the job page, the API and the tests share one comparison.
-import { z } from "zod";
 import type { KitResult, StudyResult } from "@/geometry";
+import { TRIAL_FIT_LABEL, type AfterCutReadings } from "@/model/schemas/jobs";
 
 /**
  * How far a measured cut may sit from the planned one, mm. Common practice, no published source (a cut
@@ -9,33 +9,8 @@ import type { KitResult, StudyResult } from "@/geometry";
  */
 export const DEFAULT_VERIFY_TOLERANCE_MM = 0.05;
 
-export const TRIAL_FIT = ["goes-home", "binds", "not-tried"] as const;
-export type TrialFit = (typeof TRIAL_FIT)[number];
-export const TRIAL_FIT_LABEL: Record<TrialFit, string> = {
-  "goes-home": "Goes fully home without force, turns by hand",
-  binds: "Binds or does not go fully home",
-  "not-tried": "Not tried yet",
-};
-
-const mm = (what: string) =>
-  z
-    .number({ error: `${what} is a number in mm.` })
-    .positive(`${what} must be above zero.`)
-    .max(1000, `${what} above 1 m cannot be right.`);
-
-/** The readings taken after the cut, as the form and the API send them. */
-export const AfterCutReadingsSchema = z.strictObject({
-  cutDiameterMm: z.array(mm("A diameter reading")).min(1, "Take at least one diameter reading.").max(20, "Keep to 20 readings or fewer."),
-  cutDepthMm: z.array(mm("A depth reading")).min(1, "Take at least one depth reading.").max(20, "Keep to 20 readings or fewer."),
-  sealingLandMm: z
-    .array(z.strictObject({ stud: z.string().trim().min(1, "Name the stud.").max(80, "A stud label has at most 80 characters."), valueMm: z.number({ error: "The sealing land is a number in mm." }).min(0, "A sealing land cannot be negative.").max(100, "A sealing land above 100 mm cannot be right.") }))
-    .max(16),
-  gasketStackMm: z.number({ error: "The gasket stack is a number in mm." }).min(0, "The gasket stack cannot be negative.").max(10, "A gasket stack above 10 mm cannot be right."),
-  chipsCleaned: z.boolean({ error: "Say whether the crankcase was cleaned of chips." }),
-  trialFit: z.enum(TRIAL_FIT, { error: "Choose the trial-fit result." }),
-  notes: z.string().max(2000, "Keep the notes to 2000 characters or fewer.").optional(),
-});
-export type AfterCutReadings = z.infer<typeof AfterCutReadingsSchema>;
+// The readings' shape is a request schema; it lives with the other job requests.
+export { AfterCutReadingsSchema, TRIAL_FIT, TRIAL_FIT_LABEL, type AfterCutReadings, type TrialFit } from "@/model/schemas/jobs";
 
 /** The planned figures the readings are compared with, taken from the core's result for one kit. */
 export type VerificationPlan = {

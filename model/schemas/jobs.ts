@@ -1,7 +1,6 @@
 // Request shapes of the jobs, photos, payments and consult API. No server-only code: the forms use them too.
 import { z } from "zod";
 import { JOB_STATUSES } from "@/model/job-status";
-import { AfterCutReadingsSchema } from "@/db/verification";
 
 const text = (max: number, what: string) => z.string({ error: `${what} must be text.` }).trim().max(max, `Keep ${what.toLowerCase()} to ${max} characters or fewer.`);
 const Id = z.string({ error: "Expected an id." }).min(1, "Expected an id.").max(100, "That is not an id.");
@@ -51,6 +50,36 @@ export const JobListQuerySchema = z.object({
   dir: z.enum(["asc", "desc"]).optional(),
 });
 export type JobListQuery = z.infer<typeof JobListQuerySchema>;
+
+// ── After-cut readings ───────────────────────────────────────────────────────────────────────────
+
+export const TRIAL_FIT = ["goes-home", "binds", "not-tried"] as const;
+export type TrialFit = (typeof TRIAL_FIT)[number];
+export const TRIAL_FIT_LABEL: Record<TrialFit, string> = {
+  "goes-home": "Goes fully home without force, turns by hand",
+  binds: "Binds or does not go fully home",
+  "not-tried": "Not tried yet",
+};
+
+const mm = (what: string) =>
+  z
+    .number({ error: `${what} is a number in mm.` })
+    .positive(`${what} must be above zero.`)
+    .max(1000, `${what} above 1 m cannot be right.`);
+
+/** The readings taken after the cut, as the form and the API send them. */
+export const AfterCutReadingsSchema = z.strictObject({
+  cutDiameterMm: z.array(mm("A diameter reading")).min(1, "Take at least one diameter reading.").max(20, "Keep to 20 readings or fewer."),
+  cutDepthMm: z.array(mm("A depth reading")).min(1, "Take at least one depth reading.").max(20, "Keep to 20 readings or fewer."),
+  sealingLandMm: z
+    .array(z.strictObject({ stud: z.string().trim().min(1, "Name the stud.").max(80, "A stud label has at most 80 characters."), valueMm: z.number({ error: "The sealing land is a number in mm." }).min(0, "A sealing land cannot be negative.").max(100, "A sealing land above 100 mm cannot be right.") }))
+    .max(16),
+  gasketStackMm: z.number({ error: "The gasket stack is a number in mm." }).min(0, "The gasket stack cannot be negative.").max(10, "A gasket stack above 10 mm cannot be right."),
+  chipsCleaned: z.boolean({ error: "Say whether the crankcase was cleaned of chips." }),
+  trialFit: z.enum(TRIAL_FIT, { error: "Choose the trial-fit result." }),
+  notes: z.string().max(2000, "Keep the notes to 2000 characters or fewer.").optional(),
+});
+export type AfterCutReadings = z.infer<typeof AfterCutReadingsSchema>;
 
 export const ReadingsBodySchema = AfterCutReadingsSchema;
 

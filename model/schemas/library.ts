@@ -4,7 +4,7 @@
 // from them. Pure zod: no server-only code.
 import { z } from "zod";
 import { BoringRigSchema, CaseProfileSchema, CylinderKitSchema } from "@/geometry";
-import { NameSchema, NotesSchema, PersonSchema, ReadingSchema, ReadingValueMmSchema, VersionSchema, rowBase, without } from "./common";
+import { NameSchema, NotesSchema, ReadingSchema, ReadingValueMmSchema, VersionSchema, rowBase, without } from "./common";
 
 /**
  * Runs the core's own schema on the completed object (with the fields the row holds apart, such as the

@@ -19,7 +19,7 @@ import {
   RigCreateSchema,
   RigPatchSchema,
   listQuerySchema,
-} from "./schemas";
+} from "@/model/schemas";
 import { api, bodyOf, idOf, json, noBody, queryOf, staff, type IdContext } from "./http";
 
 // The handlers of /api/v1/{cases,kits,rigs}: each one reads the session, checks the role, parses its

@@ -26,7 +26,7 @@ import {
   listQuerySchema,
   pageSchema,
   type Entity,
-} from "./schemas";
+} from "@/model/schemas";
 
 type Method = "get" | "post" | "patch" | "delete";
 type Operation = {
