@@ -164,8 +164,9 @@ describe("rectangleFit", () => {
   it("judges a photo from straight above as a parallelogram", () => {
     const above = camera({ f: 1600, principal: [1000, 750], tiltXDeg: 0, tiltYDeg: 0, distanceMm: 300 });
     // Straight above a 70 × 50 rectangle the photo shows it as drawn, so 70 × 50 fits and 50 × 70 does not.
-    expect(rectangleFit([[-35, -25], [35, -25], [35, 25], [-35, 25]].map((p) => above(p as Point)), 70, 50, photoSize).fits).toBe(true);
-    const wrong = rectangleFit([[-35, -25], [35, -25], [35, 25], [-35, 25]].map((p) => above(p as Point)), 50, 70, photoSize);
+    const corners: Point[] = [[-35, -25], [35, -25], [35, 25], [-35, 25]];
+    expect(rectangleFit(corners.map(above), 70, 50, photoSize).fits).toBe(true);
+    const wrong = rectangleFit(corners.map(above), 50, 70, photoSize);
     expect(wrong.judgedFlat).toBe(true);
     expect(wrong.fits).toBe(false);
   });
