@@ -1,8 +1,35 @@
 import "server-only";
 
-export type DataErrorCode = "invalid_input" | "conflict" | "in_use" | "study_incomplete" | "geometry";
+const STATUS = {
+  invalid_input: 400,
+  conflict: 409,
+  in_use: 409,
+  study_incomplete: 422,
+  geometry: 422,
+  // Jobs: a move or change the job's state does not allow, or that needs a recorded reason.
+  reason_required: 400,
+  move_refused: 409,
+  wrong_status: 409,
+  plan_fixed: 409,
+  no_plan: 409,
+  no_cut: 422,
+  paid: 409,
+  customer_is_staff: 409,
+  // Deposits.
+  already_paid: 409,
+  not_approved: 409,
+  no_deposit: 409,
+  // Photos.
+  not_uploaded: 409,
+  photo_refused: 422,
+  // A service the product relies on (mail, payments, object store) refused or is not set up.
+  mail_failed: 502,
+  payments_failed: 502,
+  payments_unavailable: 503,
+  storage_unavailable: 503,
+} as const satisfies Record<string, number>;
 
-const STATUS: Record<DataErrorCode, number> = { invalid_input: 400, conflict: 409, in_use: 409, study_incomplete: 422, geometry: 422 };
+export type DataErrorCode = keyof typeof STATUS;
 
 /** A refusal of the data layer that the caller can act on: bad references, a stale version, a row still in use. */
 export class DataError extends Error {
