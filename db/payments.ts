@@ -2,7 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import Stripe from "stripe";
-import { ApiError } from "@/app/api/_lib/respond";
+import { DataError } from "./errors";
 import { AccessError, type Caller } from "./access";
 import { appUrl } from "./auth";
 import { getDb } from "./client";
@@ -17,8 +17,8 @@ import { PaymentsNotConfigured, stripe, verifiedEvent } from "./stripe";
 const PAYABLE = new Set(["approved", "machined", "verified"]);
 
 function unavailable(error: unknown): never {
-  if (error instanceof PaymentsNotConfigured) throw new ApiError(503, "payments_unavailable", error.message);
-  if (error instanceof Stripe.errors.StripeError) throw new ApiError(502, "payments_failed", `The payment service refused: ${error.message}`);
+  if (error instanceof PaymentsNotConfigured) throw new DataError("payments_unavailable", error.message);
+  if (error instanceof Stripe.errors.StripeError) throw new DataError("payments_failed", `The payment service refused: ${error.message}`);
   throw error;
 }
 
@@ -26,9 +26,9 @@ function unavailable(error: unknown): never {
 export async function startDepositCheckout(caller: Caller, jobId: string): Promise<{ url: string; sessionId: string }> {
   const { record } = await jobFor(caller, jobId);
   if (!isJobCustomer(caller, record)) throw new AccessError("forbidden", "The deposit is paid by the job's customer.");
-  if (record.paidAt) throw new ApiError(409, "already_paid", "The deposit is paid already. Thank you.");
-  if (!PAYABLE.has(record.status)) throw new ApiError(409, "not_approved", "Approve the plan first; the deposit is paid on approval.");
-  if (!Number.isInteger(record.depositAmount) || record.depositAmount <= 0) throw new ApiError(409, "no_deposit", "The shop asks no deposit for this job.");
+  if (record.paidAt) throw new DataError("already_paid", "The deposit is paid already. Thank you.");
+  if (!PAYABLE.has(record.status)) throw new DataError("not_approved", "Approve the plan first; the deposit is paid on approval.");
+  if (!Number.isInteger(record.depositAmount) || record.depositAmount <= 0) throw new DataError("no_deposit", "The shop asks no deposit for this job.");
   const db = await getDb();
   const [open] = await db
     .select()
@@ -56,7 +56,7 @@ export async function startDepositCheckout(caller: Caller, jobId: string): Promi
       success_url: `${appUrl()}/consult/${jobId}?checkout=done`,
       cancel_url: `${appUrl()}/consult/${jobId}?checkout=cancelled`,
     });
-    if (!session.url) throw new ApiError(502, "payments_failed", "The payment service gave no checkout page.");
+    if (!session.url) throw new DataError("payments_failed", "The payment service gave no checkout page.");
     await db.insert(jobs.jobPayment).values({
       id: paymentId,
       jobId,
@@ -68,7 +68,7 @@ export async function startDepositCheckout(caller: Caller, jobId: string): Promi
     });
     return { url: session.url, sessionId: session.id };
   } catch (error) {
-    if (error instanceof ApiError) throw error;
+    if (error instanceof DataError) throw error;
     return unavailable(error);
   }
 }

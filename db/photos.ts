@@ -1,7 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, eq } from "drizzle-orm";
-import { ApiError } from "@/app/api/_lib/respond";
+import { DataError } from "./errors";
 import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
@@ -42,7 +42,7 @@ export type PhotoView = {
 const staff = (c: Caller) => SHOP_STAFF.includes(c.role);
 
 function storageError(error: unknown): never {
-  if (error instanceof StorageNotConfigured) throw new ApiError(503, "storage_unavailable", error.message);
+  if (error instanceof StorageNotConfigured) throw new DataError("storage_unavailable", error.message);
   throw error;
 }
 
@@ -121,7 +121,7 @@ export async function completeUpload(caller: Caller, jobId: string, photoId: str
   const p = await photoOr404(caller, jobId, photoId);
   if (p.state !== "pending") return photoView(p);
   const found = await inspectObject(p.objectKey).catch(storageError);
-  if (!found) throw new ApiError(409, "not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
+  if (!found) throw new DataError("not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
   let reason: string | null = null;
   const sniffed = sniffImageType(found.head);
   if (found.sizeBytes > MAX_PHOTO_BYTES) reason = `The file is ${(found.sizeBytes / 1024 / 1024).toFixed(1)} MB; photos are limited to ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`;
@@ -131,7 +131,7 @@ export async function completeUpload(caller: Caller, jobId: string, photoId: str
   if (reason) {
     await deleteObject(p.objectKey).catch(() => undefined);
     await db.update(jobs.jobPhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
-    throw new ApiError(422, "photo_refused", reason);
+    throw new DataError("photo_refused", reason);
   }
   await db.update(jobs.jobPhoto).set({ state: "ready", sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
   return photoView({ ...p, state: "ready", sizeBytes: found.sizeBytes });
