@@ -167,6 +167,17 @@ const approvedShared = once("approved shared", jobRow({ shared: true, status: "a
 const approvedHidden = once("approved hidden", jobRow({ status: "approved" }));
 const sharedPhoto = once("shared photo", photoRow({ shared: true }, true));
 
+/** A checked deck photo on a fresh case profile of the shop. */
+async function newCasePhoto(shop: Shop): Promise<Record<string, string>> {
+  const c = await newCase(shop.http);
+  const start = ok<{ id: string; uploadUrl: string }>(await shop.http.post(`/api/v1/cases/${c.id}/photos`, { contentType: "image/png", sizeBytes: PNG.length }), 201);
+  const put = await fetch(start.uploadUrl, { method: "PUT", headers: { "content-type": "image/png" }, body: PNG });
+  expect(put.status).toBe(200);
+  ok(await shop.http.post(`/api/v1/cases/${c.id}/photos/${start.id}/complete`));
+  return { id: c.id, photoId: start.id };
+}
+const casePhoto = once("case photo", newCasePhoto);
+
 type PaymentFixture = { jobId: string; sessionId: string };
 let paymentFixture: Promise<PaymentFixture> | undefined;
 /** A job of the demo shop with an open deposit checkout, which a genuine completed event would mark paid. */
@@ -274,6 +285,11 @@ const JOBS: RouteCase[] = [
 
 const MATRIX: RouteCase[] = [
   ...library("cases"),
+  { method: "GET", path: "/api/v1/cases/{id}/photos", entity: "cases", own: staff(200), other: staffOther },
+  { method: "POST", path: "/api/v1/cases/{id}/photos", entity: "cases", body: () => ({ contentType: "image/png", sizeBytes: PNG.length }), own: staff(201), other: staffOther },
+  { method: "GET", path: "/api/v1/cases/{id}/photos/{photoId}", row: casePhoto, own: staff(303), other: staffOther },
+  { method: "POST", path: "/api/v1/cases/{id}/photos/{photoId}/complete", row: casePhoto, own: staff(200), other: staffOther },
+  { method: "DELETE", path: "/api/v1/cases/{id}/photos/{photoId}", row: newCasePhoto, mutates: true, own: staff(204), other: staffOther },
   ...library("kits"),
   ...library("rigs"),
   { method: "GET", path: "/api/v1/studies", own: staff(200) },
