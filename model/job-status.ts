@@ -35,6 +35,8 @@ export type MoveFacts = {
   planVerdict?: PlanVerdict | null;
   /** An owner's override of a cannot-fit verdict is already recorded for this plan. */
   planOverridden?: boolean;
+  /** The job is the shop's own engine: there is no customer, so the owner approves without a reason. */
+  ownEngine?: boolean;
 };
 
 export type MoveRequest = { from: JobStatus; to: JobStatus; actor: MoveActor; reason?: string; facts: MoveFacts };
@@ -107,7 +109,7 @@ export function decideMove({ from, to, actor, reason, facts }: MoveRequest): Mov
     if (actor.role === "customer") {
       if (!actor.isJobCustomer) return { ok: false, code: "forbidden", message: "Only this job's own customer can approve its plan." };
     } else if (actor.role === "owner") {
-      if (!hasReason)
+      if (!hasReason && !facts.ownEngine)
         return { ok: false, code: "reason_required", message: "An owner approving for the customer must record why (for example: approved by phone on a given day)." };
     } else {
       return { ok: false, code: "forbidden", message: "A plan is approved by its customer, or by the owner with a recorded reason." };
@@ -137,7 +139,7 @@ export function decideMove({ from, to, actor, reason, facts }: MoveRequest): Mov
       return { ok: true, needsReason: true };
     }
   }
-  return { ok: true, needsReason: Boolean(rule.reasonRequired || (to === "approved" && actor.role === "owner")) };
+  return { ok: true, needsReason: Boolean(rule.reasonRequired || (to === "approved" && actor.role === "owner" && !facts.ownEngine)) };
 }
 
 /** Whether a move asks the actor for a reason before it is tried (for the buttons a page offers). */

@@ -14,10 +14,16 @@ export const AmountSchema = z
   .min(0, "The deposit cannot be negative.")
   .max(10_000_000, "A deposit above 100 000.00 is not taken through the card checkout.");
 
-const base = {
-  title: text(120, "The title").min(1, "Give the job a title (for example the engine and the customer)."),
+const customer = {
   customerName: text(120, "The customer's name").min(1, "Name the customer."),
   customerEmail: z.string({ error: "Give the customer's e-mail." }).trim().toLowerCase().pipe(z.email({ error: "That does not look like an e-mail address." })),
+};
+
+/** Why an owner plans a kit the study calls cannot-fit (kept with the plan). */
+const OverrideReason = text(500, "The reason");
+
+const base = {
+  title: text(120, "The title").min(1, "Give the job a title (for example the engine and the customer)."),
   engineNumber: text(60, "The engine number").optional(),
   caseNumber: text(60, "The case number").optional(),
   caseVariant: text(120, "The case variant").optional(),
@@ -29,10 +35,26 @@ const base = {
   notes: text(4000, "The notes").optional(),
 };
 
-export const JobCreateSchema = z.strictObject(base);
-export const JobPatchSchema = JobCreateSchema.partial().extend({
-  version: z.number({ error: "Send the version you last read." }).int("The version is a whole number.").min(1, "The version is a whole number from 1 up."),
-});
+/** A new job: for a customer (name and e-mail), or for the shop's own engine (no customer). */
+export const JobCreateSchema = z
+  .strictObject({
+    ...base,
+    ownEngine: z.boolean({ error: "Say whether the job is for the shop's own engine (true or false)." }).optional(),
+    customerName: customer.customerName.optional(),
+    customerEmail: customer.customerEmail.optional(),
+    planOverrideReason: OverrideReason.optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.ownEngine) return;
+    if (!v.customerName) ctx.addIssue({ code: "custom", path: ["customerName"], message: "Name the customer, or open the job for your own engine." });
+    if (!v.customerEmail) ctx.addIssue({ code: "custom", path: ["customerEmail"], message: "Give the customer's e-mail, or open the job for your own engine." });
+  });
+export const JobPatchSchema = z
+  .strictObject({ ...base, ...customer, planOverrideReason: OverrideReason })
+  .partial()
+  .extend({
+    version: z.number({ error: "Send the version you last read." }).int("The version is a whole number.").min(1, "The version is a whole number from 1 up."),
+  });
 export type JobCreate = z.infer<typeof JobCreateSchema>;
 export type JobPatch = z.infer<typeof JobPatchSchema>;
 

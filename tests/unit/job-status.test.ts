@@ -108,4 +108,11 @@ describe("the job status machine", () => {
     expect(decideMove({ from: "machined", to: "verified", actor: owner, reason: "x", facts: { hasPlan: true, verification: "incomplete" } })).toMatchObject({ ok: false, code: "precondition" });
     expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: ready })).toEqual({ ok: true, needsReason: false });
   });
+
+  it("the shop's own engine is approved by its owner without a reason, and still not by a builder", () => {
+    const own: MoveFacts = { ...ready, ownEngine: true };
+    expect(decideMove({ from: "planned", to: "approved", actor: owner, facts: own })).toEqual({ ok: true, needsReason: false });
+    expect(decideMove({ from: "planned", to: "approved", actor: builder, facts: own })).toMatchObject({ ok: false, code: "forbidden" });
+    expect(moveNeedsReason("planned", "approved", owner, ready)).toBe(true);
+  });
 });
