@@ -116,6 +116,19 @@ export const BitCalibrationSchema = z
     path: ["maxCutDiameterMm"],
   });
 
+// A rig's stock as a shop has it. These also bound the depth-stop search: Π(count + 1) over half the sizes
+// is at most 21³ stacks (see depthStopWorkBound), whatever the thicknesses.
+/** Most stop grooves on one shaft. */
+export const MAX_GROOVES = 12;
+/** Most shim sizes in a rig's stock. */
+export const MAX_SHIM_SIZES = 6;
+/** Most shims of one size. */
+export const MAX_SHIMS_PER_SIZE = 20;
+/** Thickest shim or spacer, mm. */
+export const MAX_SHIM_THICKNESS_MM = 25;
+/** Longest stop travel, mm. */
+export const MAX_GROOVE_TRAVEL_MM = 1000;
+
 export const BoringRigSchema = z.strictObject({
   name: label(),
   /** Cutter head diameter as measured, without the bit. */
@@ -126,9 +139,18 @@ export const BoringRigSchema = z.strictObject({
   /** Radius from the shaft axis of the outermost rotating hardware (screw heads). */
   hardwareRadiusMm: lengthMm().optional(),
   grooves: z
-    .array(z.strictObject({ label: label(), travelMm: lengthMm() }))
-    .min(1, "at least one stop groove"),
-  shims: z.array(z.strictObject({ thicknessMm: lengthMm(), count: z.number().int().min(1).max(20) })).max(8).default([]),
+    .array(z.strictObject({ label: label(), travelMm: lengthMm().max(MAX_GROOVE_TRAVEL_MM, `a stop travel is at most ${MAX_GROOVE_TRAVEL_MM} mm`) }))
+    .min(1, "at least one stop groove")
+    .max(MAX_GROOVES, `at most ${MAX_GROOVES} stop grooves`),
+  shims: z
+    .array(
+      z.strictObject({
+        thicknessMm: lengthMm().max(MAX_SHIM_THICKNESS_MM, `a shim is at most ${MAX_SHIM_THICKNESS_MM} mm thick`),
+        count: z.number().int().min(1).max(MAX_SHIMS_PER_SIZE, `at most ${MAX_SHIMS_PER_SIZE} shims of one size`),
+      }),
+    )
+    .max(MAX_SHIM_SIZES, `at most ${MAX_SHIM_SIZES} shim sizes`)
+    .default([]),
   drillTopRpm: z.number().positive().max(100_000),
   /** Resolution to which the cutter setting can be read and set. */
   settingResolutionMm: lengthMm().optional(),

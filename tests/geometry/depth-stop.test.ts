@@ -1,0 +1,152 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { type DepthStop, chooseDepthStop, depthStopWorkBound, searchDepthStop } from "../../geometry/depth-stop";
+import { BoringRigSchema, MAX_GROOVES, MAX_SHIMS_PER_SIZE, MAX_SHIM_SIZES } from "../../geometry/schema";
+
+const TOL = 1e-9;
+
+type Rig = { grooves: { label: string; travelMm: number }[]; shims: { thicknessMm: number; count: number }[] };
+
+/**
+ * Every groove with every stack, one by one: the reference the search must equal. The rule, as the product
+ * states it: travel at or above the wanted depth and nearest to it; within the tolerance of that, fewest
+ * shims; then the groove listed first; then the fewest of the shim sizes listed first.
+ */
+function bruteForce(wantedMm: number, rig: Rig): Pick<DepthStop, "groove" | "shims" | "travelMm" | "shimCount" | "reached"> {
+  const stacks: number[][] = [[]];
+  for (const s of rig.shims) {
+    const next: number[][] = [];
+    for (const st of stacks) for (let n = 0; n <= s.count; n++) next.push([...st, n]);
+    stacks.splice(0, stacks.length, ...next);
+  }
+  const all = rig.grooves.flatMap((g, gi) =>
+    stacks.map((counts) => {
+      const stackMm = counts.reduce((sum, n, i) => sum + n * rig.shims[i].thicknessMm, 0);
+      return { gi, counts, travelMm: g.travelMm - stackMm, overshoot: g.travelMm - stackMm - wantedMm, count: counts.reduce((a, b) => a + b, 0) };
+    }),
+  );
+  const feasible = all.filter((c) => c.overshoot >= -TOL);
+  if (feasible.length === 0) {
+    const deepest = rig.grooves.reduce((a, g) => (g.travelMm > a.travelMm ? g : a));
+    return { groove: deepest.label, shims: [], travelMm: deepest.travelMm, shimCount: 0, reached: false };
+  }
+  const least = Math.min(...feasible.map((c) => c.overshoot));
+  const lex = (a: number[], b: number[]) => {
+    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return a[i] - b[i];
+    return 0;
+  };
+  const best = feasible
+    .filter((c) => c.overshoot <= least + TOL)
+    .sort((a, b) => a.count - b.count || a.gi - b.gi || lex(a.counts, b.counts))[0];
+  return {
+    groove: rig.grooves[best.gi].label,
+    shims: best.counts.flatMap((n, i) => (n > 0 ? [{ thicknessMm: rig.shims[i].thicknessMm, count: n }] : [])),
+    travelMm: best.travelMm,
+    shimCount: best.count,
+    reached: true,
+  };
+}
+
+// Thicknesses on a 0.05 mm grid (many stacks of equal height, so the tie-breaks decide) and odd ones to the µm.
+const thicknessArb = fc.oneof(fc.constantFrom(0.05, 0.1, 0.2, 0.25, 0.3, 0.5, 1), fc.integer({ min: 1, max: 1500 }).map((n) => n / 1000));
+const smallRigArb = fc.record({
+  grooves: fc.array(fc.integer({ min: 1000, max: 1500 }), { minLength: 1, maxLength: 3 }).map((ts) => ts.map((t, i) => ({ label: `g${i}`, travelMm: t / 100 }))),
+  shims: fc.array(fc.record({ thicknessMm: thicknessArb, count: fc.integer({ min: 1, max: 4 }) }), { maxLength: 3 }),
+});
+
+/** A rig at the schema's limits, with thicknesses chosen so that almost no two stacks have the same height. */
+function worstRig(sizes = MAX_SHIM_SIZES): Rig {
+  const odd = [0.0137, 0.0291, 0.0433, 0.0577, 0.0711, 0.0853, 0.0997, 0.1131];
+  return {
+    grooves: Array.from({ length: MAX_GROOVES }, (_, i) => ({ label: `groove ${i + 1}`, travelMm: 20 + i * 1.37 })),
+    shims: odd.slice(0, sizes).map((thicknessMm) => ({ thicknessMm, count: MAX_SHIMS_PER_SIZE })),
+  };
+}
+
+/** The answer is a real set-up: its shims are in the stock and add up to its stack, and it reaches the depth. */
+function expectConsistent(stop: DepthStop, wantedMm: number, rig: Rig) {
+  const stack = stop.shims.reduce((s, u) => s + u.count * u.thicknessMm, 0);
+  const total = (list: readonly { thicknessMm: number; count: number }[], t: number) => list.filter((s) => s.thicknessMm === t).reduce((a, s) => a + s.count, 0);
+  for (const u of stop.shims) expect(total(stop.shims, u.thicknessMm)).toBeLessThanOrEqual(total(rig.shims, u.thicknessMm));
+  expect(stop.shimStackMm).toBeCloseTo(stack, 9);
+  expect(stop.shimCount).toBe(stop.shims.reduce((s, u) => s + u.count, 0));
+  const groove = rig.grooves.find((g) => g.label === stop.groove);
+  expect(stop.travelMm).toBeCloseTo((groove?.travelMm ?? NaN) - stack, 9);
+  expect(stop.overshootMm).toBeCloseTo(stop.travelMm - wantedMm, 9);
+  expect(stop.overshootMm).toBeGreaterThanOrEqual(-TOL);
+}
+
+describe("depth stop search", () => {
+  it("equals the one-by-one search on small rigs (≤ 3 sizes of ≤ 4 shims, ≤ 3 grooves)", () => {
+    // On failure fast-check prints the seed and path that reproduce the case.
+    fc.assert(
+      fc.property(smallRigArb, fc.integer({ min: 800, max: 1600 }), (rig, w) => {
+        const wantedMm = w / 100;
+        const got = chooseDepthStop(wantedMm, rig, TOL);
+        const want = bruteForce(wantedMm, rig);
+        expect(got.reached).toBe(want.reached);
+        expect(got.groove).toBe(want.groove);
+        expect(got.shims).toEqual(want.shims);
+        expect(got.shimCount).toBe(want.shimCount);
+        expect(got.travelMm).toBeCloseTo(want.travelMm, 9);
+        if (got.reached) expectConsistent(got, wantedMm, rig);
+      }),
+      { numRuns: 400 },
+    );
+  });
+
+  it("among equally close stacks takes the fewest shims, then the groove listed first", () => {
+    const rig: Rig = {
+      grooves: [
+        { label: "upper", travelMm: 25 },
+        { label: "lower", travelMm: 26 },
+      ],
+      shims: [
+        { thicknessMm: 0.5, count: 2 },
+        { thicknessMm: 1, count: 1 },
+      ],
+    };
+    // 25 mm: groove "upper" bare, or "lower" over the 1 mm shim, or over two 0.5 mm shims.
+    const s = chooseDepthStop(25, rig, TOL);
+    expect(s.groove).toBe("upper");
+    expect(s.shimCount).toBe(0);
+    // 24.5 mm: one 0.5 under "upper" beats 1 + 0.5 under "lower".
+    const t = chooseDepthStop(24.5, rig, TOL);
+    expect(t).toMatchObject({ groove: "upper", shims: [{ thicknessMm: 0.5, count: 1 }], shimCount: 1 });
+  });
+
+  it("answers the largest rig the schema allows, within a work bound set by the counts and not the thicknesses", () => {
+    const rig = worstRig();
+    expect(BoringRigSchema.shape.shims.safeParse(rig.shims).success).toBe(true);
+    expect(BoringRigSchema.shape.grooves.safeParse(rig.grooves).success).toBe(true);
+    const bound = depthStopWorkBound(rig);
+    // Two halves of three sizes, 21³ stacks each, and five sweeps of them per groove.
+    expect(bound).toBe(2 * 21 ** 3 + MAX_GROOVES * 5 * 21 ** 3);
+    for (const wantedMm of [20.3, 27.77, 35.01]) {
+      const { stop, statesVisited } = searchDepthStop(wantedMm, rig, TOL);
+      expect(stop.reached).toBe(true);
+      expect(statesVisited).toBeLessThanOrEqual(bound);
+      expectConsistent(stop, wantedMm, rig);
+      // The thinnest shim is 0.0137 mm, and stacks of it and the next come far closer than that.
+      expect(stop.overshootMm).toBeLessThan(0.0137);
+    }
+  });
+
+  it("bounds the work of a rig with more sizes than the schema allows too (the search never lists every height)", () => {
+    const rig = worstRig(8);
+    const { stop, statesVisited } = searchDepthStop(23.456, rig, TOL);
+    expect(stop.reached).toBe(true);
+    expectConsistent(stop, 23.456, rig);
+    // 21⁴ per half instead of the 21⁸ ≈ 3.8·10¹⁰ stacks of a full listing.
+    expect(statesVisited).toBeLessThanOrEqual(depthStopWorkBound(rig));
+    expect(depthStopWorkBound(rig)).toBeLessThan(21 ** 4 * (2 + 5 * MAX_GROOVES) + 1);
+  });
+
+  it("refuses a stock beyond what a shop has, in words", () => {
+    const tooMany = BoringRigSchema.shape.shims.safeParse(worstRig(MAX_SHIM_SIZES + 1).shims);
+    expect(tooMany.success).toBe(false);
+    expect(tooMany.error?.issues[0].message).toBe(`at most ${MAX_SHIM_SIZES} shim sizes`);
+    const tooDeep = BoringRigSchema.shape.shims.safeParse([{ thicknessMm: 0.1, count: MAX_SHIMS_PER_SIZE + 1 }]);
+    expect(tooDeep.error?.issues[0].message).toBe(`at most ${MAX_SHIMS_PER_SIZE} shims of one size`);
+  });
+});
