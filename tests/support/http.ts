@@ -92,6 +92,16 @@ export async function waitForMail(to: string, subject: RegExp, timeoutMs = 10_00
   throw new Error(`no mail to ${to} matching ${subject} within ${timeoutMs} ms`);
 }
 
+/** Follows the address-confirmation link mailed at sign-up, as the person (their cookies) would. */
+export async function confirmEmail(http: Http, email: string): Promise<void> {
+  const mail = await waitForMail(email, /confirm/i);
+  const link = mail.links.find((l) => l.includes("/verify-email"));
+  if (!link) throw new Error(`the confirmation mail to ${email} carries no link`);
+  const url = new URL(link);
+  const res = await http.get(url.pathname + url.search);
+  if (res.status >= 400) throw new Error(`confirming ${email} answered ${res.status}: ${res.text.slice(0, 200)}`);
+}
+
 /** The test server's database, opened beside it (WAL lets both read; a writer waits up to 10 s for the server's). */
 export function testDb() {
   return createClient({ url: inject("databaseURL"), timeout: 10_000 });

@@ -1,34 +1,24 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
+import { readOutbox } from "@/db/mail";
 import { EmptyState } from "../../_ui/empty-state";
 import { outboxEnabled, requirePage } from "../../_ui/guard";
 
 export const metadata: Metadata = { title: "Outbox" };
 export const dynamic = "force-dynamic";
 
-type SinkMessage = { id: string; to: string[]; subject: string; text: string; links: string[]; receivedAt: string };
-
-async function readSink(): Promise<SinkMessage[] | null> {
-  try {
-    const res = await fetch(`${process.env.MAIL_SINK_URL}/messages`, { cache: "no-store" });
-    if (!res.ok) return null;
-    return ((await res.json()) as { messages: SinkMessage[] }).messages;
-  } catch {
-    return null;
-  }
-}
-
 export default async function OutboxPage() {
-  await requirePage("/outbox", ["owner"]);
+  const caller = await requirePage("/outbox", ["owner"]);
   if (!outboxEnabled()) notFound();
-  const messages = await readSink();
+  const messages = await readOutbox(caller);
   return (
     <div className="flex flex-col gap-6">
       <div>
         <h1 className="text-3xl font-semibold">Outbox</h1>
         <p className="mt-1 max-w-prose text-ink-2">
-          Mail caught by the local mail sink, newest first. This page exists only where the product runs with the local sink; a real deployment
-          sends through its mail service.
+          Mail caught by the local mail sink, newest first: mail to you, the invitations of your shop, and other mail to the members of
+          your shop. Password resets and address confirmations are shown only to the person they were sent to. This page exists only where
+          the product runs with the local sink; a real deployment sends through its mail service.
         </p>
       </div>
       {messages === null ? (
