@@ -94,7 +94,7 @@ async function main() {
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;
     const secret = randomBytes(32).toString("base64url");
-    const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: secret } });
+    const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: secret, PAYMENTS: "off" } });
     children.push(server);
     await waitFor(`${base}/sign-in`, 60_000);
 

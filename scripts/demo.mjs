@@ -1,10 +1,10 @@
 // The README's run command: migrate, seed the demo shop, build, and serve at http://localhost:3000 with the
 // local mail sink, payment fake and object store.
-import { buildIsStale, ensureSecret, run, startNext } from "./lib.mjs";
+import { buildIsStale, ensureSecrets, run, startNext } from "./lib.mjs";
 import { startLocalServices } from "./services.mjs";
 
 const port = Number(process.env.PORT ?? 3000);
-ensureSecret();
+ensureSecrets();
 process.env.BETTER_AUTH_URL ??= `http://localhost:${port}`;
 
 run("npx", ["tsx", "db/migrate.ts"]);

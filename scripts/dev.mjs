@@ -1,9 +1,9 @@
 // Development: migrate, seed, the local services, and `next dev` with hot reload.
 import { spawn } from "node:child_process";
-import { ensureSecret, root, run } from "./lib.mjs";
+import { ensureSecrets, root, run } from "./lib.mjs";
 import { startLocalServices } from "./services.mjs";
 
-ensureSecret();
+ensureSecrets();
 process.env.BETTER_AUTH_URL ??= "http://localhost:3000";
 run("npx", ["tsx", "db/migrate.ts"]);
 run("npx", ["tsx", "db/seed.ts"]);

@@ -3,7 +3,7 @@ export type FakeEvent = { event: { id: string; type: string; data: { object: Rec
 export function startFakeStripe(opts: {
   host?: string;
   port?: number;
-  webhookSecret: string;
+  webhookSecret?: string;
   webhookUrl?: string;
   secretKey?: string;
   quiet?: boolean;

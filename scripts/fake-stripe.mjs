@@ -49,9 +49,17 @@ ${problem ? `<p class="problem" role="alert">${escape(problem)}</p>` : ""}
  * Starts the fake; resolves with its address and a stop function. Port 0 picks a free port.
  * `webhookUrl` is where completed sessions are posted; when absent, the origin of each session's
  * success_url + `/api/v1/payments/webhook` is used. `secretKey`, when given, must be the bearer of every API call.
+ * Both secrets default to the environment's STRIPE_WEBHOOK_SECRET and STRIPE_SECRET_KEY; none is written in the code.
  */
-export async function startFakeStripe({ host = "127.0.0.1", port = 12111, webhookSecret, webhookUrl, secretKey, quiet = false } = {}) {
-  if (!webhookSecret) throw new Error("startFakeStripe needs the webhookSecret the app verifies events with");
+export async function startFakeStripe({
+  host = "127.0.0.1",
+  port = 12111,
+  webhookSecret = process.env.STRIPE_WEBHOOK_SECRET,
+  webhookUrl,
+  secretKey = process.env.STRIPE_SECRET_KEY,
+  quiet = false,
+} = {}) {
+  if (!webhookSecret) throw new Error("the payment fake signs events with STRIPE_WEBHOOK_SECRET: set it (the demo and dev scripts generate one)");
   const sessions = new Map();
   const events = [];
   let address = "";

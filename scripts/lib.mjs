@@ -6,21 +6,38 @@ import { createServer } from "node:net";
 
 export const root = new URL("..", import.meta.url).pathname;
 
-/** Makes sure an auth secret exists: from the environment, else generated once into .env.local (git-ignored). */
-export function ensureSecret() {
-  if (process.env.BETTER_AUTH_SECRET) return;
-  const envFile = `${root}.env.local`;
+/** The secrets every install has of its own, and how a fresh one is made. */
+const SECRETS = {
+  BETTER_AUTH_SECRET: () => randomBytes(32).toString("base64url"),
+  STRIPE_SECRET_KEY: () => `sk_test_${randomBytes(24).toString("hex")}`,
+  STRIPE_WEBHOOK_SECRET: () => `whsec_${randomBytes(24).toString("hex")}`,
+};
+
+/**
+ * Makes sure the auth secret and the local payment fake's key and webhook secret exist: from the
+ * environment, else from .env.local (git-ignored), else generated once into it. `envFile` is for tests.
+ */
+export function ensureSecrets(envFile = `${root}.env.local`) {
   const current = existsSync(envFile) ? readFileSync(envFile, "utf8") : "";
-  const found = current.match(/^BETTER_AUTH_SECRET=(.+)$/m);
-  if (found) {
-    process.env.BETTER_AUTH_SECRET = found[1].trim();
-    return;
+  const added = [];
+  for (const [name, make] of Object.entries(SECRETS)) {
+    if (process.env[name]) continue;
+    const found = current.match(new RegExp(`^${name}=(.+)$`, "m"));
+    if (found) {
+      process.env[name] = found[1].trim();
+      continue;
+    }
+    process.env[name] = make();
+    added.push(`${name}=${process.env[name]}`);
   }
-  const secret = randomBytes(32).toString("base64url");
-  appendFileSync(envFile, `${current && !current.endsWith("\n") ? "\n" : ""}BETTER_AUTH_SECRET=${secret}\n`);
-  process.env.BETTER_AUTH_SECRET = secret;
-  console.log("generated an auth secret into .env.local");
+  if (added.length) {
+    appendFileSync(envFile, `${current && !current.endsWith("\n") ? "\n" : ""}${added.join("\n")}\n`);
+    console.log(`generated ${added.map((a) => a.split("=")[0]).join(", ")} into ${envFile.replace(root, "")}`);
+  }
 }
+
+/** Kept for older scripts: the secrets, the auth secret among them. */
+export const ensureSecret = () => ensureSecrets();
 
 /** Runs a command to completion with inherited output; exits the process when it fails. */
 export function run(cmd, args, env = {}) {

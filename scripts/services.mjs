@@ -23,8 +23,10 @@ export async function startLocalServices() {
     smtpPort: Number(process.env.MAIL_SINK_SMTP_PORT ?? 2525),
     httpPort: Number(process.env.MAIL_SINK_HTTP_PORT ?? 2526),
   });
-  const secretKey = process.env.STRIPE_SECRET_KEY ?? "sk_test_local_demo";
-  const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET ?? "whsec_local_demo";
+  // The install's own secrets (scripts/lib.mjs ensureSecrets() puts them into the environment).
+  const secretKey = process.env.STRIPE_SECRET_KEY;
+  const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET;
+  if (!secretKey || !webhookSecret) throw new Error("startLocalServices needs STRIPE_SECRET_KEY and STRIPE_WEBHOOK_SECRET in the environment (ensureSecrets() makes them)");
   const payments = await startFakeStripe({ port: Number(process.env.FAKE_STRIPE_PORT ?? 12111), webhookSecret, secretKey });
   const store = await startObjectStore({ port: Number(process.env.OBJECT_STORE_PORT ?? 4569), directory: "data/objects" });
   console.log(`mail sink: SMTP ${sink.host}:${sink.smtpPort} (the owner's Outbox page lists what it catches)`);

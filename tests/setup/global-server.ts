@@ -1,5 +1,6 @@
 // Starts what the integration and browser tests talk to: a fresh file database in a temporary folder,
 // the local mail sink, and the production build served by `next start` on 127.0.0.1.
+import { randomBytes } from "node:crypto";
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -37,7 +38,10 @@ export default async function setup(project: TestProject) {
     env: {
       DATABASE_URL: databaseURL,
       BETTER_AUTH_URL: baseURL,
-      BETTER_AUTH_SECRET: "test-secret-for-the-test-server-only-0123456789",
+      // A secret of this run only; the payment fake's key and webhook secret come from global-jobs.ts.
+      BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"),
+      // Each simulated person sends its own X-Forwarded-For, as one trusted proxy in front of the app would.
+      TRUSTED_PROXY_HOPS: "1",
       SMTP_HOST: sink.host,
       SMTP_PORT: String(sink.smtpPort),
       SMTP_IGNORE_TLS: "true",
