@@ -2,30 +2,28 @@ import "server-only";
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
+import { APIError } from "better-auth/api";
 import { organization } from "better-auth/plugins";
 import { and, asc, eq, isNull } from "drizzle-orm";
+import { PersonNameSchema } from "@/model/names";
+import { CLIENT_ADDRESS_HEADER } from "./auth-guard";
 import { dbSync } from "./client";
+import { appUrl, trustedOrigins } from "./config";
 import { actionMail, sendMail } from "./mail";
 import { accessControl, roles } from "./roles";
 import * as schema from "./schema";
 import { createShopFor } from "./shops";
 
-/** The public address of the app, used in mailed links. */
-export function appUrl(): string {
-  return (process.env.BETTER_AUTH_URL || "http://localhost:3000").replace(/\/$/, "");
-}
-
-function trustedOrigins(): string[] {
-  const base = new URL(appUrl());
-  const origins = new Set([base.origin]);
-  // localhost and 127.0.0.1 are the same machine; a browser may use either.
-  if (base.hostname === "localhost") origins.add(`${base.protocol}//127.0.0.1${base.port ? `:${base.port}` : ""}`);
-  if (base.hostname === "127.0.0.1") origins.add(`${base.protocol}//localhost${base.port ? `:${base.port}` : ""}`);
-  for (const extra of (process.env.TRUSTED_ORIGINS ?? "").split(",").map((s) => s.trim()).filter(Boolean)) origins.add(extra);
-  return [...origins];
-}
+export { appUrl };
 
 export const MIN_PASSWORD_LENGTH = 10;
+
+/** A person's name by the product's rules (trimmed), or the library's 400 naming the field. */
+function checkedName(name: unknown): string {
+  const parsed = PersonNameSchema.safeParse(name);
+  if (!parsed.success) throw new APIError("BAD_REQUEST", { message: `[body.name] ${parsed.error.issues[0]?.message ?? "Give your name."}` });
+  return parsed.data;
+}
 
 export const auth = betterAuth({
   appName: "Borewright",
@@ -44,6 +42,8 @@ export const auth = betterAuth({
     maxPasswordLength: 128,
     autoSignIn: true,
     requireEmailVerification: false,
+    // A reset ends every session of the account: whoever held the old password is signed out.
+    revokeSessionsOnPasswordReset: true,
     resetPasswordTokenExpiresIn: 60 * 60,
     sendResetPassword: async ({ user, url }) => {
       await sendMail(
@@ -78,12 +78,18 @@ export const auth = betterAuth({
     },
   },
   advanced: {
+    // The auth route sets this header from X-Forwarded-For only as far as TRUSTED_PROXY_HOPS allows.
+    ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
     cookiePrefix: "borewright",
     defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
   },
   databaseHooks: {
     user: {
+      update: {
+        before: async (data) => ("name" in data ? { data: { ...data, name: checkedName(data.name) } } : { data }),
+      },
       create: {
+        before: async (user) => ({ data: { ...user, name: checkedName(user.name) } }),
         // A person who signs up without an invitation waiting gets a shop of their own, as its owner.
         after: async (created) => {
           const db = dbSync();

@@ -2,6 +2,7 @@
 // queries and pages, and the one error shape. Pure zod: imported by the browser, the data layer and the
 // route handlers alike.
 import { z } from "zod";
+import { BIDI_CONTROL, BIDI_MESSAGE } from "@/model/names";
 
 // ── Building blocks ──────────────────────────────────────────────────────────────────────────────
 
@@ -9,7 +10,8 @@ export const NameSchema = z
   .string({ error: "Give it a name." })
   .trim()
   .min(1, "Give it a name.")
-  .max(80, "Keep the name to 80 characters or fewer.");
+  .max(80, "Keep the name to 80 characters or fewer.")
+  .refine((s) => !BIDI_CONTROL.test(s), { message: BIDI_MESSAGE });
 export const NotesSchema = z.string({ error: "Notes must be text." }).max(4000, "Keep the notes to 4000 characters or fewer.");
 export const VersionSchema = z
   .number({ error: "Send the version you last read (a whole number)." })
@@ -50,7 +52,7 @@ export type SortField<E extends Entity> = (typeof SORT_FIELDS)[E][number];
 export function listQuerySchema<E extends Entity>(entity: E) {
   const fields = SORT_FIELDS[entity] as readonly string[];
   return z.object({
-    page: z.coerce.number({ error: "page is a whole number from 1." }).int("page is a whole number from 1.").min(1, "page is a whole number from 1.").max(1_000_000).default(1),
+    page: z.coerce.number({ error: "page is a whole number from 1." }).int("page is a whole number from 1.").min(1, "page is a whole number from 1.").max(100_000, "page is at most 100 000.").default(1),
     pageSize: z.coerce
       .number({ error: "pageSize is a whole number from 1 to 100." })
       .int("pageSize is a whole number from 1 to 100.")
