@@ -1,10 +1,9 @@
 import { NextResponse } from "next/server";
-import { z } from "zod";
 import { requireCaller } from "@/db/access";
 import { setUnits } from "@/db/members";
 import { handle, parseWith, readJson } from "../../_lib/respond";
+import { MePatchSchema } from "../_lib/account-schemas";
 
-const MePatch = z.object({ units: z.enum(["mm", "in"]) }).strict();
 
 /** The caller: who, which shop, which role, which units. */
 export const GET = handle(async () => {
@@ -15,7 +14,7 @@ export const GET = handle(async () => {
 /** Changes the caller's own preferences (units). */
 export const POST = handle(async (req: Request) => {
   const caller = await requireCaller();
-  const body = parseWith(MePatch, await readJson(req));
+  const body = parseWith(MePatchSchema, await readJson(req));
   await setUnits(caller, body.units);
   return NextResponse.json({ me: { ...caller, units: body.units } });
 });

@@ -1,11 +1,10 @@
 import { NextResponse } from "next/server";
-import { z } from "zod";
 import { getSessionUser, listMyShops } from "@/db/access";
 import { getDb } from "@/db/client";
 import { createShopFor } from "@/db/shops";
 import { ApiError, handle, parseWith, readJson } from "../../_lib/respond";
+import { NewShopSchema } from "../_lib/account-schemas";
 
-const NewShop = z.object({ name: z.string().trim().min(1).max(80).optional() }).strict();
 
 /** The shops the caller belongs to. */
 export const GET = handle(async () => {
@@ -18,7 +17,7 @@ export const GET = handle(async () => {
 export const POST = handle(async (req: Request) => {
   const session = await getSessionUser();
   if (!session) throw new ApiError(401, "unauthenticated", "Sign in to continue.");
-  const body = parseWith(NewShop, await readJson(req));
+  const body = parseWith(NewShopSchema, await readJson(req));
   const shopId = await createShopFor(await getDb(), { id: session.user.id, name: session.user.name }, body.name);
   return NextResponse.json({ shop: { id: shopId } }, { status: 201 });
 });
