@@ -16,7 +16,7 @@ import {
 import type { Caller } from "./access";
 import { getDb } from "./client";
 import { DataError } from "./errors";
-import { insertLibraryStmt, newLibraryValues } from "./library";
+import { insertLibraryStmt, newLibraryValues } from "./library-writes";
 import { assertStaff, parseStoredReadings, runBatch } from "./rows";
 import * as schema from "./schema";
 

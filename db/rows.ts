@@ -1,6 +1,6 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
-import type { z } from "zod";
+import { z } from "zod";
 import { AccessError, type Caller } from "./access";
 import { getClient } from "./client";
 import { conflict } from "./errors";
@@ -24,17 +24,32 @@ export const iso = (d: Date | number | null | undefined): string | null =>
   d === null || d === undefined ? null : new Date(d).toISOString();
 
 /** A reading as stored: the value, and who took it when. */
-export type StoredReading = { valueMm: number; takenById: string; takenByName: string; takenAt: number };
+export const StoredReadingSchema = z.object({ valueMm: z.number(), takenById: z.string(), takenByName: z.string(), takenAt: z.number() });
+export type StoredReading = z.infer<typeof StoredReadingSchema>;
+
+/**
+ * Reads a JSON column through its schema. A damaged column (not JSON, or not the shape) is logged and read
+ * as the fallback: it holds readings or plans the data layer wrote itself, and one damaged row must not
+ * keep the rest of a list or a study from showing.
+ */
+export function readColumn<T>(schema: z.ZodType<T>, json: string | null | undefined, fallback: T, what: string): T {
+  if (json === null || json === undefined || json === "") return fallback;
+  let value: unknown;
+  try {
+    value = JSON.parse(json);
+  } catch (error) {
+    console.warn(`${what}: the stored column is not JSON; it is read as empty.`, error);
+    return fallback;
+  }
+  const r = schema.safeParse(value);
+  if (r.success) return r.data;
+  console.warn(`${what}: the stored column does not have the expected shape; it is read as empty.`, r.error.issues.slice(0, 3));
+  return fallback;
+}
 
 /** Reads a stored reading list, tolerating an empty or damaged column. */
 export function parseStoredReadings(json: string | null | undefined): StoredReading[] {
-  if (!json) return [];
-  try {
-    const v = JSON.parse(json) as unknown;
-    return Array.isArray(v) ? (v as StoredReading[]) : [];
-  } catch {
-    return [];
-  }
+  return readColumn(z.array(StoredReadingSchema), json, [], "stored readings");
 }
 
 /**

@@ -1,37 +1,27 @@
 import "server-only";
 import type { SQLiteColumn } from "drizzle-orm/sqlite-core";
 import { and, asc, count, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
-import {
-  GeometryError,
-  StudySchema,
-  evaluateStudy,
-  type BoringRig,
-  type CutPlan,
-  type CylinderKit,
-  type Readings,
-  type Study,
-  type StudyLimits,
-  type StudyResult,
-} from "@/geometry";
-import { without, type HistoryItem, type KitData, type ListQuery, type Page, type RigData, type StudyCreate, type StudyPatch, type StudyRow } from "@/model/schemas";
+import { CutPlanSchema, GeometryError, ReadingsSchema, StudyLimitsSchema, evaluateStudy, type Study, type StudyResult } from "@/geometry";
+import type { CaseRow, HistoryItem, KitRow, ListQuery, Page, RigRow, StudyRow } from "@/model/schemas";
+import { assembleStudy, checkStudy, type AssembledStudy } from "@/model/study-assembly";
 import type { Caller } from "./access";
 import { getClient, getDb } from "./client";
-import { DataError, conflict } from "./errors";
-import { archivedFilter, assembleCase, insertLibraryStmt, nameFilter, newLibraryValues, recordsById } from "./library";
-import { assertStaff, fieldsOf, iso, newId, notFound, runBatch, type Stmt } from "./rows";
+import { DataError } from "./errors";
+import { archivedFilter, libraryRowsById, nameFilter } from "./library";
+import { assertStaff, fieldsOf, iso, notFound, readColumn } from "./rows";
 import * as schema from "./schema";
 import { shopLimits } from "./settings";
-import { describeChanges, type StudySnapshot } from "./study-history";
+import type { StudySnapshot } from "./study-history";
 
 // Studies: one case profile, its candidate kits, a rig, the cut plan, the holder readings and the
-// study's own limits. The data layer assembles them into the core's Study, the one shape that the
-// API, the browser and the fit CLI all evaluate.
+// study's own limits. Reading them, assembling them into the core's Study (with the one assembler the
+// browser and the fit script's files share) and evaluating them; writes are in study-writes.ts.
 
 const s = schema.study;
 
-type Loaded = { record: schema.StudyRow; creatorName: string; caseName: string; kitIds: string[] };
+export type Loaded = { record: schema.StudyRow; creatorName: string; caseName: string; kitIds: string[] };
 
-function toRow(l: Loaded): StudyRow {
+export function toStudyRow(l: Loaded): StudyRow {
   const r = l.record;
   return {
     id: r.id,
@@ -46,14 +36,14 @@ function toRow(l: Loaded): StudyRow {
     caseName: l.caseName,
     kitIds: l.kitIds,
     rigId: r.rigId,
-    cut: r.cutJson ? (JSON.parse(r.cutJson) as CutPlan) : null,
-    readings: r.readingsJson ? (JSON.parse(r.readingsJson) as Readings) : null,
-    limits: r.limitsJson ? (JSON.parse(r.limitsJson) as StudyLimits) : null,
+    cut: readColumn(CutPlanSchema.nullable(), r.cutJson, null, "a study's cut plan"),
+    readings: readColumn(ReadingsSchema.nullable(), r.readingsJson, null, "a study's holder readings"),
+    limits: readColumn(StudyLimitsSchema.nullable(), r.limitsJson, null, "a study's limits"),
     chosenKitId: r.chosenKitId,
   };
 }
 
-function snapshot(row: StudyRow): StudySnapshot {
+export function snapshotOf(row: StudyRow): StudySnapshot {
   return {
     name: row.name,
     notes: row.notes,
@@ -82,7 +72,7 @@ async function kitIdsOf(studyIds: readonly string[]): Promise<Map<string, string
 
 const selection = { record: s, creatorName: schema.user.name, caseName: schema.caseProfile.name };
 
-async function load(shopId: string, id: string): Promise<Loaded | null> {
+export async function loadStudy(shopId: string, id: string): Promise<Loaded | null> {
   const db = await getDb();
   const [found] = await db
     .select(selection)
@@ -96,9 +86,9 @@ async function load(shopId: string, id: string): Promise<Loaded | null> {
   return { ...found, kitIds: kits.get(id) ?? [] };
 }
 
-async function loadOr404(caller: Caller, id: string): Promise<Loaded> {
+export async function loadStudyOr404(caller: Caller, id: string): Promise<Loaded> {
   assertStaff(caller);
-  const found = await load(caller.shopId, id);
+  const found = await loadStudy(caller.shopId, id);
   if (!found) throw notFound("study");
   return found;
 }
@@ -135,7 +125,7 @@ export async function listStudies(caller: Caller, query: ListQuery): Promise<Pag
     .offset((query.page - 1) * query.pageSize);
   const kits = await kitIdsOf(rows.map((r) => r.record.id));
   return {
-    items: rows.map((r) => toRow({ ...r, kitIds: kits.get(r.record.id) ?? [] })),
+    items: rows.map((r) => toStudyRow({ ...r, kitIds: kits.get(r.record.id) ?? [] })),
     page: query.page,
     pageSize: query.pageSize,
     total: totalRow?.n ?? 0,
@@ -144,60 +134,61 @@ export async function listStudies(caller: Caller, query: ListQuery): Promise<Pag
 
 // ── Assembling the core's Study ─────────────────────────────────────────────────────────────────
 
-/** The study as the core reads it, before validation: case, kits (id and name from their rows), rig, cut, readings, limits. */
-async function assemble(shopId: string, row: StudyRow): Promise<Record<string, unknown>> {
-  const [cases, kits, rigs, ownLimits] = await Promise.all([
-    recordsById("cases", shopId, [row.caseId]),
-    recordsById("kits", shopId, row.kitIds),
-    recordsById("rigs", shopId, row.rigId ? [row.rigId] : []),
-    shopLimits(shopId),
+/** The library rows a study is built from: its case, its kits in the study's order, its rig. */
+export type StudyLibraryRows = { case: CaseRow | null; kits: KitRow[]; rig: RigRow | null };
+
+async function libraryRowsOf(shopId: string, row: StudyRow): Promise<StudyLibraryRows> {
+  const [cases, kits, rigs] = await Promise.all([
+    libraryRowsById("cases", shopId, [row.caseId]),
+    libraryRowsById("kits", shopId, row.kitIds),
+    libraryRowsById("rigs", shopId, row.rigId ? [row.rigId] : []),
   ]);
-  const caseRecord = cases.get(row.caseId) as schema.CaseProfileRow | undefined;
-  const study: Record<string, unknown> = { name: row.name };
-  if (caseRecord) study.case = assembleCase(caseRecord);
-  study.kits = row.kitIds
-    .map((id) => kits.get(id))
-    .filter((k) => k !== undefined)
-    .map((k): CylinderKit => ({ id: k.id, name: k.name, ...(JSON.parse(k.dataJson) as KitData) }));
-  const rig = row.rigId ? rigs.get(row.rigId) : undefined;
-  if (rig) study.rig = { ...(JSON.parse(rig.dataJson) as RigData), name: rig.name } satisfies BoringRig;
-  if (row.cut) study.cut = row.cut;
-  if (row.readings) study.readings = row.readings;
-  const limits = { ...ownLimits, ...(row.limits ?? {}) };
-  if (Object.keys(limits).length > 0) study.limits = limits;
-  return study;
+  return {
+    case: cases.get(row.caseId) ?? null,
+    kits: row.kitIds.map((id) => kits.get(id)).filter((k) => k !== undefined),
+    rig: row.rigId ? (rigs.get(row.rigId) ?? null) : null,
+  };
+}
+
+/** The study as the core reads it, before validation, from the shop's rows and limits. */
+async function assemble(shopId: string, row: StudyRow, rows?: StudyLibraryRows): Promise<AssembledStudy> {
+  const [library, ownLimits] = await Promise.all([rows ?? libraryRowsOf(shopId, row), shopLimits(shopId)]);
+  return assembleStudy({ ...row, ...library }, ownLimits);
 }
 
 /** The assembled study checked by the core's schema, or 422 naming what keeps it from being evaluated. */
-function validated(assembled: Record<string, unknown>): Study {
-  const r = StudySchema.safeParse(assembled);
-  if (r.success) return r.data;
-  const fields = fieldsOf(r.error);
-  const message =
-    Array.isArray(assembled.kits) && assembled.kits.length === 0
-      ? "Add at least one kit to the study to evaluate it."
-      : "The study cannot be evaluated as it stands: fix the fields named.";
-  throw new DataError("study_incomplete", message, fields);
+function validated(assembled: AssembledStudy): Study {
+  const r = checkStudy(assembled);
+  if (r.ok) return r.study;
+  const message = assembled.kits.length === 0 ? "Add at least one kit to the study to evaluate it." : "The study cannot be evaluated as it stands: fix the fields named.";
+  throw new DataError("study_incomplete", message, fieldsOf(r.error));
 }
 
 /** A study's row and its assembled Study (what the core evaluates; unchecked when it is incomplete). */
-export async function getStudy(caller: Caller, id: string): Promise<{ item: StudyRow; study: unknown }> {
-  const loaded = await loadOr404(caller, id);
-  const item = toRow(loaded);
-  const assembled = await assemble(caller.shopId, item);
-  const parsed = StudySchema.safeParse(assembled);
-  return { item, study: parsed.success ? parsed.data : assembled };
+export async function getStudy(caller: Caller, id: string): Promise<{ item: StudyRow; study: Study | AssembledStudy }> {
+  const { item, study } = await getStudyWithRows(caller, id);
+  return { item, study };
+}
+
+/** A study's row, its assembled Study and the library rows it was assembled from (the study page seeds its cache with them). */
+export async function getStudyWithRows(caller: Caller, id: string): Promise<{ item: StudyRow; study: Study | AssembledStudy; rows: StudyLibraryRows }> {
+  const loaded = await loadStudyOr404(caller, id);
+  const item = toStudyRow(loaded);
+  const rows = await libraryRowsOf(caller.shopId, item);
+  const assembled = await assemble(caller.shopId, item, rows);
+  const checked = checkStudy(assembled);
+  return { item, study: checked.ok ? checked.study : assembled, rows };
 }
 
 /** The study evaluated on the server by the core, with the Study it evaluated. */
 export async function studyResults(caller: Caller, id: string): Promise<{ study: Study; result: StudyResult }> {
-  const loaded = await loadOr404(caller, id);
+  const loaded = await loadStudyOr404(caller, id);
   return evaluateLoaded(caller.shopId, loaded);
 }
 
 /** The same evaluation for a shop known to be the caller's, as objects. */
 export async function evaluateStoredStudy(shopId: string, id: string): Promise<{ study: Study; result: StudyResult } | null> {
-  const loaded = await load(shopId, id);
+  const loaded = await loadStudy(shopId, id);
   return loaded ? evaluateLoaded(shopId, loaded) : null;
 }
 
@@ -228,7 +219,7 @@ export async function studyResultsBody(shopId: string, id: string): Promise<stri
   if (fingerprint === null) return null;
   const kept = resultsCache.get(id);
   if (kept && kept.fingerprint === fingerprint) return kept.body;
-  const loaded = await load(shopId, id);
+  const loaded = await loadStudy(shopId, id);
   if (!loaded) return null;
   const body = JSON.stringify(await evaluateLoaded(shopId, loaded));
   resultsCache.delete(id);
@@ -246,7 +237,7 @@ export async function studyResultsJson(caller: Caller, id: string): Promise<stri
 }
 
 async function evaluateLoaded(shopId: string, loaded: Loaded): Promise<{ study: Study; result: StudyResult }> {
-  const study = validated(await assemble(shopId, toRow(loaded)));
+  const study = validated(await assemble(shopId, toStudyRow(loaded)));
   try {
     return { study, result: evaluateStudy(study) };
   } catch (error) {
@@ -257,184 +248,13 @@ async function evaluateLoaded(shopId: string, loaded: Loaded): Promise<{ study: 
 
 /** The study as a file: the same JSON the fit CLI reads. */
 export async function exportStudy(caller: Caller, id: string): Promise<{ name: string; study: Study }> {
-  const loaded = await loadOr404(caller, id);
-  return { name: loaded.record.name, study: validated(await assemble(caller.shopId, toRow(loaded))) };
-}
-
-// ── Checking references ─────────────────────────────────────────────────────────────────────────
-
-type Refs = { caseId: string; kitIds: readonly string[]; rigId: string | null; readings: Readings | null; chosenKitId: string | null };
-
-/** Every id names a row of the caller's shop, the holder readings name the case's studs, the choice is one of the kits. */
-async function checkRefs(caller: Caller, refs: Refs): Promise<Map<string, string>> {
-  const [cases, kits, rigs] = await Promise.all([
-    recordsById("cases", caller.shopId, [refs.caseId]),
-    recordsById("kits", caller.shopId, refs.kitIds),
-    recordsById("rigs", caller.shopId, refs.rigId ? [refs.rigId] : []),
-  ]);
-  const fields: Record<string, string> = {};
-  const caseRecord = cases.get(refs.caseId) as schema.CaseProfileRow | undefined;
-  if (!caseRecord) fields.caseId = "No case profile with this id in your shop.";
-  refs.kitIds.forEach((id, i) => {
-    if (!kits.has(id)) fields[`kitIds.${i}`] = "No cylinder kit with this id in your shop.";
-  });
-  if (refs.rigId && !rigs.has(refs.rigId)) fields.rigId = "No boring rig with this id in your shop.";
-  if (refs.chosenKitId && !refs.kitIds.includes(refs.chosenKitId)) fields.chosenKitId = "The chosen kit must be one of the study's kits.";
-  if (caseRecord && refs.readings) {
-    const studs = new Set(assembleCase(caseRecord).studs.map((st) => st.label));
-    const used = new Set<string>();
-    refs.readings.holderHeights.forEach((h, i) => {
-      if (!studs.has(h.stud)) fields[`readings.holderHeights.${i}.stud`] = `The case profile has no stud labelled "${h.stud}".`;
-      else if (used.has(h.stud)) fields[`readings.holderHeights.${i}.stud`] = `A second reading at stud "${h.stud}".`;
-      used.add(h.stud);
-    });
-  }
-  if (Object.keys(fields).length > 0) throw new DataError("invalid_input", "Some fields are not valid.", fields);
-  const names = new Map<string, string>();
-  if (caseRecord) names.set(caseRecord.id, caseRecord.name);
-  for (const k of kits.values()) names.set(k.id, k.name);
-  for (const r of rigs.values()) names.set(r.id, r.name);
-  return names;
-}
-
-// ── Writing ─────────────────────────────────────────────────────────────────────────────────────
-
-
-function eventStmt(studyId: string, caller: Caller, at: number, summary: string, guardWriteId?: string): Stmt {
-  const values = [newId(), studyId, at, caller.userId, caller.name, summary];
-  if (!guardWriteId) return { sql: "insert into study_event (id, study_id, at, by_id, by_name, summary) values (?, ?, ?, ?, ?, ?)", args: values };
-  return {
-    sql: "insert into study_event (id, study_id, at, by_id, by_name, summary) select ?, ?, ?, ?, ?, ? where exists (select 1 from study where id = ? and write_id = ?)",
-    args: [...values, studyId, guardWriteId],
-  };
-}
-
-const json = (v: unknown) => (v === null || v === undefined ? null : JSON.stringify(v));
-
-/** Statements that insert a whole new study with its kits and its first history line. */
-function insertStudyStmts(caller: Caller, id: string, at: number, v: Omit<StudySnapshot, "kitIds"> & { kitIds: readonly string[] }, summary: string): Stmt[] {
-  return [
-    {
-      sql: `insert into study (id, organization_id, name, notes, case_id, rig_id, cut_json, readings_json, limits_json, chosen_kit_id, write_id, version, created_at, updated_at, created_by)
-            values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1, ?, ?, ?)`,
-      args: [id, caller.shopId, v.name, v.notes, v.caseId, v.rigId, json(v.cut), json(v.readings), json(v.limits), v.chosenKitId, newId(), at, at, caller.userId],
-    },
-    ...v.kitIds.map((kitId, position) => ({ sql: "insert into study_kit (study_id, kit_id, position) values (?, ?, ?)", args: [id, kitId, position] })),
-    eventStmt(id, caller, at, summary),
-  ];
-}
-
-/** Creates a study from the shop's own library rows. */
-export async function createStudy(caller: Caller, body: StudyCreate): Promise<StudyRow> {
-  assertStaff(caller);
-  const refs = { caseId: body.caseId, kitIds: body.kitIds, rigId: body.rigId ?? null, readings: body.readings ?? null, chosenKitId: null };
-  await checkRefs(caller, refs);
-  const id = newId();
-  const now = Date.now();
-  await runBatch(
-    insertStudyStmts(
-      caller,
-      id,
-      now,
-      { ...refs, name: body.name, notes: body.notes ?? "", cut: body.cut ?? null, limits: body.limits ?? null },
-      "created the study",
-    ),
-  );
-  return toRow((await load(caller.shopId, id)) as Loaded);
-}
-
-/** Changes a study when the caller names its current version; the kits, the row and its history change together or not at all. */
-export async function updateStudy(caller: Caller, id: string, patch: StudyPatch): Promise<StudyRow> {
-  const loaded = await loadOr404(caller, id);
-  const before = toRow(loaded);
-  if (before.version !== patch.version) throw conflict();
-
-  const kitIds = patch.kitIds ?? before.kitIds;
-  let chosenKitId = patch.chosenKitId !== undefined ? patch.chosenKitId : before.chosenKitId;
-  // A kit taken out of the study stops being its choice.
-  if (patch.chosenKitId === undefined && chosenKitId && !kitIds.includes(chosenKitId)) chosenKitId = null;
-  const after: StudySnapshot = {
-    name: patch.name ?? before.name,
-    notes: patch.notes ?? before.notes,
-    caseId: patch.caseId ?? before.caseId,
-    kitIds,
-    rigId: patch.rigId !== undefined ? patch.rigId : before.rigId,
-    cut: patch.cut !== undefined ? patch.cut : before.cut,
-    readings: patch.readings !== undefined ? patch.readings : before.readings,
-    limits: patch.limits !== undefined ? patch.limits : before.limits,
-    chosenKitId,
-  };
-  const names = await checkRefs(caller, after);
-  const oldNames = await checkNamesOf(caller, before);
-  const nameOf = (kitOrOther: string) => names.get(kitOrOther) ?? oldNames.get(kitOrOther) ?? "(deleted)";
-  const changes = describeChanges(snapshot(before), after, nameOf);
-  if (changes.length === 0) return before;
-
-  const now = Date.now();
-  const writeId = newId();
-  const guard = "exists (select 1 from study where id = ? and write_id = ?)";
-  const stmts: Stmt[] = [
-    {
-      sql: `update study set name = ?, notes = ?, case_id = ?, rig_id = ?, cut_json = ?, readings_json = ?, limits_json = ?, chosen_kit_id = ?,
-            write_id = ?, version = version + 1, updated_at = ? where id = ? and organization_id = ? and version = ?`,
-      args: [after.name, after.notes, after.caseId, after.rigId, json(after.cut), json(after.readings), json(after.limits), after.chosenKitId, writeId, now, id, caller.shopId, patch.version],
-    },
-  ];
-  if (JSON.stringify(before.kitIds) !== JSON.stringify(after.kitIds)) {
-    stmts.push({ sql: `delete from study_kit where study_id = ? and ${guard}`, args: [id, id, writeId] });
-    after.kitIds.forEach((kitId, position) =>
-      stmts.push({ sql: `insert into study_kit (study_id, kit_id, position) select ?, ?, ? where ${guard}`, args: [id, kitId, position, id, writeId] }),
-    );
-  }
-  for (const summary of changes) stmts.push(eventStmt(id, caller, now, summary, writeId));
-  const results = await runBatch(stmts);
-  // Someone else's update landed between our read and our write: nothing of ours was written.
-  if (results[0]?.rowsAffected === 0) throw conflict();
-  return toRow((await load(caller.shopId, id)) as Loaded);
-}
-
-/** Names of the rows a study referred to before a change (kits since taken out still have their names). */
-async function checkNamesOf(caller: Caller, row: StudyRow): Promise<Map<string, string>> {
-  const [cases, kits, rigs] = await Promise.all([
-    recordsById("cases", caller.shopId, [row.caseId]),
-    recordsById("kits", caller.shopId, row.kitIds),
-    recordsById("rigs", caller.shopId, row.rigId ? [row.rigId] : []),
-  ]);
-  const names = new Map<string, string>();
-  for (const m of [cases, kits, rigs]) for (const r of m.values()) names.set(r.id, r.name);
-  return names;
-}
-
-/** Archives or restores a study; studies are never deleted. */
-export async function setStudyArchived(caller: Caller, id: string, archived: boolean): Promise<StudyRow> {
-  const loaded = await loadOr404(caller, id);
-  if ((loaded.record.archivedAt !== null) === archived) return toRow(loaded);
-  const now = Date.now();
-  const writeId = newId();
-  await runBatch([
-    {
-      sql: "update study set archived_at = ?, write_id = ?, version = version + 1, updated_at = ? where id = ? and organization_id = ?",
-      args: [archived ? now : null, writeId, now, id, caller.shopId],
-    },
-    eventStmt(id, caller, now, archived ? "archived the study" : "restored the study", writeId),
-  ]);
-  return toRow((await load(caller.shopId, id)) as Loaded);
-}
-
-/** A copy of a study (same case, kits, rig, cut, readings and limits) under a new name. */
-export async function duplicateStudy(caller: Caller, id: string): Promise<StudyRow> {
-  const loaded = await loadOr404(caller, id);
-  const row = toRow(loaded);
-  const suffix = " (copy)";
-  const name = row.name.slice(0, 80 - suffix.length) + suffix;
-  const copyId = newId();
-  await runBatch(insertStudyStmts(caller, copyId, Date.now(), { ...snapshot(row), name }, `duplicated from "${row.name}"`));
-  return toRow((await load(caller.shopId, copyId)) as Loaded);
+  const loaded = await loadStudyOr404(caller, id);
+  return { name: loaded.record.name, study: validated(await assemble(caller.shopId, toStudyRow(loaded))) };
 }
 
 /** Who changed what in a study, newest first. */
 export async function studyHistory(caller: Caller, id: string): Promise<{ items: HistoryItem[] }> {
-  await loadOr404(caller, id);
+  await loadStudyOr404(caller, id);
   const db = await getDb();
   const rows = await db
     .select()
@@ -443,46 +263,4 @@ export async function studyHistory(caller: Caller, id: string): Promise<{ items:
     .orderBy(desc(schema.studyEvent.at), desc(sql`rowid`))
     .limit(500);
   return { items: rows.map((e) => ({ at: iso(e.at) ?? "", by: { id: e.byId, name: e.byName }, summary: e.summary })) };
-}
-
-/** The most kits one imported study may bring (the same bound as a study's kit list). */
-export const MAX_STUDY_KITS = 50;
-
-/** Creates a study from a study file: its case, kits and rig become new rows of the shop's library. All or nothing. */
-export async function importStudy(caller: Caller, study: Study): Promise<StudyRow> {
-  assertStaff(caller);
-  if (study.kits.length > MAX_STUDY_KITS) {
-    throw new DataError("invalid_input", "Some fields are not valid.", { kits: `A study compares at most ${MAX_STUDY_KITS} kits.` });
-  }
-  const now = Date.now();
-  const { name: caseName, ...caseData } = study.case;
-  const caseValues = newLibraryValues(caller, "cases", { name: caseName, data: caseData }, now);
-  const kitValues = study.kits.map((k) => newLibraryValues(caller, "kits", { name: k.name, data: without(without(k, "id"), "name") }, now));
-  const rigValues = study.rig ? (({ name, ...data }) => newLibraryValues(caller, "rigs", { name, data }, now))(study.rig) : null;
-
-  const studyId = newId();
-  const stmts: Stmt[] = [
-    insertLibraryStmt("cases", caseValues),
-    ...kitValues.map((k) => insertLibraryStmt("kits", k)),
-    ...(rigValues ? [insertLibraryStmt("rigs", rigValues)] : []),
-    ...insertStudyStmts(
-      caller,
-      studyId,
-      now,
-      {
-        name: study.name ?? caseName,
-        notes: "",
-        caseId: caseValues.id,
-        kitIds: kitValues.map((k) => k.id),
-        rigId: rigValues?.id ?? null,
-        cut: study.cut ?? null,
-        readings: study.readings ?? null,
-        limits: study.limits ?? null,
-        chosenKitId: null,
-      },
-      "imported from a study file",
-    ),
-  ];
-  await runBatch(stmts);
-  return toRow((await load(caller.shopId, studyId)) as Loaded);
 }

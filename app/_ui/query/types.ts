@@ -1,5 +1,6 @@
 import type { z } from "zod";
-import type { BoringRigSchema, CaseProfileSchema, CutPlanSchema, CylinderKitSchema, ReadingsSchema, StudyInput, StudyLimitsSchema, Limits } from "@/geometry";
+import type { BoringRigSchema, CaseProfileSchema, CutPlanSchema, CylinderKitSchema, ReadingsSchema, StudyLimitsSchema, Limits } from "@/geometry";
+import type { AssembledStudy } from "@/model/study-assembly";
 
 // Rows of the library & studies API, as the contract in DEVELOPERS.md gives them.
 
@@ -56,7 +57,8 @@ export type ListParams = {
 export type LibraryKind = "cases" | "kits" | "rigs";
 export type RowOf<K extends LibraryKind> = K extends "cases" ? CaseRow : K extends "kits" ? KitRow : RigRow;
 
-export type StudyDetail = { item: StudyRow; study: StudyInput };
+/** A study's row and the Study the server assembled from its rows (unchecked while the study is incomplete). */
+export type StudyDetail = { item: StudyRow; study: AssembledStudy };
 export type HistoryEntry = { at: string; by: Person; summary: string };
 
 export type ShopSettings = { settings: { units: "mm" | "in"; limits: Limits; defaulted: string[] }; version: number };

@@ -3,10 +3,11 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
 import { SHOP_STAFF } from "@/db/roles";
-import { getStudy } from "@/db/studies";
+import { getStudyWithRows } from "@/db/studies";
 import { requirePage } from "../../../_ui/guard";
 import { QueryProvider } from "../../../_ui/query/provider";
 import { getServerQueryClient } from "../../../_ui/query/server";
+import { libraryKeys } from "../../../_ui/query/library/keys";
 import { studyKeys } from "../../../_ui/query/studies/keys";
 import type { StudyDetail } from "../../../_ui/query/types";
 import { StudyEditor } from "./_components/study-editor";
@@ -19,8 +20,12 @@ export default async function StudyPage({ params }: { params: Promise<{ id: stri
   const qc = getServerQueryClient();
   try {
     // The data layer checks the role and that the study belongs to the caller's shop (404 otherwise).
-    const detail = (await getStudy(caller, id)) as unknown as StudyDetail;
-    qc.setQueryData(studyKeys.detail(id), detail);
+    const { item, study, rows } = await getStudyWithRows(caller, id);
+    qc.setQueryData<StudyDetail>(studyKeys.detail(id), { item, study });
+    // The rows the server assembled the study from: the studio assembles the same Study from them at once.
+    if (rows.case) qc.setQueryData(libraryKeys.detail("cases", rows.case.id), rows.case);
+    for (const kit of rows.kits) qc.setQueryData(libraryKeys.detail("kits", kit.id), kit);
+    if (rows.rig) qc.setQueryData(libraryKeys.detail("rigs", rows.rig.id), rows.rig);
   } catch (error) {
     if (error instanceof AccessError && error.code === "not_found") notFound();
     throw error;

@@ -1,16 +1,7 @@
 import "server-only";
 import type { z } from "zod";
-import {
-  createLibraryItem,
-  deleteLibraryItem,
-  getLibraryItem,
-  listLibrary,
-  setLibraryArchived,
-  updateLibraryItem,
-  type LibraryCreate,
-  type LibraryKind,
-  type LibraryPatch,
-} from "@/db/library";
+import { getLibraryItem, listLibrary, type LibraryCreate, type LibraryKind, type LibraryPatch } from "@/db/library";
+import { createLibraryItem, deleteLibraryItem, setLibraryArchived, updateLibraryItem } from "@/db/library-writes";
 import {
   CaseCreateSchema,
   CasePatchSchema,

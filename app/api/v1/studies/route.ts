@@ -1,4 +1,5 @@
-import { createStudy, listStudies } from "@/db/studies";
+import { listStudies } from "@/db/studies";
+import { createStudy } from "@/db/study-writes";
 import { StudyCreateSchema, listQuerySchema } from "@/model/schemas";
 import { api, bodyOf, json, queryOf, staff } from "../_lib/http";
 

@@ -28,6 +28,7 @@ import { StudyInputsSchema, studyDefaults, studyToCore, type StudyFormValues, ty
 import { useAutosave } from "./use-autosave";
 import { readStudyInputs, useStudyInputs } from "./use-study-inputs";
 import { useStudyRows } from "./use-study-rows";
+import { shopOwnLimits } from "@/model/study-assembly";
 
 type Tab = "plan" | "lineup";
 
@@ -51,7 +52,7 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
 
   const rows = useStudyRows(values.caseId, values.kitIds, values.rigId);
   const settings = useShopSettings();
-  const shopLimits = (settings.data?.settings.limits ?? null) as Record<string, unknown> | null;
+  const shopLimits = useMemo(() => (settings.data ? shopOwnLimits(settings.data.settings) : null), [settings.data]);
 
   // The last evaluation that worked stays on screen while a field is being fixed.
   const [lastGood, setLastGood] = useState<Extract<Evaluation, { ok: true }> | null>(null);

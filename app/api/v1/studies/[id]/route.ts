@@ -1,4 +1,5 @@
-import { getStudy, updateStudy } from "@/db/studies";
+import { getStudy } from "@/db/studies";
+import { updateStudy } from "@/db/study-writes";
 import { StudyPatchSchema } from "@/model/schemas";
 import { api, bodyOf, idOf, json, staff, type IdContext } from "../../_lib/http";
 

@@ -1,4 +1,4 @@
-import { importStudy } from "@/db/studies";
+import { importStudy } from "@/db/study-writes";
 import { StudySchema } from "@/model/schemas";
 import { api, bodyOf, json, staff } from "../../_lib/http";
 

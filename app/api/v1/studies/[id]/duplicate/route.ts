@@ -1,4 +1,4 @@
-import { duplicateStudy } from "@/db/studies";
+import { duplicateStudy } from "@/db/study-writes";
 import { api, idOf, json, noBody, staff, type IdContext } from "../../../_lib/http";
 
 /** A copy of the study, named "… (copy)". */

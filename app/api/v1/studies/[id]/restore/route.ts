@@ -1,4 +1,4 @@
-import { setStudyArchived } from "@/db/studies";
+import { setStudyArchived } from "@/db/study-writes";
 import { api, idOf, json, noBody, staff, type IdContext } from "../../../_lib/http";
 
 export const POST = api(async (req: Request, ctx: IdContext) => {
