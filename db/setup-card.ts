@@ -1,14 +1,30 @@
 // The content of a job's bench setup card, built once from the plan snapshot so the printable page and
 // the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
-import { formatLength, type LengthUnits } from "@/geometry";
-import { planDrawing, type PlanOptions } from "@/scene/drawing/plan";
+import { formatLength, type LengthUnits, type Verdict } from "@/geometry";
+import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
+import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
 import type { Drawing } from "@/scene/drawing/svg";
-import type { PlanSnapshot } from "./jobs";
+import type { Override, PlanSnapshot } from "./jobs";
 
 export type CardLine = { label: string; value: string; warn?: boolean };
+
+/** The study's verdict for the planned kit, as the card states it at the top (and, for a cannot-fit plan, on every page). */
+export type CardVerdict = {
+  verdict: Verdict;
+  words: string;
+  tone: VerdictTone;
+  /** The verdict's colour as printed. */
+  color: string;
+  /** What stops a kit that cannot fit, in plain words. */
+  reasons: string[];
+  /** For a cannot-fit plan: the line every page carries (the owner's override, or that there is none). */
+  everyPage: string | null;
+};
+
 export type SetupCard = {
   title: string;
+  verdict: CardVerdict;
   reference: string;
   shopName: string;
   header: CardLine[];
@@ -35,6 +51,7 @@ export const SETUP_CAUTIONS = [
 type JobLike = {
   reference: string;
   title: string;
+  plan?: { override: Override | null } | null;
   customer: { name: string };
   engineNumber: string;
   caseNumber: string;
@@ -47,6 +64,21 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
   const kitIndex = Math.max(0, plan.result.kits.findIndex((k) => k.kitId === plan.kitId));
   const k = plan.result.kits[kitIndex];
   const cut = k.cut;
+  const tone = VERDICT_TEXT[k.verdict];
+  const override = job.plan?.override ?? null;
+  const verdict: CardVerdict = {
+    verdict: k.verdict,
+    words: tone.words,
+    tone: tone.tone,
+    color: TONE_HEX[tone.tone],
+    reasons: blockingReasons(k),
+    everyPage:
+      k.verdict !== "cannot-fit"
+        ? null
+        : override
+          ? `${tone.words.toUpperCase()} — planned on ${override.by.name}'s override (${override.at.slice(0, 10)}): ${override.reason}`
+          : `${tone.words.toUpperCase()} — no override recorded: do not cut before the shop's owner decides.`,
+  };
   const header: CardLine[] = [
     { label: "Job", value: `${job.reference} — ${job.title}` },
     { label: "Customer", value: job.customer.name },
@@ -135,6 +167,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
   ];
   return {
     title: `Setup card — ${job.reference}`,
+    verdict,
     reference: job.reference,
     shopName,
     header,
@@ -149,15 +182,61 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
   };
 }
 
+/** A drawing as the card prints it: at a stated scale that fits its page, with a bar to check the print by. */
+export type CardDrawing = Drawing & {
+  /** Printed size ÷ true size: 1 is full size. */
+  scale: number;
+  /** "1:1", "1:2", … */
+  scaleText: string;
+  /** The length the scale bar stands for, mm (50 mm, or 2 in for inch users), and its label. */
+  barMm: number;
+  barLabel: string;
+  caption: string;
+};
+
 /**
- * The card's two drawings of the planned kit (plan at the deck, section through the axis), the same for the
- * printable page and the PDF. A plan the drawing code cannot draw leaves the card without drawings rather
- * than without its figures.
+ * The room a drawing has on its own landscape page, mm: A4 (297 × 210) and Letter (279.4 × 215.9) alike, less
+ * 10 mm margins, the heading above and the caption and scale bar below.
  */
-export function setupCardDrawings(plan: PlanSnapshot, kitIndex: number, units: LengthUnits, options: PlanOptions = {}): Drawing[] {
+export const DRAWING_ROOM_MM = { width: 259, height: 150 } as const;
+
+/** The scales a drawing is printed at, largest first: full size when it fits the page, else half, else a quarter. */
+export const DRAWING_SCALES = [1, 1 / 2, 1 / 4] as const;
+
+/** The largest of DRAWING_SCALES at which a drawing fits DRAWING_ROOM_MM. */
+export function drawingScale(d: { widthMm: number; heightMm: number }): number {
+  const fits = DRAWING_SCALES.find((s) => d.widthMm * s <= DRAWING_ROOM_MM.width && d.heightMm * s <= DRAWING_ROOM_MM.height);
+  return fits ?? Math.min(DRAWING_ROOM_MM.width / d.widthMm, DRAWING_ROOM_MM.height / d.heightMm);
+}
+
+/** A scale as the trade writes it ("1:1", "1:2"), or "1:3.7" for an odd one. */
+export function scaleText(scale: number): string {
+  const d = 1 / scale;
+  return `1:${Number.isInteger(Math.round(d * 10) / 10) ? Math.round(d) : (Math.round(d * 10) / 10).toString()}`;
+}
+
+/**
+ * The card's two drawings of the planned kit (plan at the deck, section through the axis), each for a page of
+ * its own at a stated scale, the same for the printable page and the PDF. A plan the drawing code cannot draw
+ * leaves the card without drawings rather than without its figures.
+ */
+export function setupCardDrawings(plan: PlanSnapshot, kitIndex: number, units: LengthUnits): CardDrawing[] {
+  let drawings: Drawing[];
   try {
-    return [planDrawing(plan.study, plan.result, kitIndex, units, options), sectionDrawing(plan.study, plan.result, kitIndex, units)];
+    // The card states each drawing's scale itself, so the plan's own corner note is left out.
+    drawings = [planDrawing(plan.study, plan.result, kitIndex, units, { scaleNote: null }), sectionDrawing(plan.study, plan.result, kitIndex, units)];
   } catch {
     return [];
   }
+  const barMm = units === "in" ? 50.8 : 50;
+  const barLabel = units === "in" ? "2 in" : "50 mm";
+  return drawings.map((d) => {
+    const scale = drawingScale(d);
+    const text = scaleText(scale);
+    const caption =
+      scale === 1
+        ? `Scale 1:1 — full size when printed at 100 % (turn off “fit to page”). Check the print: the bar is ${barLabel} long.`
+        : `Scale ${text} — too large for the page at full size. The bar stands for ${barLabel}; measure the part, not the print.`;
+    return { ...d, scale, scaleText: text, barMm, barLabel, caption };
+  });
 }

@@ -5,15 +5,14 @@ import { SHOP_STAFF } from "@/db/roles";
 import { buildSetupCard, setupCardDrawings } from "@/db/setup-card";
 import { setupCardPdf } from "@/db/setup-card-pdf";
 
-/** The job's bench setup card as a one-page PDF, made on the server with the app's fonts embedded. */
+/** The job's bench setup card as a PDF (the figures, then each drawing at its stated scale), made on the server with the app's fonts embedded. */
 export const GET = handle(async (_req: Request, ctx: { params: Promise<{ id: string }> }) => {
   const caller = await requireCaller(SHOP_STAFF);
   const { id } = await ctx.params;
   const detail = await jobDetail(caller, id);
   if (!detail.plan) throw new ApiError(409, "no_plan", "The job has no plan yet: attach a study and choose its kit first.");
   const card = buildSetupCard(detail.job, detail.plan, caller.shopName, caller.units);
-  // The PDF shows the drawings scaled down and says so itself, so the plan drops its 1:1 note.
-  const drawings = setupCardDrawings(detail.plan, card.kitIndex, caller.units, { scaleNote: null });
+  const drawings = setupCardDrawings(detail.plan, card.kitIndex, caller.units);
   const pdf = await setupCardPdf(card, drawings);
   return new Response(new Uint8Array(pdf), {
     headers: {
