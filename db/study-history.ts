@@ -24,6 +24,7 @@ const LIMIT_LABELS: Record<keyof StudyLimits, [label: string, unit: string]> = {
   studToleranceMm: ["stud tolerance", "mm"],
   hardwareMarginMm: ["hardware margin", "mm"],
   maxRockMm: ["largest holder rock", "mm"],
+  minCrankClearanceMm: ["minimum clearance to the crank webs", "mm"],
   cuttingSpeedMinMPerMin: ["lowest cutting speed", "m/min"],
   cuttingSpeedMaxMPerMin: ["highest cutting speed", "m/min"],
   displacementClassesCc: ["displacement classes", "cc"],

@@ -14,6 +14,9 @@ export {
   PolygonOutlineSchema,
   StudSchema,
   PocketSchema,
+  CrankChamberSchema,
+  PortWindowSchema,
+  BaseGasketSchema,
   MouthSchema,
   BitCalibrationSchema,
   HolderReadingSchema,
@@ -35,6 +38,9 @@ export type {
   PolygonOutline,
   Stud,
   Pocket,
+  CrankChamber,
+  PortWindow,
+  BaseGasket,
 } from "./schema";
 
 export {
@@ -49,8 +55,10 @@ export {
   RigResultSchema,
   CutResultSchema,
   LeastCutSchema,
+  CrankResultSchema,
+  PortResultSchema,
 } from "./result-schema";
-export type { StudyResult, KitResult, Verdict, ReasonCode, WarningCode, Warning, RigResult, CutResult, WallResult, LeastCut } from "./result-schema";
+export type { StudyResult, KitResult, Verdict, ReasonCode, WarningCode, Warning, RigResult, CutResult, WallResult, LeastCut, CrankResult, PortResult } from "./result-schema";
 
 export { evaluateStudy, resolveLimits, proposeCutDiameterMm } from "./evaluate";
 export type { EvaluateOptions, ResolvedLimits } from "./evaluate";
@@ -76,6 +84,8 @@ export type { GeometryErrorCode, FieldIssue } from "./errors";
 export { lensArea } from "./lens";
 export { cutterSettingMm, cutDiameterFromSettingMm, bitReachMm, bitLengthWindowMm } from "./rig";
 export { chooseDepthStop } from "./depth-stop";
+export { crankClearance } from "./crank";
+export { portSteps, passageUnderPort, matchedPassageReachMm, outlineCentroid, lineSpans } from "./ports";
 export { fitPlane, tryFitPlane, tiltDeg, tiltDirectionDeg } from "./alignment";
 export { spindleRpm, cuttingSpeedMPerMin } from "./speed";
 export { displacementCc, roundCc } from "./displacement";

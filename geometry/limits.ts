@@ -34,6 +34,12 @@ export const DEFAULT_DISPLACEMENT_CLASSES_CC: readonly number[] = [50];
 /** Holder rocking above which the readings are reported as untrustworthy, mm. Common practice, no published source. */
 export const DEFAULT_MAX_ROCK_MM = 0.05;
 
+/**
+ * Least clearance between the skirt's lower edge and the swept crank webs (flywheel), mm. Common practice, no
+ * published source.
+ */
+export const DEFAULT_MIN_CRANK_CLEARANCE_MM = 1;
+
 /** All limit defaults by field name. */
 export const DEFAULT_LIMITS = {
   minRadialClearanceMm: DEFAULT_MIN_RADIAL_CLEARANCE_MM,
@@ -43,6 +49,7 @@ export const DEFAULT_LIMITS = {
   studToleranceMm: DEFAULT_STUD_TOLERANCE_MM,
   hardwareMarginMm: DEFAULT_HARDWARE_MARGIN_MM,
   maxRockMm: DEFAULT_MAX_ROCK_MM,
+  minCrankClearanceMm: DEFAULT_MIN_CRANK_CLEARANCE_MM,
   cuttingSpeedMinMPerMin: DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN,
   cuttingSpeedMaxMPerMin: DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN,
   displacementClassesCc: DEFAULT_DISPLACEMENT_CLASSES_CC,

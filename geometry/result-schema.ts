@@ -23,6 +23,7 @@ export const ReasonCodeSchema = z.enum([
   "cut-breaks-into-pocket",
   "cut-breaks-through-deck",
   "cut-larger-than-case-allows",
+  "crank-clearance-below-minimum",
 ]);
 
 export const WarningCodeSchema = z.enum([
@@ -46,6 +47,9 @@ export const WarningCodeSchema = z.enum([
   "drill-too-slow",
   "holder-rocks",
   "readings-insufficient",
+  "crank-chamber-not-checked",
+  "crank-clearance-below-minimum",
+  "matched-passage-wall-below-minimum",
 ]);
 
 export const WarningSchema = z.object({ code: WarningCodeSchema, message: z.string() });
@@ -134,6 +138,35 @@ export const KitAlignmentSchema = z.object({
   worstAxisOffsetMm: num(),
 });
 
+export const CrankResultSchema = z.object({
+  /** False when the case profile gives no crank chamber, so the skirt's clearance to the webs was not checked. */
+  checked: z.boolean(),
+  /** Least distance from the skirt's lower edge to the swept crank webs; negative when they reach into it. Null when not checked. */
+  clearanceMm: num().nullable(),
+  requiredMm: num(),
+  ok: z.boolean().nullable(),
+  /** The nearest point of the skirt's lower edge in the deck plane (crank axis along x; its mirror images are as near). */
+  atMm: Vec2Out.nullable(),
+  /** Depth of the skirt's lower edge below the deck (its protrusion). */
+  edgeDepthMm: num().nullable(),
+});
+
+export const PortResultSchema = z.object({
+  portLabel: z.string(),
+  /** The case passage under the port window, or null when it sits over none. */
+  pocketLabel: z.string().nullable(),
+  /** The port's area centroid, where the two section lines of the steps cross. */
+  centroidMm: Vec2Out,
+  /** Direction of the radial section line from the bore axis through the centroid, degrees counter-clockwise from +x. */
+  directionDeg: num(),
+  /** Step at each edge (positive where the passage is narrower than the port); null where the section line misses the passage. */
+  steps: z.object({ innerMm: num().nullable(), outerMm: num().nullable(), ccwMm: num().nullable(), cwMm: num().nullable() }),
+  /** Wall between the planned cut and the passage opened to match the port (their union); null without a cut. */
+  matchedWallMm: num().nullable(),
+  requiredMm: num(),
+  ok: z.boolean().nullable(),
+});
+
 export const KitResultSchema = z.object({
   kitId: z.string(),
   name: z.string(),
@@ -180,6 +213,9 @@ export const KitResultSchema = z.object({
   }),
   rig: RigResultSchema.nullable(),
   alignment: KitAlignmentSchema.nullable(),
+  crank: CrankResultSchema,
+  /** One entry per port window of the kit's base gasket (empty when the kit gives none). */
+  ports: z.array(PortResultSchema),
   displacementCc: z.object({
     stock: num(),
     kit: num(),
@@ -212,6 +248,8 @@ export const StudyResultSchema = z.object({
     maxCutDiameterMm: num(),
     stockDisplacementCc: num(),
     rigThread: z.object({ rig: z.string(), case: z.string(), ok: z.boolean() }).nullable(),
+    /** False when the case profile gives no crank chamber (every kit's crank.checked is then false). */
+    crankChecked: z.boolean(),
   }),
   alignment: StudyAlignmentSchema.nullable(),
   limits: z.object({
@@ -223,6 +261,7 @@ export const StudyResultSchema = z.object({
       studToleranceMm: num(),
       hardwareMarginMm: num(),
       maxRockMm: num(),
+      minCrankClearanceMm: num(),
       cuttingSpeedMinMPerMin: num(),
       cuttingSpeedMaxMPerMin: num(),
       displacementClassesCc: z.array(num()),
@@ -244,3 +283,5 @@ export type RigResult = z.infer<typeof RigResultSchema>;
 export type CutResult = z.infer<typeof CutResultSchema>;
 export type WallResult = z.infer<typeof WallResultSchema>;
 export type LeastCut = z.infer<typeof LeastCutSchema>;
+export type CrankResult = z.infer<typeof CrankResultSchema>;
+export type PortResult = z.infer<typeof PortResultSchema>;

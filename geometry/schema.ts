@@ -62,6 +62,36 @@ export const PocketSchema = z.strictObject({
   startDepthMm: nonNegativeMm().default(0),
 });
 
+/**
+ * The crank chamber below the mouth. The crank axis runs along the case frame's x axis, square under the
+ * cylinder axis; the webs (flywheels) are centred on the cylinder axis along it.
+ */
+export const CrankChamberSchema = z.strictObject({
+  /** From the deck down to the crank axis. */
+  deckToAxisMm: lengthMm(),
+  /** Outer radius of the crank webs (flywheels) about the crank axis. */
+  webRadiusMm: lengthMm(),
+  /** Width of the webs across the cylinder axis, measured along the crank axis (outer face to outer face). */
+  webSpanMm: lengthMm(),
+});
+
+/** A port window of a kit's base gasket, in the case's frame at the deck. */
+export const PortWindowSchema = z.strictObject({ label: label(), outline: OutlineSchema });
+
+/** A kit's base gasket at the deck, in the case's frame: its outline (optional) and its transfer-port windows. */
+export const BaseGasketSchema = z
+  .strictObject({
+    outline: OutlineSchema.optional(),
+    ports: z.array(PortWindowSchema).max(16).default([]),
+  })
+  .superRefine((g, ctx) => {
+    const seen = new Set<string>();
+    g.ports.forEach((p, i) => {
+      if (seen.has(p.label)) ctx.addIssue({ code: "custom", path: ["ports", i, "label"], message: `duplicate port label "${p.label}"` });
+      seen.add(p.label);
+    });
+  });
+
 export const CaseProfileSchema = z
   .strictObject({
     name: label(),
@@ -78,6 +108,8 @@ export const CaseProfileSchema = z
     densityGPerCm3: z.number().positive().max(25).optional(),
     /** The measurements its shapes were drawn from (geometry/shapes.ts), kept to edit them again; the computation never reads them. */
     capture: CaptureSchema.optional(),
+    /** The crank chamber; when absent the skirt's clearance to the crank webs is not checked. */
+    crank: CrankChamberSchema.optional(),
   })
   .superRefine((c, ctx) => {
     const seen = new Set<string>();
@@ -101,6 +133,8 @@ export const CylinderKitSchema = z.strictObject({
   /** True when the kit is always run with a base gasket, so the thinnest one may be subtracted from the skirt length. */
   alwaysWithGasket: z.boolean().default(false),
   price: z.number().nonnegative().optional(),
+  /** The kit's base gasket with its port windows, for the port overlay. */
+  baseGasket: BaseGasketSchema.optional(),
   /** The measurements its base-gasket shapes were drawn from (geometry/shapes.ts); the computation never reads them. */
   capture: CaptureSchema.optional(),
 });
@@ -184,6 +218,7 @@ const limitFields = {
   studToleranceMm: z.number().nonnegative().max(100),
   hardwareMarginMm: z.number().nonnegative().max(100),
   maxRockMm: z.number().nonnegative().max(100),
+  minCrankClearanceMm: z.number().nonnegative().max(100),
   cuttingSpeedMinMPerMin: z.number().positive().max(5000),
   cuttingSpeedMaxMPerMin: z.number().positive().max(5000),
   displacementClassesCc: z.array(z.number().positive().max(100_000)).max(10),
@@ -203,6 +238,7 @@ export const LimitsSchema = z
     studToleranceMm: limitFields.studToleranceMm.default(DEFAULT_LIMITS.studToleranceMm),
     hardwareMarginMm: limitFields.hardwareMarginMm.default(DEFAULT_LIMITS.hardwareMarginMm),
     maxRockMm: limitFields.maxRockMm.default(DEFAULT_LIMITS.maxRockMm),
+    minCrankClearanceMm: limitFields.minCrankClearanceMm.default(DEFAULT_LIMITS.minCrankClearanceMm),
     cuttingSpeedMinMPerMin: limitFields.cuttingSpeedMinMPerMin.default(DEFAULT_LIMITS.cuttingSpeedMinMPerMin),
     cuttingSpeedMaxMPerMin: limitFields.cuttingSpeedMaxMPerMin.default(DEFAULT_LIMITS.cuttingSpeedMaxMPerMin),
     displacementClassesCc: limitFields.displacementClassesCc.default([...DEFAULT_LIMITS.displacementClassesCc]),
@@ -222,6 +258,7 @@ export const StudyLimitsSchema = z
     studToleranceMm: limitFields.studToleranceMm.optional(),
     hardwareMarginMm: limitFields.hardwareMarginMm.optional(),
     maxRockMm: limitFields.maxRockMm.optional(),
+    minCrankClearanceMm: limitFields.minCrankClearanceMm.optional(),
     cuttingSpeedMinMPerMin: limitFields.cuttingSpeedMinMPerMin.optional(),
     cuttingSpeedMaxMPerMin: limitFields.cuttingSpeedMaxMPerMin.optional(),
     displacementClassesCc: limitFields.displacementClassesCc.optional(),
@@ -262,6 +299,9 @@ export type CircleOutline = z.infer<typeof CircleOutlineSchema>;
 export type PolygonOutline = z.infer<typeof PolygonOutlineSchema>;
 export type Stud = z.infer<typeof StudSchema>;
 export type Pocket = z.infer<typeof PocketSchema>;
+export type CrankChamber = z.infer<typeof CrankChamberSchema>;
+export type PortWindow = z.infer<typeof PortWindowSchema>;
+export type BaseGasket = z.infer<typeof BaseGasketSchema>;
 export type CaseProfile = z.infer<typeof CaseProfileSchema>;
 export type CylinderKit = z.infer<typeof CylinderKitSchema>;
 export type BoringRig = z.infer<typeof BoringRigSchema>;

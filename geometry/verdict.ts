@@ -8,6 +8,8 @@ export interface VerdictInput {
   readonly entersCase: boolean;
   /** The skirt clears the existing mouth by at least the minimum radial clearance. */
   readonly clearsMouth: boolean;
+  /** The skirt clears the swept crank webs by the shop's minimum; null when the crank chamber was not checked. */
+  readonly crankOk: boolean | null;
   /** The cut (given or proposed), or null when none is planned. */
   readonly cut: {
     readonly effectiveRadialClearanceMm: number;
@@ -40,17 +42,20 @@ export function cutReasons(cut: NonNullable<VerdictInput["cut"]>, minRadialMm: n
 
 /**
  * Verdict: fits as is when the studs match and the skirt clears the mouth; fits after the cut when the
- * studs match and the cut leaves every clearance and wall at or above its minimum; cannot fit otherwise.
+ * studs match and the cut leaves every clearance and wall at or above its minimum; cannot fit otherwise —
+ * and never a fit when the skirt comes closer to the crank webs than the minimum (no cut helps that).
  */
 export function decideVerdict(input: VerdictInput, toleranceMm: number): { verdict: Verdict; reasons: ReasonCode[] } {
   const reasons: ReasonCode[] = [];
   if (!input.studsOk) reasons.push("stud-pattern-mismatch");
+  const crankBlocks = input.crankOk === false;
+  if (crankBlocks) reasons.push("crank-clearance-below-minimum");
   if (input.clearsMouth) {
     reasons.push(input.entersCase ? "clears-existing-mouth" : "skirt-does-not-enter");
-    return { verdict: input.studsOk ? "fits-as-is" : "cannot-fit", reasons };
+    return { verdict: input.studsOk && !crankBlocks ? "fits-as-is" : "cannot-fit", reasons };
   }
   reasons.push("needs-cut");
   const problems = input.cut ? cutReasons(input.cut, input.minRadialClearanceMm, input.minDepthClearanceMm, toleranceMm) : [];
   reasons.push(...problems);
-  return { verdict: input.studsOk && input.cut !== null && problems.length === 0 ? "fits-after-cut" : "cannot-fit", reasons };
+  return { verdict: input.studsOk && !crankBlocks && input.cut !== null && problems.length === 0 ? "fits-after-cut" : "cannot-fit", reasons };
 }

@@ -51,5 +51,15 @@ export const messages = {
     `The drill's top speed of ${Math.round(topRpm)} min⁻¹ is below the ${Math.round(minRpm)} min⁻¹ the cutting speed wants: the cut will be slow and rough.`,
   holderRocks: (rockMm: number, maxMm: number) =>
     `The holder readings disagree by up to ${mm(rockMm)} from a flat plane (more than ${mm(maxMm)}): the holder rocks or a reading is wrong. Re-seat the holder and measure again.`,
+  crankNotChecked: () =>
+    "The case profile gives no crank chamber (deck to crank axis, web radius, web span): the skirt's clearance to the crank webs was not checked. Measure them, or check by hand before assembly.",
+  crankBelowMin: (clearMm: number, minMm: number) =>
+    clearMm < 0
+      ? `The skirt's lower edge reaches ${mm(-clearMm)} into the path of the crank webs: the crank would strike it. No counterbore fixes that; a shorter skirt or a different crank does.`
+      : `The skirt's lower edge clears the crank webs by only ${mm(clearMm)} (minimum ${mm(minMm)}).`,
+  matchedWallBelowMin: (port: string, passage: string | null, wallMm: number, minMm: number) =>
+    wallMm < 0
+      ? `If ${passage ?? "a passage"} were opened to match port ${port}, the cut would break ${mm(-wallMm)} into it: match the port less, or cut smaller.`
+      : `If ${passage ?? "a passage"} were opened to match port ${port}, only ${mm(wallMm)} of wall would remain to the cut (minimum ${mm(minMm)}).`,
   readingsInsufficient: () => "At least three holder readings at studs not on one line are needed to check the holder's tilt; the tilt is not accounted for.",
 };

@@ -12,6 +12,7 @@ const DEFAULT_LENGTH_LIMITS = {
   studToleranceMm: DEFAULT_LIMITS.studToleranceMm,
   hardwareMarginMm: DEFAULT_LIMITS.hardwareMarginMm,
   maxRockMm: DEFAULT_LIMITS.maxRockMm,
+  minCrankClearanceMm: DEFAULT_LIMITS.minCrankClearanceMm,
   displacementClassesCc: [...DEFAULT_LIMITS.displacementClassesCc],
 };
 const evalInput = (s: StudyInput, toleranceMm?: number) => evaluateStudy(StudySchema.parse(s), toleranceMm === undefined ? {} : { toleranceMm });

@@ -35,6 +35,7 @@ export const REASON_TEXT: Record<ReasonCode, string> = {
   "cut-breaks-into-pocket": "The cut breaks into a passage.",
   "cut-breaks-through-deck": "The cut breaks through the outside of the case.",
   "cut-larger-than-case-allows": "The cut is larger than this case can take.",
+  "crank-clearance-below-minimum": "The skirt's lower edge comes too close to the crank webs.",
 };
 
 export const TEXT_COLOR: Record<FitState, string> = { interfere: "text-interfere", tight: "text-tight", clear: "text-clear" };

@@ -14,6 +14,7 @@ const LABEL: Record<LimitKey, string> = {
   studToleranceMm: "Stud position tolerance",
   hardwareMarginMm: "Screw-head margin inside the cut",
   maxRockMm: "Holder rocking, at most",
+  minCrankClearanceMm: "Skirt to crank webs, at least",
   cuttingSpeedMinMPerMin: "Cutting speed, from",
   cuttingSpeedMaxMPerMin: "Cutting speed, to",
   displacementClassesCc: "Legal-class limits",

@@ -15,6 +15,7 @@ export const REASON_WORDS: Record<ReasonCode, string> = {
   "cut-breaks-into-pocket": "the cut would break into a pocket or transfer passage",
   "cut-breaks-through-deck": "the cut would break through the outside of the case",
   "cut-larger-than-case-allows": "the cut needed is larger than the case can take",
+  "crank-clearance-below-minimum": "the skirt's lower edge comes too close to the crank webs",
 };
 
 const NOT_A_BLOCK: readonly ReasonCode[] = ["clears-existing-mouth", "needs-cut"];
