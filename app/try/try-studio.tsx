@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from "react";
 import { evaluateStudy, safeParseStudy, type Study, type StudyResult } from "@/geometry";
-import { Studio } from "../(shop)/studies/[id]/_components/studio/studio";
+import { Studio } from "@/app/_ui/studio/studio";
 
 type Loaded = { study: Study; result: StudyResult } | { error: string } | null;
 

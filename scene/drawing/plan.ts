@@ -1,6 +1,6 @@
 import type { LengthUnits, Study, StudyResult, Vec2 } from "@/geometry";
 import { fitState, interferenceRegions } from "../fit";
-import { diameterText, lengthText } from "../format";
+import { diameterLabel, lengthLabel } from "@/model/units";
 import { bounds, outlineRing } from "../outline";
 import { INK, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
 
@@ -27,7 +27,7 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
   const b = bounds([deck]);
   const fs = Math.max(2.6, (b.maxX - b.minX) / 34);
   const w0 = result.kits[kitIndex].thinnestWall;
-  const longest = [`thinnest wall ${lengthText(w0?.minWallMm ?? 0, units)}`, w0?.label ?? "", `skirt ${diameterText(k.skirt.diameterMm, units)}`, "mouth (outline as profiled)"];
+  const longest = [`thinnest wall ${lengthLabel(w0?.minWallMm ?? 0, units)}`, w0?.label ?? "", `skirt ${diameterLabel(k.skirt.diameterMm, units)}`, "mouth (outline as profiled)"];
   const margin = Math.max(...longest.map((t) => textWidth(t, fs))) + fs * 4;
   const minX = b.minX - margin, maxX = b.maxX + margin;
   const minY = -b.maxY - fs * 7, maxY = -b.minY + fs * (8 + cs.studs.length * 1.3);
@@ -63,9 +63,9 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
     const y = (up ? -b.maxY + fs * 1.6 * row : -b.minY - fs * 1.6 * row);
     body.push(leader(from, [outerX(right), y], label, fs, col));
   };
-  if (k.cut) lead(k.cut.diameterMm / 2, 68, `cut ${diameterText(k.cut.diameterMm, units)}`, INK.accent, 1);
-  lead(sr, 112, `skirt ${diameterText(k.skirt.diameterMm, units)}`, color, 1);
-  if (cs.mouth.outline.kind === "circle") lead(cs.mouth.outline.diameterMm / 2, 250, `mouth ${diameterText(cs.mouth.outline.diameterMm, units)}`, INK.ink, 1);
+  if (k.cut) lead(k.cut.diameterMm / 2, 68, `cut ${diameterLabel(k.cut.diameterMm, units)}`, INK.accent, 1);
+  lead(sr, 112, `skirt ${diameterLabel(k.skirt.diameterMm, units)}`, color, 1);
+  if (cs.mouth.outline.kind === "circle") lead(cs.mouth.outline.diameterMm / 2, 250, `mouth ${diameterLabel(cs.mouth.outline.diameterMm, units)}`, INK.ink, 1);
   else lead(0, 250, "mouth (outline as profiled)", INK.ink, 1);
 
   const w = k.thinnestWall;
@@ -75,7 +75,7 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
     body.push(el("line", { x1: p[0], y1: p[1], x2: q[0], y2: q[1], stroke: wc, "stroke-width": 0.6 }));
     const right = q[0] >= sc[0];
     const to: [number, number] = [outerX(right), -b.minY + fs * 2.2];
-    body.push(leader(q, to, `thinnest wall ${lengthText(w.minWallMm, units)}`, fs, wc));
+    body.push(leader(q, to, `thinnest wall ${lengthLabel(w.minWallMm, units)}`, fs, wc));
     body.push(text(to[0] + (right ? 0.5 : -0.5), to[1] + fs * 1.1, w.label, fs * 0.9, { "text-anchor": right ? "start" : "end", fill: wc }));
   }
 
@@ -83,15 +83,15 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
   const sx0 = Math.min(...xs), sx1 = Math.max(...xs), sy0 = Math.min(...ys), sy1 = Math.max(...ys);
   const topStud = cs.studs.reduce((m, s) => (s.positionMm[1] > m.positionMm[1] ? s : m));
   const stY = -topStud.positionMm[1];
-  if (sx1 - sx0 > 1) body.push(hdim(sx0, sx1, -b.maxY - fs * 2, stY, stY, `studs ${lengthText(sx1 - sx0, units)}`, fs));
-  if (sy1 - sy0 > 1) body.push(vdim(b.maxX + fs * 2, -sy1, -sy0, sx1, lengthText(sy1 - sy0, units), fs));
+  if (sx1 - sx0 > 1) body.push(hdim(sx0, sx1, -b.maxY - fs * 2, stY, stY, `studs ${lengthLabel(sx1 - sx0, units)}`, fs));
+  if (sy1 - sy0 > 1) body.push(vdim(b.maxX + fs * 2, -sy1, -sy0, sx1, lengthLabel(sy1 - sy0, units), fs));
   let ty = -b.minY + fs * 6.2;
   body.push(text(minX + fs, ty, `Plan at the deck — ${k.name}`, fs * 1.1, { "font-weight": 600 }));
   ty += fs * 1.5;
   body.push(text(minX + fs, ty, `Stud centres from the cylinder axis (x right, y up):`, fs * 0.9, { fill: INK.ink2 }));
   for (const s of cs.studs) {
     ty += fs * 1.3;
-    body.push(text(minX + fs * 2, ty, `${s.label}: x ${lengthText(s.positionMm[0], units)}, y ${lengthText(s.positionMm[1], units)}`, fs * 0.9, { class: "num" }));
+    body.push(text(minX + fs * 2, ty, `${s.label}: x ${lengthLabel(s.positionMm[0], units)}, y ${lengthLabel(s.positionMm[1], units)}`, fs * 0.9, { class: "num" }));
   }
   const scaleNote = options.scaleNote === undefined ? "1:1 when printed at 100 %" : options.scaleNote;
   if (scaleNote) body.push(text(maxX - fs, -b.maxY - fs * 5.5, scaleNote, fs * 0.85, { "text-anchor": "end", fill: INK.ink2 }));

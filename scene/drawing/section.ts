@@ -1,6 +1,6 @@
 import type { CylinderKit, LengthUnits, Study, StudyResult } from "@/geometry";
 import { FLANGE_DRAWN_MM, fitState, flangeRadiusMm, interferenceRegions } from "../fit";
-import { diameterText, lengthText, signedLengthText } from "../format";
+import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { circleRing, intersectIntervals, lineIntervals, outlineRing, subtractIntervals } from "../outline";
 import { STATE_COLOR } from "./plan";
 import { INK, type Drawing, el, hdim, vdim, textWidth, sheet, text } from "./svg";
@@ -65,26 +65,26 @@ export function sectionDrawing(study: Study, result: StudyResult, kitIndex: numb
   if (g > 0) for (const [a, b] of [[cx - Rf, cx - r], [cx + r, cx + Rf]]) body.push(rect(a, b, -g, 0, { fill: INK.tight, "fill-opacity": 0.5 }));
   body.push(el("line", { x1: cx, y1: top - 4, x2: cx, y2: M + 4, stroke: INK.ink3, "stroke-width": 0.18, "stroke-dasharray": "4 1 1 1" }));
 
-  const side = options.compact ? fs * 2 : Math.max(textWidth(`cut depth ${lengthText(M, units)}`, fs), textWidth(`skirt ${lengthText(M, units)} below deck`, fs)) + fs * 4;
+  const side = options.compact ? fs * 2 : Math.max(textWidth(`cut depth ${lengthLabel(M, units)}`, fs), textWidth(`skirt ${lengthLabel(M, units)} below deck`, fs)) + fs * 4;
   const minX = x0 - side, maxX = x1 + side;
   let bottomY = M + fs * 2;
   if (!options.compact) {
     if (k.cut) {
       const R = k.cut.diameterMm / 2;
-      body.push(vdim(x1 + fs * 2, 0, k.cut.depthMm, cx + R, `cut depth ${lengthText(k.cut.depthMm, units)}`, fs, INK.accent));
-      body.push(hdim(cx - R, cx + R, M + fs * 2.5, k.cut.depthMm, k.cut.depthMm, `cut ${diameterText(k.cut.diameterMm, units)}`, fs, INK.accent));
+      body.push(vdim(x1 + fs * 2, 0, k.cut.depthMm, cx + R, `cut depth ${lengthLabel(k.cut.depthMm, units)}`, fs, INK.accent));
+      body.push(hdim(cx - R, cx + R, M + fs * 2.5, k.cut.depthMm, k.cut.depthMm, `cut ${diameterLabel(k.cut.diameterMm, units)}`, fs, INK.accent));
     }
     if (cs.mouth.outline.kind === "circle") {
       const R = cs.mouth.outline.diameterMm / 2;
-      body.push(hdim(cx - R, cx + R, M + fs * 5, M, M, `mouth ${diameterText(cs.mouth.outline.diameterMm, units)}`, fs));
+      body.push(hdim(cx - R, cx + R, M + fs * 5, M, M, `mouth ${diameterLabel(cs.mouth.outline.diameterMm, units)}`, fs));
     }
-    if (P > 0) body.push(vdim(x0 - fs * 2, 0, P, cx - r, `skirt ${lengthText(P, units)} below deck`, fs, color));
-    body.push(hdim(cx - r, cx + r, top - fs * 2, top, top, `skirt ${diameterText(k.skirt.diameterMm, units)}`, fs, color));
+    if (P > 0) body.push(vdim(x0 - fs * 2, 0, P, cx - r, `skirt ${lengthLabel(P, units)} below deck`, fs, color));
+    body.push(hdim(cx - r, cx + r, top - fs * 2, top, top, `skirt ${diameterLabel(k.skirt.diameterMm, units)}`, fs, color));
     bottomY = M + fs * 8;
     const lines = [
       `Section through the axis along x — ${k.name}`,
-      k.depthClearanceMm === null ? "depth: the cut leaves no step" : `depth clearance ${signedLengthText(k.depthClearanceMm, units)} (skirt bottom to the cut's shallowest point)`,
-      g > 0 ? `base gasket ${lengthText(g, units)} counted; flange drawn schematically` : "no base gasket counted; flange drawn schematically",
+      k.depthClearanceMm === null ? "depth: the cut leaves no step" : `depth clearance ${signedLengthLabel(k.depthClearanceMm, units)} (skirt bottom to the cut's shallowest point)`,
+      g > 0 ? `base gasket ${lengthLabel(g, units)} counted; flange drawn schematically` : "no base gasket counted; flange drawn schematically",
     ];
     lines.forEach((l, i) => body.push(text(minX + fs, bottomY + fs * 1.5 * i, l, i ? fs * 0.9 : fs * 1.1, { "font-weight": i ? 400 : 600, fill: i ? INK.ink2 : INK.ink })));
     bottomY += fs * 4.5;

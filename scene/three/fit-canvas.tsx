@@ -37,7 +37,7 @@ export default function FitCanvas({ store, view, onReady }: FitCanvasProps) {
       <FitScene store={store} view={view} />
       <OrbitControls makeDefault enableDamping={false} />
       <CameraRig view={view} />
-      <FrameRenderer store={store} onReady={onReady} />
+      <FrameRenderer store={store} view={view} onReady={onReady} />
     </Canvas>
   );
 }

@@ -1,6 +1,6 @@
 import { BufferGeometry, DoubleSide, Float32BufferAttribute, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
 import { cutGeometry, FLANGE_DRAWN_MM, fitState, flangeRadiusMm, governingClearanceMm, interferenceGeometry } from "../fit-model";
-import { diameterText, lengthText, signedLengthText } from "../format";
+import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { toWorld } from "../solids";
 import type { FitSnapshot } from "../store";
 import { Label } from "./label";
@@ -88,12 +88,12 @@ export class FitObjects {
     const state = fitState(k, result);
     const Rf = flangeRadiusMm(study.kits[snap.kitIndex], k, study.case.studHoleDiameterMm);
     const c = governingClearanceMm(k);
-    L.skirt.set(`skirt ${diameterText(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthText(c, v.units)}`, STATE_3D[state]);
+    L.skirt.set(`skirt ${diameterLabel(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthLabel(c, v.units)}`, STATE_3D[state]);
     L.skirt.sprite.position.set(...toWorld(-Rf, Rf * 0.6, -k.skirt.gasketMm - FLANGE_DRAWN_MM - size * 1.2));
     L.skirt.resize();
     L.cut.sprite.visible = k.cut !== null;
     if (k.cut) {
-      L.cut.set(`cut ${diameterText(k.cut.diameterMm, v.units)} × ${lengthText(k.cut.depthMm, v.units)} deep`, "#0f5e5c");
+      L.cut.set(`cut ${diameterLabel(k.cut.diameterMm, v.units)} × ${lengthLabel(k.cut.depthMm, v.units)} deep`, "#0f5e5c");
       L.cut.sprite.center.set(1, 0.5);
       L.cut.sprite.position.set(...toWorld(k.cut.diameterMm / 2 + 4, -k.cut.diameterMm * 0.45, k.cut.depthMm + size));
       L.cut.resize();
@@ -102,7 +102,7 @@ export class FitObjects {
     L.wall.sprite.visible = this.wallLine.visible = w !== null && k.cut !== null;
     if (w && k.cut) {
       const color = w.ok ? "#2b2f33" : STATE_3D.interfere;
-      L.wall.set(`thinnest wall ${lengthText(w.minWallMm, v.units)} · ${w.label}`, color);
+      L.wall.set(`thinnest wall ${lengthLabel(w.minWallMm, v.units)} · ${w.label}`, color);
       L.wall.sprite.position.set(...toWorld(w.atMm[0], w.atMm[1], -size * 0.9));
       L.wall.resize();
       const a = this.wallLine.geometry.getAttribute("position") as Float32BufferAttribute;
@@ -116,7 +116,7 @@ export class FitObjects {
     L.hit.sprite.visible = hitGeom !== null;
     if (hitGeom) {
       const at = worst?.atMm ?? [k.skirt.diameterMm / 2, 0];
-      L.hit.set(worst ? `interference ${lengthText(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
+      L.hit.set(worst ? `interference ${lengthLabel(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
       L.hit.sprite.position.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
       L.hit.resize();
     }

@@ -3,7 +3,7 @@
 import { useFrame, useThree } from "@react-three/fiber";
 import { useEffect, useRef } from "react";
 import type { FitStore } from "../store";
-import { TARGET, cameraPosition, type ViewState } from "./view";
+import { TARGET, cameraPosition, drawnKey, type ViewState } from "./view";
 
 /** What the studio can ask of the canvas. */
 export interface FitCanvasApi {
@@ -18,14 +18,21 @@ declare global {
   }
 }
 
-/** Renders on demand, after the scene updated from the store, and records the time from the input to this frame. */
-export function FrameRenderer({ store, onReady }: { store: FitStore; onReady?: (api: FitCanvasApi) => void }) {
+/**
+ * Renders on demand, after the scene updated from the store, and records the time from the input to this frame.
+ * The canvas element carries the key of what its last frame shows (`data-drawn`), so anyone can wait for a change to be drawn.
+ */
+export function FrameRenderer({ store, view, onReady }: { store: FitStore; view: ViewState; onReady?: (api: FitCanvasApi) => void }) {
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
   const invalidate = useThree((s) => s.invalidate);
   const advance = useThree((s) => s.advance);
   const measured = useRef(0);
+  const viewRef = useRef(view);
+  useEffect(() => {
+    viewRef.current = view;
+  }, [view]);
 
   // A cut input is drawn at once, inside the input's own task, so the canvas is ready for the next
   // composited frame; anything else waits for the next animation frame.
@@ -51,7 +58,9 @@ export function FrameRenderer({ store, onReady }: { store: FitStore; onReady?: (
     const t0 = performance.now();
     gl.render(scene, camera);
     performance.measure("studio:render", { start: t0, duration: performance.now() - t0 });
-    const at = store.get().inputAt;
+    const snap = store.get();
+    gl.domElement.setAttribute("data-drawn", drawnKey(viewRef.current, snap.kitIndex, snap.study.cut));
+    const at = snap.inputAt;
     if (at > 0 && at !== measured.current) {
       measured.current = at;
       const ms = performance.now() - at;

@@ -26,9 +26,22 @@ function coreThresholdMm(from: number): number {
   throw new Error("no clearing cut on the grid");
 }
 
-/** A 64 × 48 sample of the canvas (RGB), taken through a 2D canvas (the WebGL buffer is preserved). */
+/** Waits until the canvas's last frame shows what the studio asks for (the view, the kit and the cut). */
+async function drawn(timeout = 10_000) {
+  await page.waitForFunction(
+    () => {
+      const view = document.querySelector<HTMLElement>("[data-testid=view]");
+      const canvas = view?.querySelector("canvas");
+      return Boolean(view && canvas && canvas.dataset.drawn === view.dataset.wanted);
+    },
+    undefined,
+    { timeout },
+  );
+}
+
+/** A 64 × 48 sample of the canvas (RGB) once it shows the current state, taken through a 2D canvas (the WebGL buffer is preserved). */
 async function sample(): Promise<number[]> {
-  await page.waitForTimeout(250);
+  await drawn();
   return page.evaluate(() => {
     const src = document.querySelector<HTMLCanvasElement>("[data-testid=view] canvas");
     if (!src) throw new Error("no canvas");
@@ -58,7 +71,7 @@ beforeAll(async () => {
   page = await context.newPage();
   await page.goto(`${inject("baseURL")}/try`);
   await page.waitForSelector("[data-testid=view] canvas", { timeout: 30_000 });
-  await page.waitForTimeout(1500);
+  await drawn(30_000);
 });
 
 afterAll(async () => {
@@ -84,18 +97,27 @@ describe("the fit studio on the example study", () => {
     const verdict = page.getByTestId("verdict");
     await expect.poll(() => verdict.getAttribute("data-state")).toBe("interfere");
     await shot("interference");
+    // A few steps below the threshold (every grid value from the start up to it is not clear), then step up to it.
+    const below = Math.round((threshold - 3 * STEP) * 100) / 100;
+    await field.fill(String(below));
+    await field.press("Enter");
     const slider = page.getByTestId("cut-diameter");
+    await expect.poll(() => slider.inputValue()).toBe(String(below));
+    // The verdict says which cut it is for, so each state is read for the cut just set.
+    await expect.poll(() => verdict.getAttribute("data-cut")).toBe(below.toFixed(2));
+    expect(await verdict.getAttribute("data-state")).not.toBe("clear");
     await slider.focus();
-    const steps = Math.round((threshold - start) / STEP);
-    for (let i = 0; i < steps - 1; i++) await slider.press("ArrowRight");
+    for (let i = 0; i < 2; i++) await slider.press("ArrowRight");
     await expect.poll(() => slider.inputValue()).toBe(String(Math.round((threshold - STEP) * 100) / 100));
-    await expect.poll(() => verdict.getAttribute("data-state")).not.toBe("clear");
+    await expect.poll(() => verdict.getAttribute("data-cut")).toBe((threshold - STEP).toFixed(2));
+    expect(await verdict.getAttribute("data-state")).not.toBe("clear");
     await slider.press("ArrowRight");
     expect(Number(await slider.inputValue())).toBeCloseTo(threshold, 6);
-    await expect.poll(() => verdict.getAttribute("data-state")).toBe("clear");
+    await expect.poll(() => verdict.getAttribute("data-cut")).toBe(threshold.toFixed(2));
+    expect(await verdict.getAttribute("data-state")).toBe("clear");
     expect(await verdict.getAttribute("data-verdict")).toBe("fits-after-cut");
     await shot("clear-at-threshold");
-  });
+  }, 120_000);
 
   it("follows a mouse drag of the cut diameter from interference to clear", async () => {
     const field = page.getByTestId("cut-diameter-field");
@@ -110,18 +132,18 @@ describe("the fit studio on the example study", () => {
     const xOf = (mm: number) => box.x + 8 + ((mm - min) / (max - min)) * (box.width - 16);
     await page.mouse.move(xOf(52), box.y + box.height / 2);
     await page.mouse.down();
-    for (let i = 1; i <= 10; i++) await page.mouse.move(xOf(52 + (i * 3.6) / 10), box.y + box.height / 2);
+    for (let i = 1; i <= 5; i++) await page.mouse.move(xOf(52 + (i * 3.6) / 5), box.y + box.height / 2);
     await page.mouse.up();
     const reached = Number(await page.getByTestId("cut-diameter").inputValue());
     expect(reached).toBeGreaterThan(55.2);
     await expect.poll(() => verdict.getAttribute("data-state")).toBe(reached >= coreThresholdMm(52) ? "clear" : "tight");
-  });
+  }, 120_000);
 
   it("turns the section plane off and rotates it", async () => {
     await page.getByTestId("use-least-cut").click();
     const on = await sample();
     await page.getByTestId("section-toggle").uncheck();
-    expect(await page.getByTestId("view").getAttribute("data-section")).toBe("off");
+    await expect.poll(() => page.getByTestId("view").getAttribute("data-section")).toBe("off");
     const off = await sample();
     expect(difference(on, off)).toBeGreaterThan(2);
     await shot("section-off");
@@ -129,7 +151,7 @@ describe("the fit studio on the example study", () => {
     const angle = page.getByTestId("section-angle");
     await angle.focus();
     for (let i = 0; i < 9; i++) await angle.press("ArrowRight");
-    expect(await page.getByTestId("view").getAttribute("data-section")).toBe("45");
+    await expect.poll(() => page.getByTestId("view").getAttribute("data-section")).toBe("45");
     const turned = await sample();
     expect(difference(on, turned)).toBeGreaterThan(2);
     await shot("section-45");
@@ -139,7 +161,7 @@ describe("the fit studio on the example study", () => {
     const views: Record<string, number[]> = {};
     for (const p of ["plan", "section", "three-quarter"]) {
       await page.getByTestId(`camera-${p}`).click();
-      expect(await page.getByTestId("view").getAttribute("data-camera")).toBe(p);
+      await expect.poll(() => page.getByTestId("view").getAttribute("data-camera")).toBe(p);
       views[p] = await sample();
       await shot(`camera-${p}`);
     }
@@ -154,6 +176,8 @@ describe("the fit studio on the example study", () => {
     const bytes = readFileSync((await png.path()) as string);
     expect(bytes.subarray(0, 8).toString("hex")).toBe("89504e470d0a1a0a");
     expect(bytes.length).toBeGreaterThan(10_000);
+    // The drawings follow the cut a moment after it settles.
+    await expect.poll(() => page.getByTestId("plan-drawing").innerHTML()).toContain("cut Ø 55.10 mm");
     const [svg] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-plan").click()]);
     const text = readFileSync((await svg.path()) as string, "utf8");
     expect(text).toMatch(/^<svg [^>]*width="[\d.]+mm"/);

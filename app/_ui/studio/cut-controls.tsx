@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useId, useRef, useState } from "react";
-import { lengthText, lengthValue } from "@/scene/format";
+import { lengthFieldText, lengthLabel, parseLengthText } from "@/model/units";
 
 export interface CutSliderProps {
   readonly label: string;
@@ -25,7 +25,7 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
   // While the field has focus it keeps what is typed; otherwise it shows the current value.
   const [typed, setTyped] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const text = typed ?? lengthValue(valueMm, units);
+  const text = typed ?? lengthFieldText(valueMm, units);
 
   const commitRef = useRef(onCommit);
   useEffect(() => {
@@ -42,10 +42,11 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
 
   const submit = () => {
     if (typed === null) return;
-    const v = Number(text.replace(",", "."));
-    if (!Number.isFinite(v) || text.trim() === "") return setError("Enter a number.");
-    const mm = units === "mm" ? v : v * 25.4;
-    if (mm < minMm || mm > maxMm) return setError(`Enter a value from ${lengthText(minMm, units)} to ${lengthText(maxMm, units)}.`);
+    const r = parseLengthText(text, units);
+    if (!r.ok) return setError(`${r.message[0].toUpperCase()}${r.message.slice(1)}.`);
+    if (r.value === undefined) return setError("Enter a number.");
+    const mm = r.value;
+    if (mm < minMm || mm > maxMm) return setError(`Enter a value from ${lengthLabel(minMm, units)} to ${lengthLabel(maxMm, units)}.`);
     setError(null);
     setTyped(null);
     onCommit(mm);
@@ -58,7 +59,7 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
           {label}
         </label>
         <span className="num text-sm text-ink-2" aria-hidden>
-          {lengthText(valueMm, units)}
+          {lengthLabel(valueMm, units)}
         </span>
       </div>
       <div className="flex items-center gap-3">
@@ -72,7 +73,7 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
           max={maxMm}
           step={stepMm}
           value={valueMm}
-          aria-valuetext={lengthText(valueMm, units)}
+          aria-valuetext={lengthLabel(valueMm, units)}
           onInput={(e) => onLive(Number(e.currentTarget.value), e.timeStamp || performance.now())}
           onChange={() => undefined}
         />

@@ -1,12 +1,12 @@
 import type { StudyResult } from "@/geometry";
-import { lengthText } from "@/scene/format";
+import { lengthLabel } from "@/model/units";
 import { STATE_MEANING, STATE_TEXT } from "./words";
 
 const SWATCH = { interfere: "bg-interfere", tight: "bg-tight", clear: "bg-clear" } as const;
 
 /** What each colour of the 3D view and the drawings means, with the shop's numbers. */
 export function Legend({ result, units, large }: { result: StudyResult; units: "mm" | "in"; large: boolean }) {
-  const min = lengthText(result.limits.values.minRadialClearanceMm, units);
+  const min = lengthLabel(result.limits.values.minRadialClearanceMm, units);
   const limits = { interfere: "below 0", tight: `0 to ${min}`, clear: `${min} or more` } as const;
   return (
     <div className={`card p-3 ${large ? "text-base" : "text-xs"}`} aria-label="Colour key">

@@ -4,7 +4,7 @@ import { memo, useMemo } from "react";
 import type { Study, StudyResult } from "@/geometry";
 import { sectionDrawing } from "@/scene/drawing/section";
 import { fitState, governingClearanceMm } from "@/scene/fit";
-import { diameterText, lengthText, signedLengthText } from "@/scene/format";
+import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { BORDER, REASON_TEXT, SOFT_BG, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
 const VERDICT_COLOR = { "fits-as-is": "text-clear", "fits-after-cut": "text-clear", "cannot-fit": "text-interfere" } as const;
@@ -36,13 +36,13 @@ export const KitSwitcher = memo(function KitSwitcher({ study, result, kitIndex, 
                 <span className="block text-xs text-ink-2">
                   <span className={`font-medium ${VERDICT_COLOR[k.verdict]}`}>{VERDICT_TEXT[k.verdict]}</span>
                   {k.verdict === "cannot-fit" && k.reasons.length > 1 ? ` — ${REASON_TEXT[k.reasons[k.reasons.length - 1]]}` : ""}
-                  {k.cut ? ` · cut ${diameterText(k.cut.diameterMm, units)}` : ""}
+                  {k.cut ? ` · cut ${diameterLabel(k.cut.diameterMm, units)}` : ""}
                   {study.kits[i].price !== undefined ? ` · price ${study.kits[i].price}` : ""}
                 </span>
               </span>
               <span className={`num text-right font-semibold ${TEXT_COLOR[s]}`}>
                 <span className="text-xs font-normal">skirt</span> {STATE_TEXT[s]}
-                <span className="block text-xs">{signedLengthText(governingClearanceMm(k), units)}</span>
+                <span className="block text-xs">{signedLengthLabel(governingClearanceMm(k), units)}</span>
               </span>
             </label>
           );
@@ -69,11 +69,11 @@ export const SmallMultiples = memo(function SmallMultiples({ study, result, kitI
             >
               <span className="w-full [&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: drawings[i].svg }} />
               <span className={`num font-semibold ${TEXT_COLOR[s]}`}>
-                {STATE_TEXT[s]} {signedLengthText(governingClearanceMm(k), units)}
+                {STATE_TEXT[s]} {signedLengthLabel(governingClearanceMm(k), units)}
               </span>
               <span className="text-ink-2">
                 {VERDICT_TEXT[k.verdict]}
-                {k.thinnestWall ? ` · wall ${lengthText(k.thinnestWall.minWallMm, units)}` : ""}
+                {k.thinnestWall ? ` · wall ${lengthLabel(k.thinnestWall.minWallMm, units)}` : ""}
                 {k.kitId === chosenKitId ? " · the choice" : ""}
               </span>
             </button>

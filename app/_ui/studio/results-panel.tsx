@@ -3,7 +3,7 @@
 import { memo } from "react";
 import type { CutResult, KitResult, StudyResult } from "@/geometry";
 import { fitState, governingClearanceMm } from "@/scene/fit";
-import { diameterText, lengthText, signedLengthText } from "@/scene/format";
+import { diameterLabel, fixedText, lengthLabel, messageInUnits, signedLengthLabel, volumeLabel } from "@/model/units";
 import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
 interface Props {
@@ -20,23 +20,23 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, propo
   const state = fitState(k, result);
   const L = result.limits.values;
   const c = governingClearanceMm(k);
-  const f = (mm: number) => lengthText(mm, units);
+  const f = (mm: number) => lengthLabel(mm, units);
   const rows: [string, string, string?][] = [
-    [k.cut ? "Skirt in the cut" : "Skirt in the mouth", `${signedLengthText(c, units)} radial`, `minimum ${f(L.minRadialClearanceMm)}${k.alignment ? ", tilt and offset counted" : ""}`],
-    ["Skirt in the stock mouth", signedLengthText(k.radialClearanceMm.vsMouth, units)],
-    ["Skirt", `${diameterText(k.skirt.diameterMm, units)}, ${f(k.skirt.protrusionMm)} below the deck`, k.skirt.gasketMm > 0 ? `base gasket ${f(k.skirt.gasketMm)} counted` : "no gasket counted"],
+    [k.cut ? "Skirt in the cut" : "Skirt in the mouth", `${signedLengthLabel(c, units)} radial`, `minimum ${f(L.minRadialClearanceMm)}${k.alignment ? ", tilt and offset counted" : ""}`],
+    ["Skirt in the stock mouth", signedLengthLabel(k.radialClearanceMm.vsMouth, units)],
+    ["Skirt", `${diameterLabel(k.skirt.diameterMm, units)}, ${f(k.skirt.protrusionMm)} below the deck`, k.skirt.gasketMm > 0 ? `base gasket ${f(k.skirt.gasketMm)} counted` : "no gasket counted"],
   ];
   if (k.cut) {
-    rows.push(["Planned cut", `${diameterText(k.cut.diameterMm, units)} × ${f(k.cut.depthMm)} deep`, k.cut.diameterProposed && k.cut.depthProposed ? "proposed by Borewright" : k.cut.proposed ? `${k.cut.diameterProposed ? "diameter" : "depth"} proposed by Borewright` : "as set"]);
-    rows.push(["Depth clearance", k.depthClearanceMm === null ? "no step left" : signedLengthText(k.depthClearanceMm, units), `minimum ${f(L.minDepthClearanceMm)}`]);
+    rows.push(["Planned cut", `${diameterLabel(k.cut.diameterMm, units)} × ${f(k.cut.depthMm)} deep`, k.cut.diameterProposed && k.cut.depthProposed ? "proposed by Borewright" : k.cut.proposed ? `${k.cut.diameterProposed ? "diameter" : "depth"} proposed by Borewright` : "as set"]);
+    rows.push(["Depth clearance", k.depthClearanceMm === null ? "no step left" : signedLengthLabel(k.depthClearanceMm, units), `minimum ${f(L.minDepthClearanceMm)}`]);
   }
-  if (proposed) rows.push(["Least cut that clears", `${diameterText(proposed.diameterMm, units)} × ${f(proposed.depthMm)} deep`]);
+  if (proposed) rows.push(["Least cut that clears", `${diameterLabel(proposed.diameterMm, units)} × ${f(proposed.depthMm)} deep`]);
   if (k.thinnestWall) rows.push(["Thinnest wall", `${f(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}`, `needs ${f(k.thinnestWall.requiredMm)}${k.thinnestWall.ok ? "" : " — too thin"}`]);
-  rows.push(["Largest cut the case takes", diameterText(k.maxCutDiameterMm, units)]);
+  rows.push(["Largest cut the case takes", diameterLabel(k.maxCutDiameterMm, units)]);
   rows.push(["Stud pattern", k.studMatch.ok ? "lines up" : `off by ${f(k.studMatch.worstOffsetMm)}`]);
   const d = k.displacementCc;
-  rows.push(["Displacement", `${d.stockRounded} → ${d.kitRounded} cc`, `${d.change >= 0 ? "+" : ""}${d.change.toFixed(1)} cc`]);
-  if (k.cut) rows.push(["Aluminium removed", `${(k.removal.volumeMm3 / 1000).toFixed(2)} cm³, ${k.removal.massG.toFixed(1)} g`]);
+  rows.push(["Displacement", `${d.stockRounded} → ${d.kitRounded} cc`, `${d.change >= 0 ? "+" : ""}${fixedText(d.change, 1)} cc`]);
+  if (k.cut) rows.push(["Aluminium removed", `${volumeLabel(k.removal.volumeMm3, units)}, ${k.removal.massG.toFixed(1)} g`]);
   if (k.rig) {
     rows.push(["Cutter setting", `${f(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)} across head and bit`, k.rig.bitReaches ? "bit reaches" : "bit cannot reach"]);
     const ds = k.rig.depthStop;
@@ -50,8 +50,8 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, propo
     <section aria-label="Fit results" aria-live="polite" className={`card flex flex-col gap-3 p-4 ${large ? "text-lg" : "text-sm"}`} data-testid="results">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 className={`${large ? "text-3xl" : "text-xl"} font-semibold`}>{k.name}</h2>
-        <p className={`font-semibold ${TEXT_COLOR[state]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict}>
-          {VERDICT_TEXT[k.verdict]} · {STATE_TEXT[state]} <span className="num">{signedLengthText(c, units)}</span>
+        <p className={`font-semibold ${TEXT_COLOR[state]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict} data-cut={k.cut ? k.cut.diameterMm.toFixed(2) : "none"}>
+          {VERDICT_TEXT[k.verdict]} · {STATE_TEXT[state]} <span className="num">{signedLengthLabel(c, units)}</span>
         </p>
       </div>
       {problems.length > 0 && (
@@ -77,7 +77,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, propo
           <h3 className="font-medium">Worth a look</h3>
           <ul className="mt-1 list-disc pl-5 text-ink-2">
             {[...result.warnings, ...k.warnings].map((w, i) => (
-              <li key={`${w.code}-${i}`}>{w.message}</li>
+              <li key={`${w.code}-${i}`}>{messageInUnits(w.message, units)}</li>
             ))}
           </ul>
         </div>

@@ -2,9 +2,9 @@
 
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
-import { lengthValue } from "@/scene/format";
+import { lengthLabel } from "@/model/units";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
-import type { ViewState } from "@/scene/three/view";
+import { drawnKey, type ViewState } from "@/scene/three/view";
 import { Cautions } from "./cautions";
 import { CutSlider } from "./cut-controls";
 import { Drawings } from "./drawings";
@@ -36,6 +36,8 @@ const STEP_MM = 0.05;
 export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
   const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
+  // The panels may lag behind a drag (deferred); the kit pickers follow `snap` itself, or a clicked radio would
+  // spring back until the deferred render lands.
   const live = useDeferredValue(snap);
   const settled = useSettled(live);
   const proposed = useProposedCuts(study);
@@ -108,11 +110,12 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
             data-testid="view"
             data-camera={view.camera}
             data-section={view.section ? String(view.sectionAngleDeg) : "off"}
+            data-wanted={drawnKey(fullView, snap.kitIndex, snap.study.cut)}
           >
             <div className={compare === "side" ? "hidden" : "h-full w-full"}>
               <FitView store={store} view={fullView} onReady={onReady} />
             </div>
-            {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={live.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+            {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           </div>
           {!customer && (
             <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label="Planned cut">
@@ -124,7 +127,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
                 maxMm={ranges.dMax}
                 stepMm={STEP_MM}
                 units={units}
-                hint={p ? `Least that clears this kit: ${lengthValue(p.diameterMm, units)} ${units}` : undefined}
+                hint={p ? `Least that clears this kit: ${lengthLabel(p.diameterMm, units)}` : undefined}
                 onLive={(mm, at) => change({ diameterMm: mm }, false, at)}
                 onCommit={(mm) => change({ diameterMm: mm }, true)}
               />
@@ -136,7 +139,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
                 maxMm={ranges.zMax}
                 stepMm={STEP_MM}
                 units={units}
-                hint={p ? `Least for this kit: ${lengthValue(p.depthMm, units)} ${units}` : undefined}
+                hint={p ? `Least for this kit: ${lengthLabel(p.depthMm, units)}` : undefined}
                 onLive={(mm, at) => change({ depthMm: mm }, false, at)}
                 onCommit={(mm) => change({ depthMm: mm }, true)}
               />
@@ -155,7 +158,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
         </div>
         <aside className="flex min-w-0 flex-col gap-3">
           <ResultsPanel result={live.result} kitIndex={live.kitIndex} proposed={proposed[live.kitIndex]} units={units} large={customer} />
-          {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={live.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+          {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           <Legend result={live.result} units={units} large={customer} />
         </aside>
       </div>

@@ -1,7 +1,7 @@
 "use client";
 
 import type { Study, StudyResult } from "@/geometry";
-import { Studio } from "../../../studies/[id]/_components/studio/studio";
+import { Studio } from "@/app/_ui/studio/studio";
 
 /** The studio's large-type customer mode, locked (no way to the bench view and its cut controls), showing the shop's choice. */
 export function FitForCustomer(props: { study: Study; result: StudyResult; units: "mm" | "in"; chosenKitId: string }) {

@@ -3,7 +3,7 @@
 import { useCallback } from "react";
 import { useFormContext } from "react-hook-form";
 import { mmToIn, type LengthUnits, type Study, type StudyResult } from "@/geometry";
-import { Studio } from "./studio/studio";
+import { Studio } from "@/app/_ui/studio/studio";
 import type { StudyFormValues } from "./study-values";
 
 export type StudioSlotProps = { study: Study; result: StudyResult; kitId: string | null; units: LengthUnits };
