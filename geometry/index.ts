@@ -85,6 +85,19 @@ export { lensArea } from "./lens";
 export { cutterSettingMm, cutDiameterFromSettingMm, bitReachMm, bitLengthWindowMm } from "./rig";
 export { chooseDepthStop } from "./depth-stop";
 export { crankClearance } from "./crank";
+export {
+  DEFAULT_VERIFY_TOLERANCE_MM,
+  VerificationPlanError,
+  planFromResult,
+  cutFigures,
+  bandCheck,
+  measuredRadialClearance,
+  measuredDepthClearance,
+  measuredLands,
+  toMicron,
+  atLeastToMicron,
+} from "./verification";
+export type { VerificationPlan, MeasuredCut, BandCheck, MinimumCheck, LandCheck, CutFigures } from "./verification";
 export { portSteps, passageUnderPort, matchedPassageReachMm, outlineCentroid, lineSpans } from "./ports";
 export { fitPlane, tryFitPlane, tiltDeg, tiltDirectionDeg } from "./alignment";
 export { spindleRpm, cuttingSpeedMPerMin } from "./speed";
