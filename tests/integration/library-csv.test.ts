@@ -1,6 +1,7 @@
+import { parse } from "csv-parse/sync";
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Http } from "../support/http";
-import { expectError, freshShopOwner, ok, shopCounts } from "./library-fixtures";
+import { caseData, expectError, freshShopOwner, kitData, ok, shopCounts } from "./library-fixtures";
 
 type Report = { rows: { line: number; ok: boolean; errors?: Record<string, string>; name?: string }[]; written: number };
 type Page = { items: { name: string; data: Record<string, unknown>; mouthReadingsMm?: { valueMm: number }[] }[]; total: number };
@@ -82,6 +83,32 @@ describe("the library as CSV", () => {
     expect(rows).toHaveLength(2);
     expect(rows[1].data).toEqual(rows[0].data);
     expect(rows[1].mouthReadingsMm?.map((r) => r.valueMm)).toEqual(rows[0].mouthReadingsMm?.map((r) => r.valueMm));
+  });
+
+  it("never exports a cell a spreadsheet would run as a formula, whatever the name, notes, stud or pocket labels start with", async () => {
+    // The prefixes spreadsheets run as formulas (OWASP, "CSV Injection"). Labels and names are trimmed by the
+    // schema, so the tab and carriage return reach only the notes.
+    const owner = await freshShopOwner("Formula Owner");
+    const prefixes = ["=", "+", "-", "@", "\t", "\r"];
+    for (const p of prefixes) {
+      const printable = p.trim() !== "";
+      const label = (s: string) => (printable ? `${p}${s}` : s);
+      const data = { ...caseData(), studs: caseData().studs.map((st, i) => ({ ...st, label: label(`HYPERLINK("http://x.test/${i}")`) })) };
+      data.pockets = data.pockets.map((x, i) => ({ ...x, label: printable && p !== "@" ? `${p}pocket ${i}` : `pocket ${i}` }));
+      ok(await owner.post("/api/v1/cases", { name: label(`Case ${prefixes.indexOf(p)}`), notes: `${p}SUM(A1:A9)`, data }), 201);
+      const kit = { ...kitData(47, 53.92), studs: data.studs };
+      ok(await owner.post("/api/v1/kits", { name: label(`Kit ${prefixes.indexOf(p)}`), notes: `${p}SUM(A1:A9)`, data: kit }), 201);
+    }
+    for (const kind of ["cases", "kits"]) {
+      const exported = await owner.get(`/api/v1/library/export?kind=${kind}`);
+      expect(exported.status).toBe(200);
+      const records = parse(exported.text, { relax_column_count: true }) as string[][];
+      expect(records.length).toBe(prefixes.length + 1);
+      for (const cell of records.flat()) expect(cell, JSON.stringify(cell)).not.toMatch(/^[=+\-@\t\r]/);
+      // And the export reads back cleanly.
+      const again = ok<Report>(await owner.post(`/api/v1/library/import?kind=${kind}`, { csv: exported.text, confirm: false }));
+      expect(again.rows.every((r) => r.ok)).toBe(true);
+    }
   });
 
   it("answers a bad kind or a body that is not the import shape with 400", async () => {
