@@ -11,7 +11,7 @@ import * as jobs from "../schema-jobs";
 import { addEvent, type Tx } from "./events";
 import { checkPlan, planOverrideColumns, snapshotPlan } from "./plan";
 import { getJob } from "./reads";
-import { assertStaff, j, loadFor, type JobView } from "./view";
+import { assertStaff, j, loadFor, planVerdict, type JobView } from "./view";
 
 // Opening a job and changing its details; a new study or kit re-takes the plan.
 
@@ -43,12 +43,15 @@ async function nextReference(tx: Tx, shopId: string): Promise<string> {
 
 /**
  * Opens a job at intake, planned straight away when a study with a cut is attached. A kit the study calls
- * cannot-fit is planned only by the owner with a recorded reason; without one nothing is written.
+ * cannot-fit is planned only by the owner with a recorded reason (without one nothing is written); a builder's
+ * job with such a kit opens at intake with the plan attached, for the owner to decide.
  */
 export async function createJob(caller: Caller, body: JobCreate): Promise<JobView> {
   assertStaff(caller);
   const plan = body.studyId ? await snapshotPlan(caller, body.studyId, body.kitId) : null;
-  const override = plan ? checkPlan(caller, plan, body.planOverrideReason) : null;
+  // A builder may open the job with a cannot-fit plan attached; it stays at intake until the owner plans it.
+  const waitsForOwner = plan !== null && caller.role !== "owner" && planVerdict(plan) === "cannot-fit";
+  const override = plan && !waitsForOwner ? checkPlan(caller, plan, body.planOverrideReason) : null;
   const own = body.ownEngine === true;
   const customerName = own ? caller.shopName : (body.customerName ?? "");
   const customerEmail = own ? "" : (body.customerEmail ?? "");
@@ -73,7 +76,7 @@ export async function createJob(caller: Caller, body: JobCreate): Promise<JobVie
       studyId: plan?.studyId ?? null,
       kitId: plan?.kitId ?? null,
       planJson: plan ? JSON.stringify(plan) : null,
-      status: plan ? "planned" : "intake",
+      status: plan && !waitsForOwner ? "planned" : "intake",
       ...planOverrideColumns(caller, override),
       depositAmount: own ? 0 : (body.depositAmount ?? 0),
       currency: body.currency ?? "eur",
@@ -82,7 +85,9 @@ export async function createJob(caller: Caller, body: JobCreate): Promise<JobVie
       createdBy: caller.userId,
     });
     await addEvent(tx, id, me, "created", own ? "opened the job for the shop's own engine" : `opened the job for ${customerName}`);
-    if (plan) {
+    if (plan && waitsForOwner) {
+      await addEvent(tx, id, me, "plan", `attached the plan: ${plan.kitName} from "${plan.studyName}"; the study says it cannot fit safely, so planning it needs the owner's override`);
+    } else if (plan) {
       const how = override ? ` although the study says it cannot fit safely, on the owner's override: ${override.reason}` : "";
       await addEvent(tx, id, me, "status", `planned with ${plan.kitName} from the study "${plan.studyName}"${how}`, { from: "intake", to: "planned" });
     }
@@ -106,7 +111,8 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
   const studyId = patch.studyId === undefined ? record.studyId : patch.studyId;
   const plan = replan && studyId ? await snapshotPlan(caller, studyId, patch.kitId === undefined ? record.kitId : patch.kitId) : undefined;
   // A planned job keeps its status only with a plan this caller may plan; an intake job is planned by a move later.
-  const override = plan && status === "planned" ? checkPlan(caller, plan, patch.planOverrideReason) : null;
+  const backToIntake = plan !== undefined && status === "planned" && caller.role !== "owner" && planVerdict(plan) === "cannot-fit";
+  const override = plan && status === "planned" && !backToIntake ? checkPlan(caller, plan, patch.planOverrideReason) : null;
   const emailChanged = patch.customerEmail !== undefined && patch.customerEmail !== record.customerEmail.toLowerCase();
   const customerUserId = emailChanged ? await customerMemberId(caller.shopId, patch.customerEmail ?? "") : record.customerUserId;
   const db = await getDb();
@@ -128,7 +134,7 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
       set.kitId = plan?.kitId ?? null;
       set.planJson = plan ? JSON.stringify(plan) : null;
       Object.assign(set, planOverrideColumns(caller, override));
-      if (!plan && status === "planned") set.status = "intake";
+      if ((!plan || backToIntake) && status === "planned") set.status = "intake";
     }
     const done = await tx
       .update(j)
@@ -139,7 +145,8 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
     const me = { id: caller.userId, name: caller.name };
     if (replan) {
       const how = override ? ` although the study says it cannot fit safely, on the owner's override: ${override.reason}` : "";
-      await addEvent(tx, id, me, "plan", plan ? `took the plan: ${plan.kitName} from "${plan.studyName}"${how}` : "removed the plan");
+      const waits = backToIntake ? "; the study says it cannot fit safely, so the job is back at intake until the owner plans it" : "";
+      await addEvent(tx, id, me, "plan", plan ? `took the plan: ${plan.kitName} from "${plan.studyName}"${how}${waits}` : "removed the plan");
     } else await addEvent(tx, id, me, "edit", "changed the job's details");
   });
   return getJob(caller, id);

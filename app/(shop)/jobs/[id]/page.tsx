@@ -7,6 +7,7 @@ import { listPhotos } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
 import { formatLength } from "@/geometry";
 import { requirePage } from "../../../_ui/guard";
+import { PlanVerdict } from "../_components/plan-verdict";
 import { StatusBadge, money } from "../_components/status-badge";
 import { JobActions } from "./_components/job-actions";
 import { Photos } from "./_components/photos";
@@ -32,13 +33,19 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
       <div className="flex flex-wrap items-start justify-between gap-4">
         <div>
           <p className="text-sm text-ink-2"><Link href="/jobs">Jobs</Link> / <span className="num">{job.reference}</span></p>
-          <h1 className="text-3xl font-semibold">{job.title}</h1>
+          <h1 className="text-3xl font-semibold break-words">{job.title}</h1>
           <p className="mt-1 flex flex-wrap items-center gap-3 text-ink-2">
             <StatusBadge status={job.status} />
-            <span>for {job.customer.name} ({job.customer.email})</span>
-            <span data-testid="deposit-state">
-              {job.deposit.amount > 0 ? `Deposit ${money(job.deposit.amount, job.deposit.currency)}: ${job.deposit.paid ? "paid" : "unpaid"}` : "No deposit asked"}
-            </span>
+            {job.ownEngine ? (
+              <span>the shop&apos;s own engine</span>
+            ) : (
+              <>
+                <span className="break-all">for {job.customer.name} ({job.customer.email})</span>
+                <span data-testid="deposit-state">
+                  {job.deposit.amount > 0 ? `Deposit ${money(job.deposit.amount, job.deposit.currency)}: ${job.deposit.paid ? "paid" : "unpaid"}` : "No deposit asked"}
+                </span>
+              </>
+            )}
             {job.sharedAt ? <span>· shared with the customer</span> : null}
           </p>
         </div>
@@ -51,6 +58,8 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
           ) : null}
         </div>
       </div>
+
+      {kit ? <PlanVerdict kit={kit} job={job} /> : null}
 
       <JobActions job={job} role={caller.role} hasPlan={plan !== null} />
 
@@ -89,6 +98,11 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
       <section className="flex flex-col gap-3">
         <h2 className="text-xl font-semibold">Plan against actual</h2>
         {readings ? <PlanVsActual verification={readings.verification} at={readings.at} /> : <p className="text-ink-2">No after-cut readings yet.</p>}
+        {job.verification?.override ? (
+          <p className="rounded-md border-l-4 border-interfere bg-interfere-soft px-4 py-2 text-sm" data-testid="verify-override">
+            Verified although the readings are outside the plan, on {job.verification.override.by.name}&apos;s override ({job.verification.override.at.slice(0, 10)}): {job.verification.override.reason}
+          </p>
+        ) : null}
         {job.status === "machined" && plan ? (
           <ReadingsForm jobId={job.id} studs={plan.study.case.studs.map((s) => s.label)} previous={readings?.readings ?? null} />
         ) : job.status === "approved" || job.status === "planned" || job.status === "intake" ? (

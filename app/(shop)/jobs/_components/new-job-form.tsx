@@ -15,9 +15,12 @@ const fieldsOf = (issues: { path: PropertyKey[]; message: string }[]) => {
 };
 
 /** The new-job form: checks as the person types, keeps everything typed, says what is wrong next to each field. */
-export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]; initialStudyId: string }) {
+export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: StudyOption[]; initialStudyId: string; isOwner: boolean }) {
   const router = useRouter();
-  const [v, setV] = useState({ title: "", customerName: "", customerEmail: "", engineNumber: "", caseNumber: "", caseVariant: "", studyId: initialStudyId, deposit: "50.00", currency: "eur", notes: "" });
+  const [v, setV] = useState({ title: "", customerName: "", customerEmail: "", engineNumber: "", caseNumber: "", caseVariant: "", studyId: initialStudyId, deposit: "50.00", currency: "eur", notes: "", planOverrideReason: "" });
+  const [ownEngine, setOwnEngine] = useState(false);
+  // Shown once the server says the study's kit cannot fit safely and planning it needs the owner's reason.
+  const [asksOverride, setAsksOverride] = useState(false);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [touched, setTouched] = useState<Record<string, boolean>>({});
   const [problem, setProblem] = useState<string | null>(null);
@@ -28,22 +31,22 @@ export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]
     const cents = /^\d+(\.\d{1,2})?$/.test(deposit) ? Math.round(Number(deposit) * 100) : Number.NaN;
     return {
       title: v.title,
-      customerName: v.customerName,
-      customerEmail: v.customerEmail,
+      ...(ownEngine ? { ownEngine: true } : { customerName: v.customerName, customerEmail: v.customerEmail }),
       engineNumber: v.engineNumber,
       caseNumber: v.caseNumber,
       caseVariant: v.caseVariant,
       studyId: v.studyId || null,
-      depositAmount: cents,
+      ...(ownEngine ? {} : { depositAmount: cents }),
       currency: v.currency,
       notes: v.notes,
+      ...(asksOverride && v.planOverrideReason.trim() ? { planOverrideReason: v.planOverrideReason } : {}),
     };
   };
   const check = (next = v) => {
     void next;
     const r = JobCreateSchema.safeParse(body());
     const f = r.success ? {} : fieldsOf(r.error.issues);
-    if (!/^\d+([.,]\d{1,2})?$/.test(v.deposit.trim())) f.depositAmount = "Write the deposit as money, e.g. 50 or 50.00.";
+    if (!ownEngine && !/^\d+([.,]\d{1,2})?$/.test(v.deposit.trim())) f.depositAmount = "Write the deposit as money, e.g. 50 or 50.00.";
     return f;
   };
   const set = (k: keyof typeof v) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>) => {
@@ -70,6 +73,7 @@ export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]
     if (!res.ok) {
       setErrors(res.error.fields ?? {});
       setProblem(res.error.message);
+      if (res.error.fields?.planOverrideReason) setAsksOverride(true);
       return;
     }
     router.push(`/jobs/${res.data.item.id}`);
@@ -79,10 +83,17 @@ export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]
     <form onSubmit={submit} className="card flex flex-col gap-4 p-6" noValidate>
       {problem ? <FormNotice tone="error">{problem}</FormNotice> : null}
       <Field label="Title" name="title" value={v.title} onChange={set("title")} error={shown("title")} hint="The engine and the customer, as the bench calls it." />
-      <div className="grid gap-4 sm:grid-cols-2">
+      <label className="flex items-start gap-2 text-sm">
+        <input type="checkbox" className="mt-1" checked={ownEngine} onChange={(e) => setOwnEngine(e.target.checked)} />
+        <span>
+          For my own engine
+          <span className="block text-ink-2">The job is the shop&apos;s own: no customer to name, nothing to share, no deposit.</span>
+        </span>
+      </label>
+      {ownEngine ? null : <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Customer's name" name="customerName" value={v.customerName} onChange={set("customerName")} error={shown("customerName")} />
         <Field label="Customer's e-mail" name="customerEmail" type="email" value={v.customerEmail} onChange={set("customerEmail")} error={shown("customerEmail")} hint="The plan is shared to this address." />
-      </div>
+      </div>}
       <div className="grid gap-4 sm:grid-cols-3">
         <Field label="Engine number" name="engineNumber" value={v.engineNumber} onChange={set("engineNumber")} error={shown("engineNumber")} />
         <Field label="Case number" name="caseNumber" value={v.caseNumber} onChange={set("caseNumber")} error={shown("caseNumber")} />
@@ -99,7 +110,24 @@ export function NewJobForm({ studies, initialStudyId }: { studies: StudyOption[]
         <p id="field-studyId-hint" className="field-hint">With a study, the job is planned with the study&apos;s chosen kit (or its first).</p>
         {errors.studyId || errors.kitId ? <p role="alert" className="field-error">{errors.studyId ?? errors.kitId}</p> : null}
       </div>
-      <div className="grid gap-4 sm:grid-cols-2">
+      {asksOverride ? (
+        isOwner ? (
+          <div>
+            <label htmlFor="field-planOverrideReason" className="field-label">Why plan it anyway (the owner&apos;s override, kept with the plan)</label>
+            <textarea
+              id="field-planOverrideReason"
+              className="field-input"
+              rows={2}
+              value={v.planOverrideReason}
+              onChange={set("planOverrideReason")}
+              aria-describedby="field-planOverrideReason-error"
+              aria-invalid={errors.planOverrideReason && !v.planOverrideReason.trim() ? true : undefined}
+            />
+            {errors.planOverrideReason && !v.planOverrideReason.trim() ? <p id="field-planOverrideReason-error" role="alert" className="field-error">{errors.planOverrideReason}</p> : null}
+          </div>
+        ) : null
+      ) : null}
+      <div className={`grid gap-4 sm:grid-cols-2 ${ownEngine ? "hidden" : ""}`}>
         <Field label="Machining deposit" name="deposit" inputMode="decimal" value={v.deposit} onChange={set("deposit")} error={shown("depositAmount")} hint="Paid by the customer by card on approval; 0 for none." />
         <div>
           <label htmlFor="field-currency" className="field-label">Currency</label>

@@ -15,7 +15,7 @@ export default async function NewJobPage({ searchParams }: { searchParams: Promi
   return (
     <div className="flex max-w-3xl flex-col gap-6">
       <h1 className="text-3xl font-semibold">New job</h1>
-      <NewJobForm studies={studies.items.map((s) => ({ id: s.id, name: s.name, kitIds: s.kitIds, chosenKitId: s.chosenKitId }))} initialStudyId={studyId ?? ""} />
+      <NewJobForm studies={studies.items.map((s) => ({ id: s.id, name: s.name, kitIds: s.kitIds, chosenKitId: s.chosenKitId }))} initialStudyId={studyId ?? ""} isOwner={caller.role === "owner"} />
     </div>
   );
 }

@@ -10,6 +10,7 @@ import { getServerQueryClient } from "../../../_ui/query/server";
 import { libraryKeys } from "../../../_ui/query/library/keys";
 import { studyKeys } from "../../../_ui/query/studies/keys";
 import type { StudyDetail } from "../../../_ui/query/types";
+import { StudyJobs } from "../../jobs/_components/study-jobs";
 import { StudyEditor } from "./_components/study-editor";
 
 export const metadata: Metadata = { title: "Study" };
@@ -32,6 +33,7 @@ export default async function StudyPage({ params }: { params: Promise<{ id: stri
   }
   return (
     <QueryProvider>
+      <StudyJobs caller={caller} studyId={id} />
       <HydrationBoundary state={dehydrate(qc)}>
         <StudyEditor id={id} units={caller.units} />
       </HydrationBoundary>

@@ -17,7 +17,24 @@ const VERB: Partial<Record<string, string>> = {
   "verified>closed": "Close the job",
   "verified>machined": "Back to machined",
 };
-const NEEDS_REASON = new Set(["planned>approved", "planned>intake", "approved>planned", "verified>machined"]);
+
+/** The button's words for a move, where the job's state changes what the move means. */
+function verb(job: JobView, to: JobStatus): string {
+  const key = `${job.status}>${to}`;
+  const asks = job.movesNeedingReason.includes(to);
+  if (key === "intake>planned" && asks) return "Plan anyway (owner's override)";
+  if (key === "machined>verified" && asks) return "Verify as it stands (owner's override)";
+  if (key === "planned>approved" && job.ownEngine) return "Approve the plan";
+  return VERB[key] ?? `Move to ${STATUS_LABEL[to].toLowerCase()}`;
+}
+
+/** What the reason box asks for, given the moves that need one from here. */
+function reasonLabel(job: JobView): string {
+  const asks = job.movesNeedingReason;
+  if (job.status === "intake" && asks.includes("planned")) return "Why plan a kit the study says cannot fit safely (kept with the plan)";
+  if (job.status === "machined" && asks.includes("verified")) return "Why verify readings outside the plan (kept in the job's history)";
+  return "Reason (needed to approve for the customer or to go back a step)";
+}
 
 /** The moves this person may make from here, the reason when one is needed, and sharing with the customer. */
 export function JobActions({ job, role, hasPlan }: { job: JobView; role: string; hasPlan: boolean }) {
@@ -28,8 +45,7 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
   const [reasonFor, setReasonFor] = useState<JobStatus | null>(null);
 
   async function move(to: JobStatus) {
-    const key = `${job.status}>${to}`;
-    if (NEEDS_REASON.has(key) && !reason.trim()) {
+    if (job.movesNeedingReason.includes(to) && !reason.trim()) {
       setReasonFor(to);
       setNotice({ tone: "error", text: "Say why in the box below; the reason is kept in the job's history." });
       return;
@@ -65,8 +81,9 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
   }
 
   const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner"));
-  const canShare = hasPlan && job.status !== "closed";
-  const waiting = job.status === "planned" && role !== "owner";
+  const canShare = hasPlan && !job.ownEngine && job.status !== "closed";
+  const waiting = job.status === "planned" && role !== "owner" && !job.ownEngine;
+  const asksReason = moves.some((to) => job.movesNeedingReason.includes(to));
   // Nothing to do from here (a closed job): no empty box, a one-line note instead.
   if (moves.length === 0 && !canShare && !waiting) {
     const closed = job.status === "closed";
@@ -82,8 +99,8 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
     <div className="card flex flex-col gap-3 p-4">
       <div className="flex flex-wrap items-center gap-2">
         {moves.map((to) => (
-          <button key={to} type="button" className={to === "closed" || NEEDS_REASON.has(`${job.status}>${to}`) ? "btn-quiet" : "btn"} disabled={pending !== null} onClick={() => move(to)}>
-            {pending === to ? "Moving…" : (VERB[`${job.status}>${to}`] ?? `Move to ${STATUS_LABEL[to].toLowerCase()}`)}
+          <button key={to} type="button" className={to === "closed" || job.movesNeedingReason.includes(to) ? "btn-quiet" : "btn"} disabled={pending !== null} onClick={() => move(to)}>
+            {pending === to ? "Moving…" : verb(job, to)}
           </button>
         ))}
         {canShare ? (
@@ -93,9 +110,9 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
         ) : null}
         {waiting ? <span className="text-sm text-ink-2">Waiting for the customer&apos;s approval.</span> : null}
       </div>
-      {reasonFor || moves.some((to) => NEEDS_REASON.has(`${job.status}>${to}`)) ? (
+      {reasonFor || asksReason ? (
         <div>
-          <label htmlFor="move-reason" className="field-label">Reason (needed to approve for the customer or to go back a step)</label>
+          <label htmlFor="move-reason" className="field-label">{reasonLabel(job)}</label>
           <input id="move-reason" className="field-input" value={reason} onChange={(e) => setReason(e.target.value)} placeholder="e.g. approved by phone on 2 March" />
         </div>
       ) : null}
