@@ -12,7 +12,7 @@ export default defineConfig({
         test: {
           name: "unit",
           sequence: { groupOrder: 0 },
-          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/unit/**/*.test.ts"],
+          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/scripts/**/*.test.ts", "tests/unit/**/*.test.ts"],
           environment: "node",
         },
       },

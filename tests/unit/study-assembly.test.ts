@@ -12,6 +12,7 @@ import { applyMigrations } from "../../db/migrate";
 import * as schema from "../../db/schema";
 import { DEMO_SHOP, seedEverything } from "../../db/seed";
 import { shopOwnLimits } from "../../model/study-assembly";
+import { readStudyText } from "../../scripts/fit";
 
 // One assembler: the server's Study for a stored study (what the API answers, what the export writes) and
 // the Study the studio assembles in the browser from the same rows, through its own form, are equal.
@@ -49,7 +50,10 @@ describe("assembling a study", { timeout: 60_000 }, () => {
       const browser = evaluateInBrowser({ name: inputs!.name, caseRow: rows.case, kitRows: rows.kits, rigRow: rows.rig, inputs: inputs!, shopLimits: shopOwnLimits(settings.settings) });
       if (!browser.ok) continue;
       expect(browser.study, `study "${item.name}"`).toEqual(study);
-      expect((await exportStudy(caller, item.id)).study).toEqual(study);
+      // The export is the file `npm run fit` reads: as JSON text, it reads back to the same Study.
+      const exported = (await exportStudy(caller, item.id)).study;
+      expect(exported).toEqual(study);
+      expect(readStudyText(JSON.stringify(exported, null, 2))).toEqual({ ok: true, study });
       expect((study as { limits?: unknown }).limits).toMatchObject({ minWallMm: 2.5 });
       compared++;
     }

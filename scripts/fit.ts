@@ -1,11 +1,10 @@
 // Command-line runner: `npm run fit -- study.json [--units in]`, or the study on standard input.
 // Prints the StudyResult as JSON. Invalid input exits with status 2 and one line per bad field.
+// The file and process handling is here; the study is read, checked and evaluated by the core.
 
 import { readFileSync } from "node:fs";
-import { GeometryError } from "./errors";
-import { evaluateStudy } from "./evaluate";
-import { safeParseStudy } from "./parse";
-import { convertLengthsToInches } from "./units";
+import { pathToFileURL } from "node:url";
+import { GeometryError, convertLengthsToInches, evaluateStudy, safeParseStudy, type Study } from "../geometry";
 
 const USAGE = "usage: npm run fit -- [study.json] [--units mm|in]   (reads the study from standard input when no file is given)";
 
@@ -46,19 +45,25 @@ function readInput(file: string | null): string {
   }
 }
 
-function main(): void {
-  const { file, units } = parseArgs(process.argv.slice(2));
-  const text = readInput(file);
+/** A study file's text as the core's Study, or the lines that say what is wrong with it. */
+export function readStudyText(text: string): { ok: true; study: Study } | { ok: false; lines: string[] } {
   let json: unknown;
   try {
     json = JSON.parse(text);
   } catch (e) {
-    fail(2, [`(root): not valid JSON: ${e instanceof Error ? e.message : String(e)}`]);
+    return { ok: false, lines: [`(root): not valid JSON: ${e instanceof Error ? e.message : String(e)}`] };
   }
   const parsed = safeParseStudy(json);
-  if (!parsed.ok) fail(2, ["invalid study:", ...parsed.issues.map((i) => `  ${i.path || "(root)"}: ${i.message}`)]);
+  if (!parsed.ok) return { ok: false, lines: ["invalid study:", ...parsed.issues.map((i) => `  ${i.path || "(root)"}: ${i.message}`)] };
+  return { ok: true, study: parsed.study };
+}
+
+function main(): void {
+  const { file, units } = parseArgs(process.argv.slice(2));
+  const read = readStudyText(readInput(file));
+  if (!read.ok) fail(2, read.lines);
   try {
-    const result = evaluateStudy(parsed.study);
+    const result = evaluateStudy(read.study);
     const out = units === "in" ? { units: "in", ...(convertLengthsToInches(result) as object) } : { units: "mm", ...result };
     process.stdout.write(`${JSON.stringify(out, null, 2)}\n`);
   } catch (e) {
@@ -67,4 +72,5 @@ function main(): void {
   }
 }
 
-main();
+// Run as a command (not when a test imports readStudyText).
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) main();
