@@ -12,13 +12,14 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
   return (
     <div className="flex min-h-dvh flex-col">
       <header className="border-b border-rule bg-paper-2/60">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-4 px-6 py-3">
-          <div className="flex items-center gap-6">
+        {/* Everything wraps rather than widening the page: on a phone the menu takes two lines, never a sideways scroll. */}
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center justify-between gap-x-4 gap-y-2 px-4 py-3 sm:px-6">
+          <div className="flex min-w-0 flex-wrap items-center gap-x-6 gap-y-2">
             <Link href="/home" className="flex items-center gap-2 text-ink no-underline">
               <Mark size={24} />
               <span className="font-semibold tracking-tight">Borewright</span>
             </Link>
-            <nav aria-label="Main" className="flex gap-1">
+            <nav aria-label="Main" className="flex flex-wrap gap-1">
               {nav.map((item) => (
                 <Link key={item.href} href={item.href} className="rounded-md px-3 py-1.5 text-sm text-ink-2 no-underline hover:bg-card hover:text-ink">
                   {item.label}
@@ -26,8 +27,8 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
               ))}
             </nav>
           </div>
-          <div className="flex items-center gap-4">
-            <span className="text-sm text-ink-2" data-testid="who">
+          <div className="flex min-w-0 flex-wrap items-center gap-x-4 gap-y-2">
+            <span className="min-w-0 break-words text-sm text-ink-2" data-testid="who">
               {caller.name} · <span className="text-ink">{caller.shopName}</span> · {caller.role}
             </span>
             <HeaderControls shops={shops} activeShopId={caller.shopId} units={caller.units} />
@@ -39,7 +40,7 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
           Confirm your e-mail address: the link is in your inbox.
         </div>
       ) : null}
-      <main className="mx-auto w-full max-w-7xl flex-1 px-6 py-8">{children}</main>
+      <main className="mx-auto w-full min-w-0 max-w-7xl flex-1 px-4 py-6 sm:px-6 sm:py-8">{children}</main>
       <footer className="border-t border-rule px-6 py-4 text-center text-xs text-ink-3">
         Borewright plans cuts; it does not replace the kit maker&apos;s instructions, local regulations or a qualified machinist.
       </footer>

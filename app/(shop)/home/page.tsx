@@ -9,10 +9,12 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
   const caller = await requirePage("/home");
   if (caller.role === "customer") redirect("/consult");
   const { verified } = await searchParams;
+  // In the order a first study needs them; each card opens the form that makes the thing.
   const steps = [
-    { href: "/library", title: "1 · Describe the crankcase", text: "Add a case profile: the mouth read with calipers (the smallest reading counts), the studs, the deck outline, the transfer passages." },
-    { href: "/library", title: "2 · Add the candidate kits", text: "Bore, skirt diameter readings (the largest counts), skirt length, studs, gaskets, price." },
-    { href: "/studies", title: "3 · Open a study", text: "See whether each skirt clears, the cut it needs, the sealing land left at every stud, and how to set the boring rig." },
+    { href: "/library/cases/new", title: "1 · Describe the crankcase", text: "Add a case profile: the mouth read with calipers (the smallest reading counts), the studs, the deck outline, the transfer passages." },
+    { href: "/library/kits/new", title: "2 · Add the candidate kits", text: "Bore, skirt diameter readings (the largest counts), skirt length, studs, gaskets, price." },
+    { href: "/library/rigs/new", title: "3 · Add your boring rig", text: "Head diameter, the bit's reach, the stop grooves and the shims at hand: every study then gives the cutter setting, the depth stop and the speed." },
+    { href: "/studies", title: "4 · Open a study", text: "See whether each skirt clears, the cut it needs, the sealing land left at every stud, and how to set the boring rig." },
   ];
   return (
     <div className="flex flex-col gap-8">
@@ -24,7 +26,7 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
           anything is bought or cut.
         </p>
       </div>
-      <ol className="grid gap-4 md:grid-cols-3">
+      <ol className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         {steps.map((s) => (
           <li key={s.title} className="card p-5">
             <Link href={s.href} className="font-semibold text-accent">

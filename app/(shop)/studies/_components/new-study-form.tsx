@@ -20,7 +20,10 @@ export function NewStudyForm({ onCancel }: { onCancel: () => void }) {
   const [name, setName] = useState("");
   const [caseId, setCaseId] = useState("");
   const [kitIds, setKitIds] = useState<string[]>([]);
-  const [rigId, setRigId] = useState("");
+  // A shop with one rig gets it preselected; a choice the person makes (even "none yet") is kept.
+  const [rigChoice, setRigChoice] = useState<string | null>(null);
+  const onlyRig = rigs.data?.items.length === 1 ? rigs.data.items[0].id : "";
+  const rigId = rigChoice ?? onlyRig;
   const [errors, setErrors] = useState<Errors>({});
   const [problem, setProblem] = useState<string | null>(null);
 
@@ -97,7 +100,7 @@ export function NewStudyForm({ onCancel }: { onCancel: () => void }) {
           <label htmlFor="ns-rig" className="field-label">
             Boring rig (optional)
           </label>
-          <select id="ns-rig" className="field-input" value={rigId} onChange={(e) => setRigId(e.target.value)}>
+          <select id="ns-rig" className="field-input" value={rigId} onChange={(e) => setRigChoice(e.target.value)}>
             <option value="">none yet</option>
             {rigs.data?.items.map((r) => (
               <option key={r.id} value={r.id}>
