@@ -52,6 +52,10 @@ describe("a job in the browser, from the study to verified", () => {
     await sofa.getByLabel("Password").fill("a-long-customer-password");
     await sofa.getByRole("button", { name: "Create account" }).click();
     await sofa.waitForURL(/\/invite\//);
+    // Only a confirmed address may accept: the link mailed at sign-up leads back to the invitation.
+    const confirmation = new URL((await waitForMail(customerEmail, /confirm/i)).links.find((l) => l.includes("/verify-email"))!);
+    await sofa.goto(confirmation.pathname + confirmation.search);
+    await sofa.waitForURL(/\/invite\//);
     await sofa.getByRole("button", { name: "Accept the invitation" }).click();
     await sofa.waitForURL(/\/consult$/);
     await sofa.getByRole("link", { name: "Harrow's 50 cc scooter, big bore" }).click();
@@ -123,15 +127,16 @@ describe("a job in the browser, from the study to verified", () => {
     for (const c of [/eye protection/, /without crushing it/, /bit and every fastener/, /Remove every chip/, /legal class/, /qualified machinist/]) expect(cardCautions).toMatch(c);
     await bench.emulateMedia({ media: "print" });
     await screenshot(bench, "jobs-06-setup-card-print-preview");
+    // The figures on one page, then the plan and the section each on a landscape page of its own.
     for (const format of ["A4", "Letter"] as const) {
       const printed = await bench.pdf({ format, printBackground: true });
-      expect(readPdf(printed).pages, `${format} print`).toBe(1);
+      expect(readPdf(printed).pages, `${format} print`).toBe(3);
     }
     await bench.emulateMedia({ media: "screen" });
     const download = await shop.request.get(`/api/v1/jobs/${jobId}/setup-card.pdf`);
     expect(download.headers()["content-type"]).toBe("application/pdf");
     const pdf = readPdf(await download.body());
-    expect(pdf.pages).toBe(1);
+    expect(pdf.pages).toBe(3);
     expect(pdf.fontsEmbedded).toBe(2);
     expect(pdf.text).toContain("44.80 mm");
     expect(pdf.text).toMatch(/Wear eye protection/);
