@@ -5,24 +5,26 @@ import type { SettingsPatch, ShopSettings } from "@/model/schemas";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { DataError, conflict } from "./errors";
-import { assertStaff, fieldsOf } from "./rows";
+import { assertStaff, fieldsOf, readColumn } from "./rows";
+import * as schema from "./schema";
 
 const prefixed = (prefix: string, fields: Record<string, string>) =>
   Object.fromEntries(Object.entries(fields).map(([k, v]) => [`${prefix}.${k}`, v]));
-import * as schema from "./schema";
 
 // A shop's settings: the units it reads by default and its own limits (a subset; the rest are the
 // core's defaults, shown as such).
 
 /** The limits the shop set itself, as stored (a damaged or outdated column counts as none set). */
 export function parseShopLimits(json: string | null | undefined): StudyLimits {
-  if (!json) return {};
-  try {
-    const r = StudyLimitsSchema.safeParse(JSON.parse(json));
-    return r.success ? r.data : {};
-  } catch {
-    return {};
-  }
+  return readColumn(StudyLimitsSchema, json, {}, "the shop's limits");
+}
+
+/**
+ * The time zone every date and time of the shop is shown in: the server's (set with the standard TZ
+ * variable, e.g. TZ=Europe/Berlin), named beside each time so nobody reads it as their own.
+ */
+export function shopTimeZone(): string {
+  return Intl.DateTimeFormat().resolvedOptions().timeZone || "UTC";
 }
 
 async function readRow(shopId: string) {
@@ -40,7 +42,7 @@ function present(row: { units: string; limitsJson: string; version: number } | n
   const own = parseShopLimits(row?.limitsJson);
   const resolved = resolveLimits(own);
   return {
-    settings: { units: row?.units === "in" ? "in" : "mm", limits: resolved.values, defaulted: resolved.defaulted },
+    settings: { units: row?.units === "in" ? "in" : "mm", limits: resolved.values, defaulted: resolved.defaulted, timeZone: shopTimeZone() },
     version: row?.version ?? 1,
   };
 }

@@ -11,7 +11,7 @@ import { archivedFilter, libraryRowsById, nameFilter } from "./library";
 import { assertStaff, fieldsOf, iso, notFound, readColumn } from "./rows";
 import * as schema from "./schema";
 import { shopLimits } from "./settings";
-import type { StudySnapshot } from "./study-history";
+import type { StudySnapshot } from "@/model/study-history";
 
 // Studies: one case profile, its candidate kits, a rig, the cut plan, the holder readings and the
 // study's own limits. Reading them, assembling them into the core's Study (with the one assembler the

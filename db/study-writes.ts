@@ -6,7 +6,7 @@ import { DataError, conflict } from "./errors";
 import { libraryRowsById, recordsById } from "./library";
 import { insertLibraryStmt, newLibraryValues } from "./library-writes";
 import { assertStaff, newId, runBatch, type Stmt } from "./rows";
-import { describeChanges, type StudySnapshot } from "./study-history";
+import { describeChanges, type StudySnapshot } from "@/model/study-history";
 import { loadStudy, loadStudyOr404, snapshotOf, toStudyRow, type Loaded } from "./studies";
 
 // Writing studies: creating one from the shop's rows or from a study file, changing it under the version

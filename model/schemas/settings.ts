@@ -11,7 +11,8 @@ export const SettingsPatchSchema = z.strictObject({
   limits: StudyLimitsSchema.optional(),
 });
 export const SettingsSchema = z.object({
-  settings: z.object({ units: UnitsSchema, limits: LimitsSchema, defaulted: z.array(z.string()) }),
+  /** timeZone: the zone the shop's dates and times are shown in (an IANA name, e.g. "Europe/Berlin"). */
+  settings: z.object({ units: UnitsSchema, limits: LimitsSchema, defaulted: z.array(z.string()), timeZone: z.string() }),
   version: z.number().int(),
 });
 export type SettingsPatch = z.infer<typeof SettingsPatchSchema>;

@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import type { BoringRigSchema, CaseProfileSchema, CutPlanSchema, CylinderKitSchema, ReadingsSchema, StudyLimitsSchema, Limits } from "@/geometry";
+import type { BoringRigSchema, CaseProfileSchema, CutPlanSchema, CylinderKitSchema, ReadingsSchema, StudyLimitsSchema } from "@/geometry";
 import type { AssembledStudy } from "@/model/study-assembly";
 
 // Rows of the library & studies API, as the contract in DEVELOPERS.md gives them.
@@ -61,7 +61,7 @@ export type RowOf<K extends LibraryKind> = K extends "cases" ? CaseRow : K exten
 export type StudyDetail = { item: StudyRow; study: AssembledStudy };
 export type HistoryEntry = { at: string; by: Person; summary: string };
 
-export type ShopSettings = { settings: { units: "mm" | "in"; limits: Limits; defaulted: string[] }; version: number };
+export type { ShopSettings } from "@/model/schemas";
 
 export type CsvReportRow = { line: number; ok: boolean; errors?: Record<string, string>; name?: string };
 export type CsvReport = { rows: CsvReportRow[]; written: number };

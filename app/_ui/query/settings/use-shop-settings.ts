@@ -11,3 +11,8 @@ export const fetchShopSettings = () => getJson<ShopSettings>("/api/v1/settings")
 export function useShopSettings() {
   return useQuery({ queryKey: settingsKeys.shop(), queryFn: fetchShopSettings, staleTime: 5 * 60_000 });
 }
+
+/** The zone the shop's dates and times are shown in; UTC (named as such) until the settings have loaded. */
+export function useShopTimeZone(): string {
+  return useShopSettings().data?.settings.timeZone ?? "UTC";
+}

@@ -1,11 +1,14 @@
 "use client";
 
+import { dateTimeText } from "@/model/dates";
 import { errorText } from "../../../../_ui/query/fetch";
+import { useShopTimeZone } from "../../../../_ui/query/settings/use-shop-settings";
 import { useStudyHistory } from "../../../../_ui/query/studies/use-study";
 
 /** Who changed what, newest first. */
 export function HistoryPanel({ id }: { id: string }) {
   const history = useStudyHistory(id);
+  const zone = useShopTimeZone();
   const items = history.data?.items ?? [];
   return (
     <section className="card flex flex-col gap-2 p-4" aria-label="History">
@@ -17,7 +20,7 @@ export function HistoryPanel({ id }: { id: string }) {
           <li key={`${h.at}-${i}`} className="border-b border-rule pb-1 last:border-0">
             <span className="text-ink">{h.summary}</span>
             <span className="block text-xs text-ink-3">
-              {h.by.name} · {new Date(h.at).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" })}
+              {h.by.name} · {dateTimeText(h.at, zone)}
             </span>
           </li>
         ))}

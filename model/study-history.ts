@@ -1,7 +1,7 @@
-import "server-only";
 import type { CutPlan, Readings, StudyLimits } from "@/geometry";
 
-// Plain-words summaries of what one change to a study did, for the study's history.
+// Plain-words summaries of what one change to a study did, for the study's history. Pure: the data layer
+// writes them with each change, the tests read them directly.
 
 /** What a study looked like before or after a change, with the names of what it refers to. */
 export type StudySnapshot = {
