@@ -1,49 +1,21 @@
 import type { z } from "zod";
-import type { BoringRigSchema, CaseProfileSchema, CutPlanSchema, CylinderKitSchema, ReadingsSchema, StudyLimitsSchema } from "@/geometry";
+import type { CutPlanSchema, ReadingsSchema, StudyLimitsSchema } from "@/geometry";
+import type { CaseRow, KitRow, PersonSchema, RigRow, StudyRow } from "@/model/schemas";
 import type { AssembledStudy } from "@/model/study-assembly";
 
-// Rows of the library & studies API, as the contract in DEVELOPERS.md gives them.
+// The browser's names for the API's shapes. Every row type is the one the API's own schemas infer
+// (model/schemas); only what the browser adds (list parameters, the detail it caches) is written here.
 
-export type Person = { id: string; name: string };
+export type { CaseRow, KitRow, Page, Reading, RigRow, ShopSettings, StudyRow } from "@/model/schemas";
+export type { CaseData, KitData, RigData } from "@/model/schemas";
+export type { CsvImportResult as CsvReport, CsvImportRow as CsvReportRow, HistoryItem as HistoryEntry } from "@/model/schemas";
 
-export type RowBase = {
-  id: string;
-  name: string;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-  createdBy: Person;
-  archivedAt: string | null;
-};
-
-export type Reading = { valueMm: number; takenBy: Person; takenAt: string };
-
-export type CaseData = z.input<typeof CaseProfileSchema>;
-export type KitData = Omit<z.input<typeof CylinderKitSchema>, "id" | "name">;
-export type RigData = Omit<z.input<typeof BoringRigSchema>, "name">;
-
-export type CaseRow = RowBase & { notes: string; data: CaseData; mouthReadingsMm: Reading[] };
-export type KitRow = RowBase & { notes: string; data: KitData; readings: { skirtDiameter: Reading[]; skirtLength: Reading[] } };
-export type RigRow = RowBase & { notes: string; data: RigData };
+export type Person = z.infer<typeof PersonSchema>;
+export type RowBase = Pick<CaseRow, "id" | "name" | "version" | "createdAt" | "updatedAt" | "createdBy" | "archivedAt">;
 
 export type CutPlanInput = z.input<typeof CutPlanSchema>;
 export type ReadingsInput = z.input<typeof ReadingsSchema>;
 export type StudyLimitsInput = z.input<typeof StudyLimitsSchema>;
-
-export type StudyRow = RowBase & {
-  caseId: string;
-  /** The case profile's name, for lists. */
-  caseName?: string;
-  kitIds: string[];
-  rigId: string | null;
-  cut: CutPlanInput | null;
-  readings: ReadingsInput | null;
-  limits: StudyLimitsInput | null;
-  chosenKitId: string | null;
-  notes: string;
-};
-
-export type Page<T> = { items: T[]; page: number; pageSize: number; total: number };
 
 export type ListParams = {
   page: number;
@@ -59,9 +31,3 @@ export type RowOf<K extends LibraryKind> = K extends "cases" ? CaseRow : K exten
 
 /** A study's row and the Study the server assembled from its rows (unchecked while the study is incomplete). */
 export type StudyDetail = { item: StudyRow; study: AssembledStudy };
-export type HistoryEntry = { at: string; by: Person; summary: string };
-
-export type { ShopSettings } from "@/model/schemas";
-
-export type CsvReportRow = { line: number; ok: boolean; errors?: Record<string, string>; name?: string };
-export type CsvReport = { rows: CsvReportRow[]; written: number };
