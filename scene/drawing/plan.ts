@@ -2,14 +2,43 @@ import type { LengthUnits, Study, StudyResult, Vec2 } from "@/geometry";
 import { fitState, interferenceRegions } from "../fit";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { bounds, outlineRing } from "../outline";
-import { INK, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
+import { INK, type Attrs, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
 
 // Plan view at the deck, to scale (1 unit = 1 mm, y up as in the core's frame), drawn from the core's result.
 
 export const STATE_COLOR = { interfere: INK.interfere, tight: INK.tight, clear: INK.clear } as const;
 
-const flip = (p: Vec2): Vec2 => [p[0], -p[1]];
-const path = (ring: readonly Vec2[]) => ringPath(ring.map(flip));
+/** The core's frame (y up) to the drawing's (y down). */
+export const flip = (p: Vec2): Vec2 => [p[0], -p[1]];
+/** A closed path through points in the core's frame. */
+export const path = (ring: readonly Vec2[]) => ringPath(ring.map(flip));
+
+// The layers of the case at the deck. The study's plan and the library forms' live drawing both draw
+// them, so a case looks the same wherever it is shown; `a` adds attributes (a colour, a data key).
+
+/** The deck face, filled. */
+export function deckLayer(ring: readonly Vec2[], a: Attrs = {}): string {
+  return el("path", { d: path(ring), fill: INK.paper2, stroke: INK.ink, "stroke-width": 0.4, ...a });
+}
+
+/** A pocket or passage; dashed when it starts below the deck. */
+export function pocketLayer(ring: readonly Vec2[], startDepthMm: number, a: Attrs = {}): string {
+  return el("path", { d: path(ring), fill: INK.paper, stroke: INK.ink2, "stroke-width": 0.25, "stroke-dasharray": startDepthMm > 0 ? "1.2 0.8" : undefined, ...a });
+}
+
+/** The mouth opening. */
+export function mouthLayer(ring: readonly Vec2[], a: Attrs = {}): string {
+  return el("path", { d: path(ring), fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3, ...a });
+}
+
+/** A stud hole with its centre cross. */
+export function studHoleLayer(positionMm: Vec2, radiusMm: number, a: Attrs = {}): string {
+  const [x, y] = flip(positionMm);
+  return (
+    el("circle", { cx: x, cy: y, r: radiusMm, fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3, ...a }) +
+    el("path", { d: `M${x - radiusMm - 1} ${y}H${x + radiusMm + 1}M${x} ${y - radiusMm - 1}V${y + radiusMm + 1}`, stroke: INK.ink3, "stroke-width": 0.15 })
+  );
+}
 
 /** Options of planDrawing. */
 export interface PlanOptions {
@@ -34,15 +63,10 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
   const body: string[] = [];
   const outerX = (right: boolean) => (right ? b.maxX + fs * 2 : b.minX - fs * 2);
 
-  body.push(el("path", { d: path(deck), fill: INK.paper2, stroke: INK.ink, "stroke-width": 0.4 }));
-  for (const p of cs.pockets) body.push(el("path", { d: path(outlineRing(p.outline)), fill: INK.paper, stroke: INK.ink2, "stroke-width": 0.25, "stroke-dasharray": p.startDepthMm > 0 ? "1.2 0.8" : undefined }));
-  body.push(el("path", { d: path(outlineRing(cs.mouth.outline)), fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3 }));
-  const hole = cs.studHoleDiameterMm / 2;
-  for (const s of cs.studs) {
-    const [x, y] = flip(s.positionMm);
-    body.push(el("circle", { cx: x, cy: y, r: hole, fill: INK.paper, stroke: INK.ink, "stroke-width": 0.3 }));
-    body.push(el("path", { d: `M${x - hole - 1} ${y}H${x + hole + 1}M${x} ${y - hole - 1}V${y + hole + 1}`, stroke: INK.ink3, "stroke-width": 0.15 }));
-  }
+  body.push(deckLayer(deck));
+  for (const p of cs.pockets) body.push(pocketLayer(outlineRing(p.outline), p.startDepthMm));
+  body.push(mouthLayer(outlineRing(cs.mouth.outline)));
+  for (const s of cs.studs) body.push(studHoleLayer(s.positionMm, cs.studHoleDiameterMm / 2));
   const band = interferenceRegions(study, k)[0];
   if (band && band.z0 === 0) for (const r of band.regions) body.push(el("path", { d: path(r.outer) + r.holes.map(path).join(""), fill: INK.interfere, "fill-opacity": 0.55, "fill-rule": "evenodd" }));
 

@@ -30,7 +30,7 @@ export function esc(s: string): string {
   return s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 }
 
-type Attrs = Record<string, string | number | undefined>;
+export type Attrs = Record<string, string | number | undefined>;
 
 function attrs(a: Attrs): string {
   return Object.entries(a)
@@ -96,10 +96,10 @@ export function leader(from: Vec2, to: Vec2, label: string, size: number, color:
   ].join("");
 }
 
-/** Wraps the body into a standalone SVG document whose size is in millimetres (prints to scale). */
-export function sheet(title: string, minX: number, minY: number, w: number, h: number, body: string): Drawing {
+/** Wraps the body into a standalone SVG document whose size is in millimetres (prints to scale); "group" for a drawing with controls in it. */
+export function sheet(title: string, minX: number, minY: number, w: number, h: number, body: string, role: "img" | "group" = "img"): Drawing {
   const svg =
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${n(w)}mm" height="${n(h)}mm" viewBox="${n(minX)} ${n(minY)} ${n(w)} ${n(h)}" role="img" aria-label="${esc(title)}">` +
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${n(w)}mm" height="${n(h)}mm" viewBox="${n(minX)} ${n(minY)} ${n(w)} ${n(h)}" role="${role}" aria-label="${esc(title)}">` +
     `<title>${esc(title)}</title>${DEFS}${el("rect", { x: minX, y: minY, width: w, height: h, fill: "#ffffff" })}${body}</svg>`;
   return { title, widthMm: w, heightMm: h, svg };
 }

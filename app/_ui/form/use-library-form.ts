@@ -14,6 +14,9 @@ import { convertLengthTexts, type UnitSwitchMemory } from "./units-text";
 
 type Notice = { tone: "error" | "ok"; text: string } | null;
 
+/** Values a form keeps outside react-hook-form, and what they must do when the form switches units or saves. */
+export type OutsideValues<FV> = { merge: (values: FV) => FV; switchUnits: (to: LengthUnits) => void; saved: () => void };
+
 /**
  * The common machinery of a library form: texts kept as typed, validated on every change by the core's
  * schema, units switchable without losing anything, and a save whose refusal leaves every field as it was.
@@ -30,13 +33,16 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   toBody: (core: z.output<S>, values: FV, units: LengthUnits) => Record<string, unknown>;
   /** Server field paths (e.g. "data.boreMm") to form paths. */
   fieldPath?: (serverPath: string) => string;
+  /** Fields kept outside react-hook-form (the shapes in their own store): merged into the values that are validated and saved. */
+  outside?: OutsideValues<FV>;
 }) {
   const router = useRouter();
   const [units, setUnitsState] = useState<LengthUnits>(opts.initialUnits);
   const [notice, setNotice] = useState<Notice>(null);
   const [version, setVersion] = useState(opts.version);
   const save = useSaveLibraryRow(opts.kind, opts.id);
-  const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, opts.toCore));
+  const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, (v, read) => opts.toCore(opts.outside ? opts.outside.merge(v) : v, read)));
+  const all = () => (opts.outside ? opts.outside.merge(form.getValues()) : form.getValues());
   // Remembers the texts each unit switch replaced, so that switching back restores them as typed.
   const [unitMemory] = useState<UnitSwitchMemory>(() => new Map());
   const [defaults] = useState(() => convertLengthTexts(opts.defaults, "mm", opts.initialUnits, unitMemory));
@@ -47,9 +53,9 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
    * back exactly as it was stored (a kept reading keeps who took it and when).
    */
   const inMm = (core: z.output<S>): { core: z.output<S>; values: FV; units: LengthUnits } => {
-    const asTyped = { core, values: form.getValues(), units };
+    const asTyped = { core, values: all(), units };
     if (units === "mm") return asTyped;
-    const values = convertLengthTexts(form.getValues(), units, "mm", new Map(unitMemory));
+    const values = convertLengthTexts(all(), units, "mm", new Map(unitMemory));
     const read = new FormReader("mm");
     const parsed = opts.schema.safeParse(opts.toCore(values, read));
     return read.issues.length === 0 && parsed.success ? { core: parsed.data as z.output<S>, values, units: "mm" } : asTyped;
@@ -58,6 +64,7 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   const setUnits = (next: LengthUnits) => {
     const values = form.getValues();
     setUnitsState(next);
+    opts.outside?.switchUnits(next);
     form.reset(convertLengthTexts(values, units, next, unitMemory), { keepDefaultValues: true, keepDirty: true, keepTouched: true });
     // The context (units) reaches the resolver on the next render; validate after it.
     setTimeout(() => void form.trigger(), 0);
@@ -72,6 +79,7 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
         const row = await save.mutateAsync(opts.id ? { ...body, version } : body);
         setVersion(row.version);
         form.reset(form.getValues());
+        opts.outside?.saved();
         if (!opts.id) router.push(`/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
         else setNotice({ tone: "ok", text: `Saved “${row.name}”.` });
       } catch (error) {

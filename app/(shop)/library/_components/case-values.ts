@@ -1,9 +1,11 @@
 import type { LengthUnits } from "@/geometry";
+import type { Capture } from "@/geometry/shapes";
 import type { CaseRow } from "../../../_ui/query/types";
 import type { FormReader } from "@/app/_ui/form/form-reader";
 import { lengthText, numberText } from "@/app/_ui/form/number-text";
 import { outlineText, readOutline, readStuds, studsText } from "@/app/_ui/form/read-shapes";
 import { emptyOutline, type OutlineText, type StudText } from "@/app/_ui/form/text-values";
+import type { ShapeDoc } from "./shapes/shape-store";
 
 export type CaseFormValues = {
   name: string;
@@ -20,7 +22,29 @@ export type CaseFormValues = {
   strokeMm: string;
   cylinders: string;
   densityGPerCm3: string;
+  /** The measurements the shapes were drawn from (kept in the shape store, saved with the data). */
+  capture?: Capture;
 };
+
+/** The shape fields, which the shape store keeps; the rest of the values live in react-hook-form. */
+const SHAPE_KEYS = ["deck", "studs", "pockets", "capture"] as const;
+
+/** The case's shapes as the store's first doc (lengths in mm). */
+export function caseDoc(v: CaseFormValues, row: CaseRow | null): ShapeDoc {
+  return { deck: v.deck, mouth: v.mouth.outline, studs: v.studs, pockets: v.pockets, capture: row?.data.capture ?? {} };
+}
+
+/** The values react-hook-form keeps: everything but the shapes. */
+export function caseFieldDefaults(v: CaseFormValues): Partial<CaseFormValues> {
+  const out: Partial<CaseFormValues> = { ...v, mouth: { depthMm: v.mouth.depthMm } as CaseFormValues["mouth"] };
+  for (const k of SHAPE_KEYS) delete out[k];
+  return out;
+}
+
+/** The form's values with the shapes from the store: what is validated and saved. */
+export function mergeCase(v: CaseFormValues, doc: ShapeDoc): CaseFormValues {
+  return { ...v, deck: doc.deck ?? emptyOutline(), mouth: { ...v.mouth, outline: doc.mouth ?? emptyOutline() }, studs: doc.studs, pockets: doc.pockets, capture: doc.capture };
+}
 
 export function caseDefaults(row: CaseRow | null, units: LengthUnits): CaseFormValues {
   const d = row?.data;
@@ -70,5 +94,6 @@ export function caseToCore(v: CaseFormValues, read: FormReader): unknown {
     strokeMm: read.length(v.strokeMm, ["strokeMm"]),
     cylinders: read.number(v.cylinders, ["cylinders"]) ?? 1,
     densityGPerCm3: read.number(v.densityGPerCm3, ["densityGPerCm3"]),
+    ...(v.capture && Object.keys(v.capture).length ? { capture: v.capture } : {}),
   };
 }

@@ -1,0 +1,171 @@
+import type { LengthUnits, Vec2 } from "@/geometry";
+import type { ShapeIssue, ShapeOutline } from "@/geometry/shapes";
+import { diameterLabel, lengthLabel } from "@/model/units";
+import { bounds, outlineRing } from "../outline";
+import { deckLayer, flip, mouthLayer, pocketLayer, studHoleLayer } from "./plan";
+import { INK, el, hdim, n, sheet, text, vdim, type Drawing } from "./svg";
+
+// The plan at the deck of a profile being entered: the same layers as the study's plan, with a handle
+// on every corner, stud and circle edge, named by data-key so the form can find what was touched.
+// Keys: a shape is "deck", "mouth", "pockets.1", "studs.2"; a corner "deck:3"; a circle's edge
+// "mouth:edge"; the edge after corner 3 "deck~3".
+
+/** The drawing's viewBox, in drawing coordinates (y down). */
+export type Frame = { minX: number; minY: number; maxX: number; maxY: number };
+
+/** The shapes as far as they can be read; what cannot be read yet is null and left out. */
+export interface EditShapes {
+  deck: ShapeOutline | null;
+  mouth: ShapeOutline | null;
+  studs: readonly ({ label: string; positionMm: [number, number] } | null)[];
+  studHoleDiameterMm: number | null;
+  pockets: readonly { label: string; outline: ShapeOutline | null; startDepthMm: number }[];
+}
+
+export interface EditOptions {
+  units: LengthUnits;
+  /** The key under the pointer or in a focused field. */
+  highlight?: string | null;
+  /** The point picked for the arrow keys. */
+  selected?: string | null;
+  issues?: readonly ShapeIssue[];
+  /** Keeps the view still (during a drag); computed from the shapes when absent. */
+  frame?: Frame | null;
+  /** What the shapes are called ("deck", "mouth", "passage", …): the kit's gasket names them differently. */
+  words?: { deck: string; mouth: string; pocket: string };
+  title?: string;
+  /** Circles whose diameter is not dragged (a mouth whose diameter comes from its readings). */
+  fixedCircles?: readonly string[];
+  /** Studs drawn without handles (a kit's studs, entered in their own list). */
+  fixedStuds?: boolean;
+}
+
+const WORDS = { deck: "deck", mouth: "mouth", pocket: "passage" };
+
+/** Whether `key` is the shape `shape` or one of its points. */
+const within = (key: string | null | undefined, shape: string) => !!key && (key === shape || key.startsWith(`${shape}:`) || key.startsWith(`${shape}~`));
+
+/** The frame that shows every shape with room for the dimensions around it. */
+export function frameOf(s: EditShapes): Frame {
+  const rings: Vec2[][] = [];
+  if (s.deck) rings.push(outlineRing(s.deck));
+  if (s.mouth) rings.push(outlineRing(s.mouth));
+  for (const p of s.pockets) if (p.outline) rings.push(outlineRing(p.outline));
+  const studs = s.studs.filter((x) => x !== null).map((x) => x.positionMm);
+  if (studs.length) rings.push(studs);
+  const b = rings.length ? bounds(rings) : { minX: -50, minY: -50, maxX: 50, maxY: 50 };
+  const size = Math.max(40, b.maxX - b.minX, b.maxY - b.minY);
+  const m = size * 0.18;
+  return { minX: Math.min(b.minX, 0) - m, maxX: Math.max(b.maxX, 0) + m * 1.6, minY: -Math.max(b.maxY, 0) - m, maxY: -Math.min(b.minY, 0) + m };
+}
+
+/** The editable plan of a profile's shapes, with its frame. */
+export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: Frame } {
+  const f = o.frame ?? frameOf(s);
+  const w = f.maxX - f.minX, h = f.maxY - f.minY;
+  const fs = Math.max(2.2, Math.min(w, h) / 40);
+  const hr = Math.max(0.8, Math.min(w, h) / 110);
+  const words = o.words ?? WORDS;
+  const bad = new Map<string, string>();
+  for (const i of o.issues ?? []) if (!bad.has(i.at)) bad.set(i.at, i.message);
+  const mark = (key: string) => (bad.has(key) ? { stroke: INK.interfere, "stroke-width": 0.6 } : within(o.highlight, key) ? { stroke: INK.accent, "stroke-width": 0.6 } : {});
+  const body: string[] = [];
+  const handles: string[] = [];
+  const notes: string[] = [];
+
+  // Origin and axes (the cylinder axis at the deck; x right, y up).
+  body.push(el("path", { d: `M${n(f.minX)} 0H${n(f.maxX)}M0 ${n(f.minY)}V${n(f.maxY)}`, stroke: INK.ink3, "stroke-width": 0.15, "stroke-dasharray": "3 1.5" }));
+  body.push(text(f.maxX - fs * 0.6, -fs * 0.4, "x", fs, { "text-anchor": "end", fill: INK.ink2 }));
+  body.push(text(fs * 0.4, f.minY + fs * 1.2, "y", fs, { fill: INK.ink2 }));
+
+  const note = (key: string, at: Vec2) => {
+    const msg = bad.get(key);
+    if (msg) notes.push(text(at[0], at[1], msg, fs * 0.85, { fill: INK.interfere, "data-issue": key }));
+  };
+  const point = (key: string, kind: string, at: Vec2, label: string) => {
+    const [x, y] = flip(at);
+    const on = o.highlight === key || o.selected === key;
+    handles.push(
+      el("circle", {
+        cx: x,
+        cy: y,
+        r: on ? hr * 1.4 : hr,
+        fill: on ? INK.accent : "#ffffff",
+        stroke: bad.has(key.split(":")[0]) ? INK.interfere : INK.accent,
+        "stroke-width": hr * 0.35,
+        tabindex: 0,
+        role: "button",
+        "aria-roledescription": "movable point",
+        "aria-label": `${label}: x ${lengthLabel(at[0], o.units)}, y ${lengthLabel(at[1], o.units)}`,
+        "aria-pressed": o.selected === key ? "true" : undefined,
+        "data-key": key,
+        "data-kind": kind,
+        "data-x-mm": n(at[0]),
+        "data-y-mm": n(at[1]),
+        style: "cursor:grab",
+      }),
+    );
+  };
+  const outlineHandles = (key: string, word: string, out: ShapeOutline) => {
+    if (out.kind === "circle") {
+      if (o.fixedCircles?.includes(key)) return;
+      const c = out.centerMm ?? [0, 0];
+      point(`${key}:edge`, "radius", [c[0] + out.diameterMm / 2, c[1]], `${word} edge (diameter ${diameterLabel(out.diameterMm, o.units)})`);
+      return;
+    }
+    const pts = out.pointsMm;
+    pts.forEach((p, i) => {
+      const q = pts[(i + 1) % pts.length];
+      const [x1, y1] = flip(p), [x2, y2] = flip(q);
+      handles.unshift(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge", style: "cursor:copy" }));
+      point(`${key}:${i}`, "corner", p, `${word} corner ${i + 1}`);
+    });
+  };
+  const topRight = (out: ShapeOutline): Vec2 => {
+    const b = bounds([outlineRing(out)]);
+    return [b.maxX + fs * 0.5, -b.maxY - fs * 0.4];
+  };
+
+  if (s.deck) {
+    const ring = outlineRing(s.deck);
+    body.push(deckLayer(ring, { "data-key": "deck", ...mark("deck") }));
+    outlineHandles("deck", words.deck, s.deck);
+    note("deck", topRight(s.deck));
+    const b = bounds([ring]);
+    body.push(hdim(b.minX, b.maxX, -b.maxY - fs * 2.2, -b.maxY, -b.maxY, lengthLabel(b.maxX - b.minX, o.units), fs * 0.9));
+    body.push(vdim(b.maxX + fs * 2.2, -b.maxY, -b.minY, b.maxX, lengthLabel(b.maxY - b.minY, o.units), fs * 0.9));
+  }
+  s.pockets.forEach((p, i) => {
+    if (!p.outline) return;
+    const key = `pockets.${i}`;
+    body.push(pocketLayer(outlineRing(p.outline), p.startDepthMm, { "data-key": key, ...mark(key) }));
+    outlineHandles(key, `${words.pocket} ${i + 1}`, p.outline);
+    const b = bounds([outlineRing(p.outline)]);
+    body.push(text((b.minX + b.maxX) / 2, -(b.minY + b.maxY) / 2 + fs * 0.3, p.label || `${words.pocket} ${i + 1}`, fs * 0.75, { "text-anchor": "middle", fill: INK.ink2 }));
+    note(key, topRight(p.outline));
+  });
+  if (s.mouth) {
+    body.push(mouthLayer(outlineRing(s.mouth), { "data-key": "mouth", ...mark("mouth") }));
+    outlineHandles("mouth", words.mouth, s.mouth);
+    if (s.mouth.kind === "circle") body.push(text(s.mouth.centerMm?.[0] ?? 0, -(s.mouth.centerMm?.[1] ?? 0) + s.mouth.diameterMm / 4, `${words.mouth} ${diameterLabel(s.mouth.diameterMm, o.units)}`, fs * 0.85, { "text-anchor": "middle", fill: INK.ink2 }));
+    note("mouth", topRight(s.mouth));
+  }
+  const hole = (s.studHoleDiameterMm ?? 0) > 0 ? (s.studHoleDiameterMm as number) / 2 : hr * 2;
+  const studs = s.studs.map((st, i) => [st, i] as const).filter((x): x is readonly [{ label: string; positionMm: [number, number] }, number] => x[0] !== null);
+  for (const [st, i] of studs) {
+    const key = `studs.${i}`;
+    body.push(studHoleLayer(st.positionMm, hole, { "data-key": key, ...mark(key) }));
+    body.push(text(st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] - hole - fs * 0.2, st.label || `stud ${i + 1}`, fs * 0.8, { fill: bad.has(key) ? INK.interfere : INK.ink2 }));
+    if (!o.fixedStuds) point(key, "stud", st.positionMm, `stud ${st.label || i + 1}`);
+    note(key, [st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] + hole + fs]);
+  }
+  if (studs.length > 1) {
+    const xs = studs.map(([st]) => st.positionMm[0]), ys = studs.map(([st]) => st.positionMm[1]);
+    const x0 = Math.min(...xs), x1 = Math.max(...xs), y0 = Math.min(...ys), y1 = Math.max(...ys);
+    if (x1 - x0 > 1) body.push(hdim(x0, x1, -y0 + fs * 2.4, -y0, -y0, `studs ${lengthLabel(x1 - x0, o.units)}`, fs * 0.85, INK.ink2));
+    if (y1 - y0 > 1) body.push(vdim(x0 - fs * 2.4, -y1, -y0, x0, lengthLabel(y1 - y0, o.units), fs * 0.85, INK.ink2));
+  }
+  body.push(el("circle", { cx: 0, cy: 0, r: hr * 0.6, fill: INK.ink2 }));
+  const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, w, h, body.join("") + handles.join("") + notes.join(""), "group");
+  return { ...d, frame: f };
+}
