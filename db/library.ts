@@ -2,10 +2,25 @@ import "server-only";
 import { and, asc, count, desc, eq, inArray, isNotNull, isNull, sql, type SQL } from "drizzle-orm";
 import type { SQLiteColumn } from "drizzle-orm/sqlite-core";
 import { z } from "zod";
-import type { CaseCreate, CaseData, CasePatch, CaseRow, KitCreate, KitData, KitPatch, KitRow, ListQuery, Page, RigCreate, RigData, RigPatch, RigRow } from "@/model/schemas";
+import {
+  CaseDataSchema,
+  KitDataSchema,
+  RigDataSchema,
+  type CaseCreate,
+  type CasePatch,
+  type CaseRow,
+  type KitCreate,
+  type KitPatch,
+  type KitRow,
+  type ListQuery,
+  type Page,
+  type RigCreate,
+  type RigPatch,
+  type RigRow,
+} from "@/model/schemas";
 import type { Caller } from "./access";
 import { getDb } from "./client";
-import { StoredReadingSchema, assertStaff, iso, notFound, parseStoredReadings, readColumn, readingOut, type StoredReading } from "./rows";
+import { StoredReadingSchema, assertStaff, iso, notFound, parseStoredReadings, readColumn, readingOut, storedData, type StoredReading } from "./rows";
 import * as schema from "./schema";
 
 // The shop's library: case profiles, cylinder kits and boring rigs. Every function takes the caller,
@@ -47,22 +62,22 @@ function base(r: AnyRecord, creatorName: string) {
 
 /** A stored row as the API shows it. */
 export function toRow<K extends LibraryKind>(kind: K, r: AnyRecord, creatorName: string): LibraryRow[K] {
-  const data = JSON.parse(r.dataJson) as Record<string, unknown>;
   if (kind === "cases") {
     const c = r as schema.CaseProfileRow;
-    const row: CaseRow = { ...base(r, creatorName), data: { ...(data as CaseData), name: r.name }, mouthReadingsMm: parseStoredReadings(c.mouthReadingsJson).map(readingOut) };
+    const data = storedData(CaseDataSchema, r.dataJson, "a case profile");
+    const row: CaseRow = { ...base(r, creatorName), data: { ...data, name: r.name }, mouthReadingsMm: parseStoredReadings(c.mouthReadingsJson).map(readingOut) };
     return row as LibraryRow[K];
   }
   if (kind === "kits") {
     const readings = parseKitReadings((r as schema.CylinderKitRow).readingsJson);
     const row: KitRow = {
       ...base(r, creatorName),
-      data: data as KitData,
+      data: storedData(KitDataSchema, r.dataJson, "a cylinder kit"),
       readings: { skirtDiameter: readings.skirtDiameter.map(readingOut), skirtLength: readings.skirtLength.map(readingOut) },
     };
     return row as LibraryRow[K];
   }
-  const row: RigRow = { ...base(r, creatorName), data: data as RigData };
+  const row: RigRow = { ...base(r, creatorName), data: storedData(RigDataSchema, r.dataJson, "a boring rig") };
   return row as LibraryRow[K];
 }
 
