@@ -13,10 +13,10 @@ import type { CardDrawing, CardVerdict, SetupCard } from "./setup-card";
 // function name (a name a minifying bundler may rename).
 const nodeRequire = createRequire(join(process.cwd(), "package.json"));
 
-/** The TrueType files embedded in the card, relative to the project. */
+/** The TrueType files embedded in the card (each path written out, so the build traces only these files). */
 export const FONT_FILES = {
-  body: "node_modules/@expo-google-fonts/inter/400Regular/Inter_400Regular.ttf",
-  numbers: "node_modules/@expo-google-fonts/source-code-pro/400Regular/SourceCodePro_400Regular.ttf",
+  body: join(process.cwd(), "node_modules", "@expo-google-fonts", "inter", "400Regular", "Inter_400Regular.ttf"),
+  numbers: join(process.cwd(), "node_modules", "@expo-google-fonts", "source-code-pro", "400Regular", "SourceCodePro_400Regular.ttf"),
 } as const;
 
 const INK = "#2b2f33";
@@ -39,8 +39,8 @@ export async function setupCardPdf(card: SetupCard, drawings: readonly CardDrawi
   const PDFDocument = nodeRequire("pdfkit") as typeof import("pdfkit");
   const SVGtoPDF = nodeRequire("svg-to-pdfkit") as Svg2Pdf;
   const doc = new PDFDocument({ size: "A4", margin: MARGIN, info: { Title: card.title, Author: card.shopName, Subject: "Bench setup card", Creator: "Borewright" } });
-  doc.registerFont("body", join(process.cwd(), FONT_FILES.body));
-  doc.registerFont("num", join(process.cwd(), FONT_FILES.numbers));
+  doc.registerFont("body", FONT_FILES.body);
+  doc.registerFont("num", FONT_FILES.numbers);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
   const done = new Promise<Buffer>((resolve, reject) => {
