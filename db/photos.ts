@@ -129,7 +129,10 @@ export async function completeUpload(caller: Caller, jobId: string, photoId: str
   else if (sniffed !== p.contentType) reason = `The file is a ${sniffed.slice(6).toUpperCase()} image but was declared as ${p.contentType.slice(6).toUpperCase()}; choose the file again.`;
   const db = await getDb();
   if (reason) {
-    await deleteObject(p.objectKey).catch(() => undefined);
+    await deleteObject(p.objectKey).catch((error: unknown) => {
+      // The row is marked refused below and never points at the file again, so a file left behind is only litter.
+      console.warn("photo refused: its file could not be deleted from the object store; the refusal stands.", error);
+    });
     await db.update(jobs.jobPhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
     throw new DataError("photo_refused", reason);
   }

@@ -84,8 +84,9 @@ export function parsePlan(r: jobs.JobRecord): PlanSnapshot | null {
   if (!r.planJson) return null;
   try {
     return JSON.parse(r.planJson) as PlanSnapshot;
-  } catch {
+  } catch (error) {
     // A plan that no longer parses is shown as no plan; the job can be planned again.
+    console.warn(`job ${r.id}: its stored plan does not parse; the job shows as not planned.`, error);
     return null;
   }
 }

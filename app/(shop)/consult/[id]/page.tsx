@@ -30,7 +30,11 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
     throw error;
   });
   const { job, plan, readings } = detail;
-  const photos = await listPhotos(caller, id).catch(() => null);
+  const photos = await listPhotos(caller, id).catch((error: unknown) => {
+    // The photos are an aside of the consult page: without the object store the rest of the job still shows.
+    console.warn("consult page: the job's photos could not be listed; the page shows without them.", error);
+    return null;
+  });
   const L = (mm: number) => formatLength(mm, caller.units);
   const chosen = plan?.result.kits.find((k) => k.kitId === plan.kitId);
   const priceOf = (kitId: string) => plan?.study.kits.find((k) => k.id === kitId)?.price;

@@ -25,7 +25,11 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
     throw error;
   });
   const { job, plan, readings } = detail;
-  const photos = await listPhotos(caller, id).catch(() => null);
+  const photos = await listPhotos(caller, id).catch((error: unknown) => {
+    // The photos are an aside of the job page: without the object store the rest of the job still shows.
+    console.warn("job page: the job's photos could not be listed; the page shows without them.", error);
+    return null;
+  });
   const kit = plan ? plan.result.kits.find((k) => k.kitId === plan.kitId) : undefined;
   const L = (mm: number) => formatLength(mm, caller.units);
   return (
