@@ -1,10 +1,12 @@
 import Flatten from "@flatten-js/core";
+import { DegenerateGeometryError } from "./errors";
 import { signedArea } from "./polygon";
 import type { Vec2 } from "./vec";
 
-// Thin adapter over @flatten-js/core. Its shapes are mutable; ours are plain readonly arrays. Flatten
-// polygons built here are cached per points array (a WeakMap on the readonly input, so the cache never
-// outlives the study) and are never handed out, so nothing can mutate them in place.
+// Thin adapter over @flatten-js/core, the independent cross-check of the core's own polygon measures
+// (polygon.ts); the evaluation itself calls none of it. Its shapes are mutable; ours are plain readonly
+// arrays. Flatten polygons built here are cached per points array (a WeakMap on the readonly input) and
+// never handed out, so nothing can mutate them in place. A failure of the library is a coded GeometryError.
 
 const polygonCache = new WeakMap<readonly Vec2[], Flatten.Polygon>();
 
@@ -20,24 +22,20 @@ function toFlattenPolygon(points: readonly Vec2[]): Flatten.Polygon {
   return poly;
 }
 
-/** Distance from a point to a polygon's boundary, the nearest boundary point, and whether the point is inside. */
-export interface BoundaryDistance {
-  readonly distanceMm: number;
-  readonly nearestMm: Vec2;
-  readonly inside: boolean;
-}
-
-/** Distance from p to the polygon boundary (flatten-js Point.distanceTo) and containment. */
-export function pointToPolygonBoundary(p: Vec2, points: readonly Vec2[]): BoundaryDistance {
+/** Distance from p to the polygon boundary (flatten-js Point.distanceTo), the nearest boundary point, and containment. */
+export function flattenPointToPolygonBoundary(p: Vec2, points: readonly Vec2[]): { distanceMm: number; nearestMm: Vec2; inside: boolean } {
   const poly = toFlattenPolygon(points);
   const pt = new Flatten.Point(p[0], p[1]);
   const [best, seg] = pt.distanceTo(poly);
-  const nearest: Vec2 = [seg.end.x, seg.end.y];
-  return { distanceMm: best, nearestMm: nearest, inside: poly.contains(pt) };
+  return { distanceMm: best, nearestMm: [seg.end.x, seg.end.y], inside: poly.contains(pt) };
 }
 
-/** Area of the intersection of a disk and a polygon, by flatten-js BooleanOperations.intersect on the exact circle (an arc face). */
-export function diskPolygonIntersectionArea(center: Vec2, radiusMm: number, points: readonly Vec2[]): number {
+/** Area of disk ∩ polygon by flatten-js BooleanOperations.intersect on the exact circle (an arc face); a library failure throws DegenerateGeometryError. */
+export function flattenDiskPolygonArea(center: Vec2, radiusMm: number, points: readonly Vec2[]): number {
   const disk = new Flatten.Polygon(new Flatten.Circle(new Flatten.Point(center[0], center[1]), radiusMm));
-  return Flatten.BooleanOperations.intersect(disk, toFlattenPolygon(points)).area();
+  try {
+    return Flatten.BooleanOperations.intersect(disk, toFlattenPolygon(points)).area();
+  } catch (cause) {
+    throw new DegenerateGeometryError(`the disk ∩ polygon boolean failed (${cause instanceof Error ? cause.message : String(cause)})`);
+  }
 }

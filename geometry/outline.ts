@@ -1,6 +1,5 @@
-import { diskPolygonIntersectionArea, pointToPolygonBoundary } from "./flatten-adapter";
 import { lensArea } from "./lens";
-import { polygonInsideDisk, signedArea } from "./polygon";
+import { diskPolygonArea, pointToPolygonBoundary, polygonInsideDisk, signedArea } from "./polygon";
 import type { Outline } from "./schema";
 import { ORIGIN, type Vec2, add, distance, scale, sub, unit } from "./vec";
 
@@ -17,7 +16,7 @@ export interface BoundaryRelation {
   readonly nearestMm: Vec2;
 }
 
-/** Signed distance from p to an outline's boundary: circle R − |p − c| analytically, polygon through flatten-js. */
+/** Signed distance from p to an outline's boundary: circle R − |p − c|, polygon ± the least distance to an edge (+ inside). */
 export function boundaryRelation(p: Vec2, outline: Outline, toleranceMm: number): BoundaryRelation {
   if (outline.kind === "circle") {
     const c = circleCenter(outline);
@@ -25,7 +24,7 @@ export function boundaryRelation(p: Vec2, outline: Outline, toleranceMm: number)
     const u = unit(sub(p, c), toleranceMm);
     return { signedDistanceMm: R - distance(p, c), nearestMm: add(c, scale(u, R)) };
   }
-  const b = pointToPolygonBoundary(p, outline.pointsMm);
+  const b = pointToPolygonBoundary(p, outline.pointsMm, toleranceMm);
   return { signedDistanceMm: b.inside ? b.distanceMm : -b.distanceMm, nearestMm: b.nearestMm };
 }
 
@@ -34,12 +33,12 @@ export function outlineArea(outline: Outline): number {
   return outline.kind === "circle" ? (Math.PI * outline.diameterMm ** 2) / 4 : Math.abs(signedArea(outline.pointsMm));
 }
 
-/** Area of a disk (centre c, radius r) inside an outline: the circle–circle lens, or the disk ∩ polygon area (flatten-js boolean, skipped when containment decides it). */
+/** Area of a disk (centre c, radius r) inside an outline: the circle–circle lens, or the exact disk ∩ polygon area (diskPolygonArea; containment decides the plain cases). */
 export function diskInsideArea(c: Vec2, r: number, outline: Outline, toleranceMm: number): number {
   if (outline.kind === "circle") return lensArea(r, outline.diameterMm / 2, distance(c, circleCenter(outline)));
   const rel = boundaryRelation(c, outline, toleranceMm);
   if (rel.signedDistanceMm >= r - toleranceMm) return Math.PI * r * r;
   if (rel.signedDistanceMm <= -r + toleranceMm) return 0;
   if (polygonInsideDisk(outline.pointsMm, c, r, toleranceMm)) return Math.abs(signedArea(outline.pointsMm));
-  return diskPolygonIntersectionArea(c, r, outline.pointsMm);
+  return diskPolygonArea(c, r, outline.pointsMm);
 }

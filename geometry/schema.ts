@@ -2,7 +2,7 @@ import { z } from "zod";
 import {
   DEFAULT_LIMITS,
 } from "./limits";
-import { selfIntersections, signedArea } from "./polygon";
+import { describePolygonProblem, polygonProblem } from "./simplicity";
 import { CaptureSchema } from "./shapes";
 
 // Input schemas of the core. Every length is in millimetres and says so in its name.
@@ -29,19 +29,31 @@ export const CircleOutlineSchema = z.strictObject({
   centerMm: Vec2Schema.optional(),
 });
 
+// Corners an outline may have: a traced or imported outline needs a few hundred. The totals bound the cost of a
+// study: validation is O(n log n) per outline (polygonProblem) and evaluation O(n) per outline and kit.
+/** Most corners of one polygon outline. */
+export const MAX_OUTLINE_CORNERS = 2000;
+/** Most corners of a case's outlines together (deck, mouth and pockets). */
+export const MAX_CASE_CORNERS = 6000;
+/** Most corners of a study's outlines together (the case's and every kit's). */
+export const MAX_STUDY_CORNERS = 20_000;
+
+/** Number of corners of an outline (a circle has none). */
+export function outlineCorners(outline: { kind: string; pointsMm?: readonly unknown[] } | undefined): number {
+  return outline?.kind === "polygon" ? (outline.pointsMm?.length ?? 0) : 0;
+}
+
 export const PolygonOutlineSchema = z
   .strictObject({
     kind: z.literal("polygon"),
-    pointsMm: z.array(Vec2Schema).min(3, "a polygon needs at least 3 points").max(2000),
+    pointsMm: z
+      .array(Vec2Schema)
+      .min(3, "a polygon needs at least 3 points")
+      .max(MAX_OUTLINE_CORNERS, `a polygon has at most ${MAX_OUTLINE_CORNERS} corners`),
   })
   .superRefine((poly, ctx) => {
-    const crossings = selfIntersections(poly.pointsMm);
-    if (crossings.length > 0) {
-      const [i, j] = crossings[0];
-      ctx.addIssue({ code: "custom", path: ["pointsMm"], message: `polygon edges ${i} and ${j} cross; the outline must not intersect itself` });
-    } else if (Math.abs(signedArea(poly.pointsMm)) < 1e-6) {
-      ctx.addIssue({ code: "custom", path: ["pointsMm"], message: "polygon has no area (points are collinear or repeated)" });
-    }
+    const problem = polygonProblem(poly.pointsMm);
+    if (problem) ctx.addIssue({ code: "custom", path: ["pointsMm"], message: describePolygonProblem(problem, poly.pointsMm.length) });
   });
 
 /** A closed outline in the deck plane: a circle (analytic) or a simple polygon. */
@@ -112,6 +124,10 @@ export const CaseProfileSchema = z
     crank: CrankChamberSchema.optional(),
   })
   .superRefine((c, ctx) => {
+    const corners = outlineCorners(c.deck) + outlineCorners(c.mouth.outline) + c.pockets.reduce((n, p) => n + outlineCorners(p.outline), 0);
+    if (corners > MAX_CASE_CORNERS) {
+      ctx.addIssue({ code: "custom", path: [], message: `the deck, mouth and pockets have ${corners} corners together; at most ${MAX_CASE_CORNERS}` });
+    }
     const seen = new Set<string>();
     c.studs.forEach((s, i) => {
       if (seen.has(s.label)) ctx.addIssue({ code: "custom", path: ["studs", i, "label"], message: `duplicate stud label "${s.label}"` });
@@ -265,6 +281,12 @@ export const StudyLimitsSchema = z
   })
   .refine(speedOrder, speedOrderIssue);
 
+/** Corners of a kit's own outlines (its base gasket and port windows). */
+function kitCorners(kit: { baseGasket?: { outline?: { kind: string; pointsMm?: readonly unknown[] }; ports: readonly { outline: { kind: string; pointsMm?: readonly unknown[] } }[] } }): number {
+  const g = kit.baseGasket;
+  return g ? outlineCorners(g.outline) + g.ports.reduce((n, p) => n + outlineCorners(p.outline), 0) : 0;
+}
+
 /** A study: one case, one or more candidate kits, and optionally a cut plan, a rig, holder readings and limits. */
 export const StudySchema = z
   .strictObject({
@@ -277,6 +299,8 @@ export const StudySchema = z
     limits: StudyLimitsSchema.optional(),
   })
   .superRefine((study, ctx) => {
+    const corners = outlineCorners(study.case.deck) + outlineCorners(study.case.mouth.outline) + study.case.pockets.reduce((n, p) => n + outlineCorners(p.outline), 0) + study.kits.reduce((n, k) => n + kitCorners(k), 0);
+    if (corners > MAX_STUDY_CORNERS) ctx.addIssue({ code: "custom", path: [], message: `the study's outlines have ${corners} corners together; at most ${MAX_STUDY_CORNERS}` });
     const ids = new Set<string>();
     study.kits.forEach((k, i) => {
       if (ids.has(k.id)) ctx.addIssue({ code: "custom", path: ["kits", i, "id"], message: `duplicate kit id "${k.id}"` });

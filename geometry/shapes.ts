@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { selfIntersections, signedArea } from "./polygon";
+import { signedArea } from "./polygon";
+import { selfIntersections } from "./simplicity";
 import type { Vec2 } from "./vec";
 
 // Shapes from the measurements a person takes at the bench (a stud spacing read with calipers, a bolt

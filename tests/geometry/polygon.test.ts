@@ -1,0 +1,122 @@
+import fc from "fast-check";
+import { describe, expect, it } from "vitest";
+import { MAX_CASE_CORNERS, MAX_OUTLINE_CORNERS, OutlineSchema, StudySchema } from "../../geometry/schema";
+import { describePolygonProblem, polygonProblem } from "../../geometry/simplicity";
+import { roundStudyInput } from "./fixtures";
+
+type P = [number, number];
+
+// The reference: every pair of edges, in plain arithmetic. On small integer coordinates every product is exact,
+// so the reference is exact too, and the grid makes touches, overlaps and repeated corners common.
+const orient = (a: P, b: P, c: P) => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
+const onSegment = (a: P, b: P, p: P) => orient(a, b, p) === 0 && Math.min(a[0], b[0]) <= p[0] && p[0] <= Math.max(a[0], b[0]) && Math.min(a[1], b[1]) <= p[1] && p[1] <= Math.max(a[1], b[1]);
+function segmentsMeet(a: P, b: P, c: P, d: P): boolean {
+  const o1 = orient(a, b, c);
+  const o2 = orient(a, b, d);
+  const o3 = orient(c, d, a);
+  const o4 = orient(c, d, b);
+  if (Math.sign(o1) * Math.sign(o2) < 0 && Math.sign(o3) * Math.sign(o4) < 0) return true;
+  return onSegment(a, b, c) || onSegment(a, b, d) || onSegment(c, d, a) || onSegment(c, d, b);
+}
+function simpleByBruteForce(pts: P[]): boolean {
+  const n = pts.length;
+  const key = (p: P) => `${p[0]},${p[1]}`;
+  if (new Set(pts.map(key)).size !== n) return false;
+  let area = 0;
+  for (let i = 0; i < n; i++) area += pts[i][0] * pts[(i + 1) % n][1] - pts[(i + 1) % n][0] * pts[i][1];
+  if (Math.abs(area / 2) < 1e-6) return false;
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const [a, b, c, d] = [pts[i], pts[(i + 1) % n], pts[j], pts[(j + 1) % n]];
+      if (j === i + 1 || (i === 0 && j === n - 1)) {
+        // Adjacent edges share one corner and may meet nowhere else: the far end of one must not lie on the other.
+        const [shared, p, q] = j === i + 1 ? [b, a, d] : [a, b, c];
+        if (onSegment(shared, p, q) || onSegment(shared, q, p)) return false;
+      } else if (segmentsMeet(a, b, c, d)) {
+        return false;
+      }
+    }
+  }
+  return true;
+}
+
+const gridPolygonArb = fc.array(fc.tuple(fc.integer({ min: 0, max: 6 }), fc.integer({ min: 0, max: 6 })), { minLength: 3, maxLength: 12 }) as fc.Arbitrary<P[]>;
+
+/** A star-shaped polygon snapped to a coarse grid: often simple, sometimes made invalid by the snapping. */
+const snappedStarArb = fc
+  .record({ n: fc.integer({ min: 3, max: 30 }), radii: fc.array(fc.integer({ min: 2, max: 40 }), { minLength: 30, maxLength: 30 }), cw: fc.boolean() })
+  .map(({ n, radii, cw }) => {
+    const pts = Array.from({ length: n }, (_, i): P => [Math.round(radii[i] * Math.cos((2 * Math.PI * i) / n)), Math.round(radii[i] * Math.sin((2 * Math.PI * i) / n))]);
+    return cw ? pts.reverse() : pts;
+  });
+
+describe("polygon validity by sweep", () => {
+  it("agrees with the pairwise check on random polygons of a small grid (touches, overlaps and repeats included)", () => {
+    const seen = { valid: 0, invalid: 0 };
+    fc.assert(
+      fc.property(fc.oneof(gridPolygonArb, snappedStarArb), (pts) => {
+        const expected = simpleByBruteForce(pts);
+        const problem = polygonProblem(pts);
+        expect(problem === null).toBe(expected);
+        seen[expected ? "valid" : "invalid"]++;
+        // An edge pair it names really meets.
+        if (problem && (problem.kind === "edges-cross" || problem.kind === "edges-touch")) {
+          const [i, j] = problem.edges;
+          const n = pts.length;
+          expect(segmentsMeet(pts[i], pts[(i + 1) % n], pts[j], pts[(j + 1) % n])).toBe(true);
+        }
+      }),
+      { numRuns: 3000 },
+    );
+    expect(seen.valid).toBeGreaterThan(300);
+    expect(seen.invalid).toBeGreaterThan(300);
+  });
+
+  it("refuses a square traced round twice, saying the outline comes back to a corner", () => {
+    const twice: P[] = [[0, 0], [10, 0], [10, 10], [0, 10], [0, 0.0], [10, 0], [10, 10], [0, 10]];
+    const r = OutlineSchema.safeParse({ kind: "polygon", pointsMm: twice });
+    expect(r.success).toBe(false);
+    expect(r.error?.issues[0].message).toBe("corner 5 repeats corner 1: the outline must go round once without coming back to a corner");
+  });
+
+  it("refuses a corner given twice in a row, naming both", () => {
+    const r = OutlineSchema.safeParse({ kind: "polygon", pointsMm: [[0, 0], [10, 0], [10, 0], [10, 10]] });
+    expect(r.error?.issues[0].message).toBe("corners 2 and 3 are the same point; remove one of them");
+  });
+
+  it("tells a crossing from a touch and from an edge folding back over the one before", () => {
+    expect(polygonProblem([[0, 0], [10, 10], [10, 0], [0, 10]])).toEqual({ kind: "edges-cross", edges: [0, 2] });
+    // Corner 4 (at 5, 0) lands on the first edge.
+    expect(polygonProblem([[0, 0], [10, 0], [10, 10], [5, 0], [0, 10]])).toEqual({ kind: "edges-touch", edges: expect.arrayContaining([0]) });
+    // A spike out and back along the same line.
+    expect(polygonProblem([[0, 0], [10, 0], [10, 10], [10, 5], [0, 10]])?.kind).toBe("edges-touch");
+    expect(describePolygonProblem({ kind: "edges-touch", edges: [1, 3] }, 5)).toBe("polygon edges 2 and 4 touch or overlap; the outline must not meet itself");
+  });
+
+  it("accepts concave outlines and outlines of the most corners allowed", () => {
+    expect(polygonProblem([[0, 0], [10, 0], [10, 10], [5, 4], [0, 10]])).toBeNull();
+    let seed = 11;
+    const rnd = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
+    const n = MAX_OUTLINE_CORNERS;
+    const traced = Array.from({ length: n }, (_, i): P => [23 * (1 + 0.001 * rnd()) * Math.cos((2 * Math.PI * i) / n), 23 * (1 + 0.001 * rnd()) * Math.sin((2 * Math.PI * i) / n)]);
+    const star = Array.from({ length: n }, (_, i): P => [(i % 2 ? 1 : 100) * Math.cos((2 * Math.PI * i) / n), (i % 2 ? 1 : 100) * Math.sin((2 * Math.PI * i) / n)]);
+    const comb: P[] = [];
+    for (let t = 0; t < (n - 4) / 4; t++) comb.push([0, 2 * t], [1000, 2 * t], [1000, 2 * t + 1], [1, 2 * t + 1]);
+    comb.push([1, n / 2], [-1, n / 2], [-1, 0]);
+    for (const pts of [traced, star, comb]) expect(polygonProblem(pts)).toBeNull();
+    // One corner moved across the star's centre makes it cross itself.
+    const broken = star.map((p, i): P => (i === 500 ? [-p[0], -p[1]] : p));
+    expect(polygonProblem(broken)?.kind).toBe("edges-cross");
+  });
+
+  it("refuses a case whose outlines have more corners together than allowed, in words", () => {
+    const input = roundStudyInput();
+    const ring = (n: number, r: number): P[] => Array.from({ length: n }, (_, i): P => [r * Math.cos((2 * Math.PI * i) / n), r * Math.sin((2 * Math.PI * i) / n)]);
+    input.case.deck = { kind: "polygon", pointsMm: ring(MAX_OUTLINE_CORNERS, 55) };
+    input.case.mouth = { outline: { kind: "polygon", pointsMm: ring(MAX_OUTLINE_CORNERS, 23) }, depthMm: 26 };
+    input.case.pockets = [1, 2].map((k) => ({ label: `p${k}`, outline: { kind: "polygon" as const, pointsMm: ring(MAX_OUTLINE_CORNERS, 2).map((p): P => [p[0] + 30 * (k === 1 ? 1 : -1), p[1]]) } }));
+    const r = StudySchema.safeParse(input);
+    expect(r.success).toBe(false);
+    expect(r.error?.issues.map((i) => i.message)).toContain(`the deck, mouth and pockets have ${4 * MAX_OUTLINE_CORNERS} corners together; at most ${MAX_CASE_CORNERS}`);
+  });
+});
