@@ -49,6 +49,20 @@ function skirtNeeds(radiusMm: number, protrusionMm: number, ctx: StudyContext): 
   };
 }
 
+/** What the holder's tilt does to this kit's cut: tilt, rock, lateral shift at the cut's bottom (or the skirt's), depth variation, worst axis offset; null when level. */
+function kitAlignment(ctx: StudyContext, needs: SkirtNeeds & { zSkirtMm: number }, planned: PlannedCut | null): KitResult["alignment"] {
+  const plane = ctx.plane;
+  if (!plane) return null;
+  return {
+    tiltDeg: tiltDeg(plane),
+    directionDeg: tiltDirectionDeg(plane),
+    rockMm: plane.rockMm,
+    lateralShiftMm: lateralShiftMm(plane, ctx.bearing, planned ? planned.cut.depthMm : needs.zSkirtMm),
+    depthVariationMm: planned?.depthVariationMm ?? 0,
+    worstAxisOffsetMm: needs.worstAxisOffsetMm,
+  };
+}
+
 /** Evaluates one kit on the study's case: verdict, clearances, least and planned cut, walls, rig, crank chamber, ports, displacement, removal, warnings. */
 export function evaluateKit(kit: CylinderKit, ctx: StudyContext): KitResult {
   const { study, tol, limits: L, plane } = ctx;
@@ -118,16 +132,7 @@ export function evaluateKit(kit: CylinderKit, ctx: StudyContext): KitResult {
     maxCutDiameterMm: planned?.maxCutDiameterMm ?? ctx.caseMaxCutDiameterMm,
     studMatch,
     rig,
-    alignment: plane
-      ? {
-          tiltDeg: tiltDeg(plane),
-          directionDeg: tiltDirectionDeg(plane),
-          rockMm: plane.rockMm,
-          lateralShiftMm: lateralShiftMm(plane, ctx.bearing, planned ? planned.cut.depthMm : needs.zSkirtMm),
-          depthVariationMm: planned?.depthVariationMm ?? 0,
-          worstAxisOffsetMm: needs.worstAxisOffsetMm,
-        }
-      : null,
+    alignment: kitAlignment(ctx, needs, planned),
     crank,
     ports,
     displacementCc: { stock: ctx.stockCc, kit: kitCc, change: kitCc - ctx.stockCc, stockRounded: roundCc(ctx.stockCc), kitRounded: roundCc(kitCc), crossesClasses },

@@ -2,6 +2,7 @@ import type { LengthUnits, Study, StudyResult, Vec2 } from "@/geometry";
 import { fitState, interferenceRegions } from "../fit";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { bounds, outlineRing } from "../outline";
+import { portsLayer } from "./ports";
 import { INK, type Attrs, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
 
 // Plan view at the deck, to scale (1 unit = 1 mm, y up as in the core's frame), drawn from the core's result.
@@ -65,6 +66,7 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
 
   body.push(deckLayer(deck));
   for (const p of cs.pockets) body.push(pocketLayer(outlineRing(p.outline), p.startDepthMm));
+  body.push(portsLayer(study, kitIndex, k, fs));
   body.push(mouthLayer(outlineRing(cs.mouth.outline)));
   for (const s of cs.studs) body.push(studHoleLayer(s.positionMm, cs.studHoleDiameterMm / 2));
   const band = interferenceRegions(study, k)[0];

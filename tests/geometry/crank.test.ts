@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { crankClearance, evaluateStudy } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
@@ -6,6 +7,13 @@ import { parse, roundStudyInput } from "./fixtures";
 // lies on a sphere of radius L = √(r² + h²) about the crank centre, h = d − p; the webs' rim corner lies at
 // K = √(R² + (S/2)²) from it. Examples use 3-4-5 and 20-21-29 triangles so the roots come out whole.
 const crank = { deckToAxisMm: 45.7, webRadiusMm: 21, webSpanMm: 40 };
+
+/** Signed distance in 3D from a point to the swept webs {y² + (z − d)² ≤ R², |x| ≤ S/2}, written out directly. */
+function toWebs(x: number, y: number, z: number, c: typeof crank): number {
+  const axial = Math.abs(x) - c.webSpanMm / 2;
+  const radial = Math.hypot(y, z - c.deckToAxisMm) - c.webRadiusMm;
+  return axial > 0 || radial > 0 ? Math.hypot(Math.max(axial, 0), Math.max(radial, 0)) : Math.max(axial, radial);
+}
 
 describe("clearance between the skirt's lower edge and the swept crank webs", () => {
   it("a skirt wider than the web span meets the rim corner: L − K", () => {
@@ -33,6 +41,26 @@ describe("clearance between the skirt's lower edge and the swept crank webs", ()
     const c = crankClearance(28, 40.7, crank);
     expect(c.clearanceMm).toBeCloseTo(-t, 9);
     expect(c.atMm[0]).toBeCloseTo(20 - t, 6);
+  });
+
+  it("is the least distance over the whole lower edge, as a dense walk round it finds", () => {
+    const f = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+    fc.assert(
+      fc.property(f(10, 40), f(5, 40), f(20, 90), f(15, 50), f(10, 70), (r, p, d, R, S) => {
+        const c = { deckToAxisMm: d, webRadiusMm: R, webSpanMm: S };
+        const got = crankClearance(r, p, c);
+        let least = Infinity;
+        for (let i = 0; i <= 20_000; i++) {
+          const phi = (Math.PI / 2) * (i / 20_000);
+          least = Math.min(least, toWebs(r * Math.cos(phi), r * Math.sin(phi), p, c));
+        }
+        // No point of the edge is nearer than the result, and the walk comes within its step of it.
+        expect(got.clearanceMm).toBeLessThanOrEqual(least + 1e-9);
+        expect(least - got.clearanceMm).toBeLessThan(1e-3);
+        expect(toWebs(got.atMm[0], got.atMm[1], p, c)).toBeCloseTo(got.clearanceMm, 6);
+      }),
+      { numRuns: 200 },
+    );
   });
 
   it("a study with the crank chamber reports the clearance, and below the minimum the kit cannot fit", () => {

@@ -1,3 +1,4 @@
+import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type StudyInput, evaluateStudy, lineSpans, portSteps } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
@@ -75,6 +76,23 @@ describe("the matched passage in the study result", () => {
     expect(p.steps).toEqual({ innerMm: null, outerMm: null, ccwMm: null, cwMm: null });
     expect(p.matchedWallMm).toBeCloseTo(29.5 - 27.5, 9); // 2.0 mm: exactly the minimum, so ok
     expect(p.ok).toBe(true);
+  });
+
+  it("opening a passage to the port never leaves more wall than the passage alone does", () => {
+    const f = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+    fc.assert(
+      fc.property(f(27, 33), f(33.5, 38), f(2, 12), f(50, 58), (inner, outer, half, cutD) => {
+        const window = { kind: "polygon" as const, pointsMm: [[inner, -half], [outer, -half], [outer, half], [inner, half]] as [number, number][] };
+        const s = study([{ label: "right transfer", outline: window }]);
+        s.cut = { diameterMm: cutD, depthMm: 25.2 };
+        const k = evaluateStudy(parse(s)).kits[0];
+        const passageWall = k.walls.find((w) => w.kind === "pocket")!.minWallMm;
+        expect(k.ports[0].matchedWallMm!).toBeLessThanOrEqual(passageWall + 1e-9);
+        // The port's inner edge lies at x = inner on the x axis: the matched wall is at most inner − R.
+        expect(k.ports[0].matchedWallMm!).toBeLessThanOrEqual(inner - cutD / 2 + 1e-9);
+      }),
+      { numRuns: 60 },
+    );
   });
 
   it("without a cut there is no matched wall; without a gasket there are no ports", () => {
