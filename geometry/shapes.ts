@@ -1,6 +1,5 @@
 import { z } from "zod";
-import { signedArea } from "./polygon";
-import { selfIntersections } from "./simplicity";
+import { describePolygonProblem, polygonProblem } from "./simplicity";
 import type { Vec2 } from "./vec";
 
 // Shapes from the measurements a person takes at the bench (a stud spacing read with calipers, a bolt
@@ -182,14 +181,12 @@ export function insideRing(p: readonly [number, number], ring: readonly (readonl
 const inside = (p: readonly [number, number], o: ShapeOutline) =>
   o.kind === "circle" ? Math.hypot(p[0] - (o.centerMm?.[0] ?? 0), p[1] - (o.centerMm?.[1] ?? 0)) < o.diameterMm / 2 : insideRing(p, o.pointsMm);
 
-/** Why an outline cannot be used as it stands (crossing edges, no area), or null. */
+/** Why an outline cannot be used as it stands (crossing edges, no area), in the core's own words, or null. */
 export function outlineProblem(o: ShapeOutline): string | null {
   if (o.kind === "circle") return o.diameterMm > 0 ? null : "the diameter must be more than 0";
   if (o.pointsMm.length < 3) return "needs at least 3 corners";
-  const crossings = selfIntersections(o.pointsMm as Vec2[]);
-  if (crossings.length) return `edges ${crossings[0][0] + 1} and ${crossings[0][1] + 1} cross`;
-  if (Math.abs(signedArea(o.pointsMm as Vec2[])) < 1e-6) return "has no area (the corners lie on one line)";
-  return null;
+  const problem = polygonProblem(o.pointsMm as Vec2[]);
+  return problem ? describePolygonProblem(problem, o.pointsMm.length) : null;
 }
 
 /** The points that stand for an outline when testing whether it lies inside another (a circle: 16 points on it). */

@@ -163,6 +163,7 @@ describe("what is wrong with a shape", () => {
 
   it("a bow-tie outline is named by its crossing edges", () => {
     expect(outlineProblem({ kind: "polygon", pointsMm: [[0, 0], [10, 10], [10, 0], [0, 10]] })).toMatch(/edges 1 and 3 cross/);
+    expect(outlineProblem({ kind: "polygon", pointsMm: [[0, 0], [10, 0], [20, 0]] })).toMatch(/no area/);
   });
 
   it("a passage past the deck edge, a stud in the mouth and a stud off the deck are each reported", () => {

@@ -69,7 +69,8 @@ describe("the shape store", () => {
     switchUnits(s, "in");
     expect(s.getState().doc.deck?.pointsMm[1]).toEqual(["2.5", "2"]);
     s.temporal.getState().undo();
-    expect(s.getState().doc.deck?.pointsMm[1]).toEqual(["1.9685", "1.9685"]);
+    // 50 mm = 1.9685 in, shown to 0.001 in.
+    expect(s.getState().doc.deck?.pointsMm[1]).toEqual(["1.969", "1.969"]);
     expect(s.getState().units).toBe("in");
   });
 
