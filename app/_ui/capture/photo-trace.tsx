@@ -1,8 +1,8 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { OutlineSchema, type Outline } from "@/geometry/schema";
-import { pxToMm, rectangleFit, ReferencePointsError, twoPointScale, type PhotoToMm, type Point } from "@/geometry/homography";
+import { orderAsRectangle, pxToMm, rectangleFit, ReferencePointsError, twoPointScale, type PhotoToMm, type Point } from "@/geometry/homography";
 import { lengthLabel, parseLengthText, type LengthUnits } from "@/model/units";
 import { callApi } from "../api-client";
 import { FormNotice } from "../field";
@@ -54,28 +54,28 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
 
   // ——— the photo ———
 
-  const draw = useCallback((source: CanvasImageSource, width: number, height: number) => {
+  // The decoded picture waits here until the canvas for it is on the page, then is drawn at display size.
+  const picture = useRef<CanvasImageSource | null>(null);
+  useLayoutEffect(() => {
     const canvas = canvasRef.current;
-    if (!canvas) return;
-    const k = Math.min(1, DISPLAY_MAX_PX / Math.max(width, height));
-    canvas.width = Math.round(width * k);
-    canvas.height = Math.round(height * k);
+    const source = picture.current;
+    if (!canvas || !source || !photo) return;
+    const k = Math.min(1, DISPLAY_MAX_PX / Math.max(photo.widthPx, photo.heightPx));
+    canvas.width = Math.round(photo.widthPx * k);
+    canvas.height = Math.round(photo.heightPx * k);
     canvas.getContext("2d")?.drawImage(source, 0, 0, canvas.width, canvas.height);
-  }, []);
+  }, [photo]);
 
-  const showStored = useCallback(
-    (item: { id: string; url: string | null; widthPx: number | null; heightPx: number | null }) => {
-      if (!item.url) return;
-      const img = new Image();
-      img.onload = () => {
-        setPhoto({ src: item.url!, widthPx: img.naturalWidth, heightPx: img.naturalHeight, storedId: item.id });
-        requestAnimationFrame(() => draw(img, img.naturalWidth, img.naturalHeight));
-      };
-      img.onerror = () => setPhotoNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
-      img.src = item.url;
-    },
-    [draw],
-  );
+  const showStored = useCallback((item: { id: string; url: string | null }) => {
+    if (!item.url) return;
+    const img = new Image();
+    img.onload = () => {
+      picture.current = img;
+      setPhoto({ src: item.url!, widthPx: img.naturalWidth, heightPx: img.naturalHeight, storedId: item.id });
+    };
+    img.onerror = () => setPhotoNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
+    img.src = item.url;
+  }, []);
 
   useEffect(() => {
     if (!caseId) return;
@@ -114,12 +114,10 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
     }
     const width = bitmap.width;
     const height = bitmap.height;
+    if (picture.current instanceof ImageBitmap) picture.current.close();
+    picture.current = bitmap;
     setPhoto({ src: "", widthPx: width, heightPx: height, storedId: null });
     resetTrace();
-    requestAnimationFrame(() => {
-      draw(bitmap, width, height);
-      bitmap.close();
-    });
     if (!caseId) {
       setPhotoNotice({ tone: "ok", text: "Photo shown for tracing. Save the case profile to keep a photo with it." });
       return;
@@ -267,6 +265,15 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
   }
 
   // ——— drawing ———
+
+  const refRing = useMemo(() => {
+    if (refPx.length !== 4) return refPx;
+    try {
+      return orderAsRectangle(refPx);
+    } catch {
+      return refPx;
+    }
+  }, [refPx]);
 
   const r = photo ? Math.max(photo.widthPx, photo.heightPx) / 160 : 4;
   const stroke = photo ? Math.max(photo.widthPx, photo.heightPx) / 500 : 2;
@@ -418,7 +425,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
           >
             <canvas ref={canvasRef} className="absolute inset-0 h-full w-full" aria-hidden="true" />
             <svg className="pointer-events-none absolute inset-0 h-full w-full" viewBox={`0 0 ${photo.widthPx} ${photo.heightPx}`} preserveAspectRatio="none" aria-hidden="true">
-              {mode === "rectangle" ? ring(refPx, "var(--color-tight)", true, "ref") : ring(refPx, "var(--color-tight)", false, "ref")}
+              {ring(mode === "rectangle" ? refRing : refPx, "var(--color-tight)", mode === "rectangle", "ref")}
               {dots(refPx, "var(--color-tight)", "ref", true)}
               {dots(studs, ok, "stud")}
               {ring(deck, traced?.deckBad ? bad : ok, true, "deck")}

@@ -1,0 +1,135 @@
+// Tracing a case from a photo in Chromium: the test paints a known eight-sided deck with four studs at a known
+// spacing, seen by a tilted pinhole camera, uploads it to a case profile, clicks the four studs and the deck's
+// corners at the pixels the same camera puts them, and checks the traced outline against the truth.
+import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { chamferedDeck, circle, project, renderDeckPhoto, type Camera, type DeckScene, type Mm } from "../../scripts/deck-photo";
+import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { DEMO, signIn, type Http } from "../support/http";
+import { newCase, ok } from "../integration/library-fixtures";
+
+const DECK = chamferedDeck(110, 100, 18);
+const STUDS: Mm[] = [[-28, -28], [28, -28], [28, 28], [-28, 28]];
+const SCENE: DeckScene = { deck: DECK, mouth: circle([0, 0], 62), passages: [], studs: STUDS.map((at) => ({ at, diameterMm: 8.5 })) };
+// Tilted 16° and 7° off square and turned 4°: a phone held by hand over the bench.
+const CAMERA: Camera = { widthPx: 1200, heightPx: 900, focalPx: 1500, tiltXDeg: 16, tiltYDeg: 7, turnDeg: 4, distanceMm: 220 };
+
+let browser: Browser;
+let context: BrowserContext;
+let page: Page;
+let api: Http;
+let caseId: string;
+const pageErrors: string[] = [];
+
+beforeAll(async () => {
+  api = await signIn(DEMO.owner.email, DEMO.owner.password);
+  caseId = (await newCase(api)).id;
+  browser = await launchBrowser();
+  context = await newPerson(browser, { width: 1500, height: 1900 });
+  page = await context.newPage();
+  page.on("pageerror", (e) => pageErrors.push(e.message));
+  await signInThroughForm(page, DEMO.owner.email, DEMO.owner.password);
+});
+
+afterAll(async () => {
+  await browser?.close();
+  expect(pageErrors).toEqual([]);
+});
+
+async function photos(): Promise<{ id: string; state: string; widthPx: number | null; heightPx: number | null }[]> {
+  return ok<{ items: { id: string; state: string; widthPx: number | null; heightPx: number | null }[] }>(await api.get(`/api/v1/cases/${caseId}/photos`)).items;
+}
+
+/** Clicks the photo where the camera put a deck point (mm). */
+async function clickAt(surface: Locator, p: Mm) {
+  await surface.evaluate((el) => el.scrollIntoView({ block: "center", inline: "center" }));
+  const box = await surface.boundingBox();
+  if (!box) throw new Error("the photo is not shown");
+  const [x, y] = project(CAMERA, p);
+  await page.mouse.click(box.x + (x / CAMERA.widthPx) * box.width, box.y + (y / CAMERA.heightPx) * box.height);
+}
+
+/** The case profile's form with its photo panel open (the panel may sit in a section that opens on request). */
+async function openPanel(): Promise<Locator> {
+  await page.goto(`/library/cases/${caseId}`);
+  const opener = page.locator("summary", { hasText: "Trace over a photo" });
+  await opener.or(page.getByRole("region", { name: "Trace from a photo" })).first().waitFor();
+  if (await opener.count()) await opener.click();
+  const panel = page.getByRole("region", { name: "Trace from a photo" });
+  await panel.waitFor();
+  return panel;
+}
+
+/** A length as the field wants it: mm as typed, or inches when the form is in inches. */
+async function lengthFor(panel: Locator, label: RegExp, mm: number): Promise<string> {
+  const text = await panel.getByText(label).first().innerText();
+  return /\(in\)/.test(text) ? (mm / 25.4).toFixed(5) : String(mm);
+}
+
+describe("trace a deck from a photo", () => {
+  it("squares up a tilted photo from four studs and traces the deck within 0.2 mm", async () => {
+    const painter = await context.newPage();
+    const png = await renderDeckPhoto(painter, CAMERA, SCENE, "image/png");
+    await painter.close();
+
+    const panel = await openPanel();
+
+    // Not an image: refused in words, and nothing kept.
+    await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck.png", mimeType: "image/png", buffer: Buffer.from("these are notes, not a photo") });
+    await expect.poll(() => panel.getByRole("alert").first().innerText()).toMatch(/not a JPEG, PNG or WebP image.*Nothing was saved\./);
+    expect(await photos()).toEqual([]);
+
+    await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck.png", mimeType: "image/png", buffer: png });
+    await expect.poll(() => panel.getByRole("status").first().innerText()).toMatch(/Photo kept with the case profile/);
+    const kept = await photos();
+    expect(kept).toHaveLength(1);
+    expect(kept[0]).toMatchObject({ state: "ready", widthPx: 1200, heightPx: 900 });
+
+    const surface = panel.getByTestId("trace-surface");
+    // The photo is drawn under the trace: dark in the mouth, light on the deck face (red channel, 0–255).
+    const [inMouth, onFace] = await surface.locator("canvas").evaluate(
+      (c: HTMLCanvasElement, pts) => pts.map(([x, y]) => c.getContext("2d")!.getImageData(Math.round((x * c.width) / 1200), Math.round((y * c.height) / 900), 1, 1).data[0]),
+      [project(CAMERA, [0, 0]), project(CAMERA, [45, 0])],
+    );
+    expect(inMouth).toBeLessThan(60);
+    expect(onFace).toBeGreaterThan(140);
+
+    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
+    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    // The studs in an order of their own: the panel sorts them into the rectangle's corners.
+    for (const s of [STUDS[2], STUDS[0], STUDS[1], STUDS[3]]) await clickAt(surface, s);
+    await expect.poll(() => panel.getByTestId("trace-fit").innerText()).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within 0\.\d+ mm\.$|^The four points fit a 2\.205 in × 2\.205 in rectangle within/);
+
+    await panel.getByRole("button", { name: "Deck", exact: true }).click();
+    for (const corner of DECK) await clickAt(surface, corner);
+    await expect.poll(() => panel.getByTestId("trace-prompt").innerText()).toMatch(/Deck corners/);
+
+    const readout = panel.getByTestId("trace-readout");
+    await expect.poll(async () => JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}").deck?.pointsMm?.length ?? 0).toBe(8);
+    const shapes = JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}") as { deck: { kind: string; pointsMm: Mm[] }; studs: { label: string; positionMm: Mm }[] };
+    expect(shapes.deck.kind).toBe("polygon");
+    const deckErrors = shapes.deck.pointsMm.map((p, i) => Math.hypot(p[0] - DECK[i][0], p[1] - DECK[i][1]));
+    const studErrors = STUDS.map((s) => Math.min(...shapes.studs.map((t) => Math.hypot(t.positionMm[0] - s[0], t.positionMm[1] - s[1]))));
+    console.log(`photo trace: worst deck corner off by ${Math.max(...deckErrors).toFixed(3)} mm, worst stud by ${Math.max(...studErrors).toFixed(3)} mm`);
+    expect(Math.max(...deckErrors)).toBeLessThanOrEqual(0.2);
+    expect(shapes.studs).toHaveLength(4);
+    expect(Math.max(...studErrors)).toBeLessThanOrEqual(0.2);
+
+    await panel.getByRole("button", { name: "Put the traced shapes into the form" }).click();
+    await expect.poll(() => panel.getByText(/^Put into the form:/).innerText()).toBe("Put into the form: the deck, 4 studs.");
+    await screenshot(page, "photo-trace");
+  });
+
+  it("refuses reference points that coincide, saying so next to the fields", async () => {
+    const panel = await openPanel();
+    // The kept photo comes back with the case profile.
+    const surface = panel.getByTestId("trace-surface");
+    await surface.waitFor();
+    await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
+    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
+    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickAt(surface, s);
+    await expect.poll(() => panel.getByRole("alert").first().innerText()).toMatch(/are on the same spot/);
+    await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
+  });
+});
