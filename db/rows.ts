@@ -70,14 +70,10 @@ export function readingOut(r: StoredReading) {
   return { valueMm: r.valueMm, takenBy: { id: r.takenById, name: r.takenByName }, takenAt: new Date(r.takenAt).toISOString() };
 }
 
-/**
- * Reads a row's data column through the schema its writes were checked with. Data that no longer reads is
- * a defect of the data layer, not something a caller sent: it is thrown as such (logged, answered 500).
- */
-export function storedData<T>(schema: z.ZodType<T>, json: string, what: string): T {
-  const r = schema.safeParse(JSON.parse(json));
-  if (r.success) return r.data;
-  throw new Error(`${what}: the stored data does not read as written: ${r.error.issues.slice(0, 3).map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
+/** Parses a JSON column the data layer itself wrote. */
+export function parseJson<T>(json: string | null | undefined): T | null {
+  if (json === null || json === undefined || json === "") return null;
+  return JSON.parse(json) as T;
 }
 
 /** Each failing field of a zod error by its dotted path ("kits.0.boreMm"), with the reason. */

@@ -1,10 +1,14 @@
 // Who may call what: every route under app/api × every kind of caller × a row of their own shop and a row
-// of another shop. A route that exists under app/api but is missing here fails the last test.
+// of another shop. A route that exists under app/api but is missing here, or from the one route list the
+// API description is generated from (app/api/v1/_lib/openapi.ts), fails the route-list test. The pages
+// that show one row answer 404 for another shop's row and leave it as it was.
 import { randomUUID } from "node:crypto";
-import { readFileSync, readdirSync, statSync } from "node:fs";
-import { join, relative, sep } from "node:path";
+import { readdirSync, statSync } from "node:fs";
+import { dirname, join, relative, sep } from "node:path";
+import { pathToFileURL } from "node:url";
 import Stripe from "stripe";
 import { beforeAll, describe, expect, inject, it } from "vitest";
+import { LIBRARY_ROUTES, OPERATIONS } from "../../app/api/v1/_lib/openapi";
 import { DEMO, Http, signIn, testDb, uniqueEmail } from "../support/http";
 import { insertExampleStudy, jobBody, me, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, ok, rigData, type Row } from "./library-fixtures";
@@ -401,27 +405,87 @@ describe("authorization matrix", () => {
     }
   }
 
-  it("lists every route that exists under app/api", () => {
-    const root = join(process.cwd(), "app", "api");
-    const found: string[] = [];
-    const walk = (dir: string) => {
-      for (const name of readdirSync(dir)) {
-        const full = join(dir, name);
-        if (statSync(full).isDirectory()) walk(full);
-        else if (name === "route.ts") {
-          const path = `/api/${relative(root, dir).split(sep).join("/")}`.replace(/\[([^\]]+)\]/g, "{$1}");
-          const source = readFileSync(full, "utf8");
-          for (const m of source.matchAll(/export\s+(?:const|async\s+function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g)) found.push(`${m[1]} ${path}`);
-          for (const m of source.matchAll(/export\s+const\s*\{([^}]+)\}/g)) {
-            for (const name of m[1].split(",").map((s) => s.trim())) if (/^(GET|POST|PUT|PATCH|DELETE)$/.test(name)) found.push(`${name} ${path}`);
-          }
-        }
-      }
-    };
-    walk(root);
+  it("lists every route that exists under app/api, and so does the API description", async () => {
+    const found = await discoverRoutes();
     const listed = new Set(MATRIX.map((r) => `${r.method} ${r.path}`));
+    const described = new Set([...OPERATIONS, ...LIBRARY_ROUTES].map((op) => `${op.method.toUpperCase()} ${op.path}`));
     expect(found.length).toBeGreaterThan(30);
-    expect(found.filter((f) => !listed.has(f))).toEqual([]);
-    expect([...listed].filter((l) => !found.includes(l))).toEqual([]);
+    expect(found.filter((f) => !listed.has(f)), "routes missing from the matrix").toEqual([]);
+    expect([...listed].filter((l) => !found.includes(l)), "matrix rows without a route").toEqual([]);
+    expect(found.filter((f) => !described.has(f)), "routes missing from the API description").toEqual([]);
+    expect([...described].filter((d) => !found.includes(d)), "described routes that do not exist").toEqual([]);
+  });
+});
+
+const HTTP_METHODS = ["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"];
+
+/**
+ * Every method of every route module under app/api, read from the module's exports by importing it (so
+ * `export { h as GET }`, re-exports and OPTIONS or HEAD handlers count), as "METHOD /api/path/{param}".
+ */
+async function discoverRoutes(): Promise<string[]> {
+  // The modules reach the database and the sign-in library on import: point them at the test server's.
+  process.env.DATABASE_URL = inject("databaseURL");
+  process.env.BETTER_AUTH_SECRET ??= "a-secret-for-this-worker-only-0123456789abcdef";
+  const root = join(process.cwd(), "app", "api");
+  const files: string[] = [];
+  const walk = (dir: string) => {
+    for (const name of readdirSync(dir)) {
+      const full = join(dir, name);
+      if (statSync(full).isDirectory()) walk(full);
+      else if (/^route\.(ts|tsx|js|mjs)$/.test(name)) files.push(full);
+    }
+  };
+  walk(root);
+  const found: string[] = [];
+  for (const full of files) {
+    const path = `/api/${relative(root, dirname(full)).split(sep).join("/")}`.replace(/\[([^\]]+)\]/g, "{$1}");
+    const mod = (await import(pathToFileURL(full).href)) as Record<string, unknown>;
+    for (const method of HTTP_METHODS) if (typeof mod[method] === "function") found.push(`${method} ${path}`);
+  }
+  return found;
+}
+
+// ── Pages that show one row ─────────────────────────────────────────────────────────────────────
+
+type PageCase = { path: string; table: "study" | "job"; row: (shop: Shop) => Promise<string>; viewer: "staff" | "customer" };
+
+/** The row's version and last change, to check that opening a page changed nothing. */
+async function rowState(table: "study" | "job", id: string) {
+  const db = testDb();
+  try {
+    const r = await db.execute({ sql: `select * from ${table} where id = ?`, args: [id] });
+    return r.rows[0] ? JSON.stringify(r.rows[0]) : null;
+  } finally {
+    db.close();
+  }
+}
+
+const PAGES: PageCase[] = [
+  { path: "/studies/{id}", table: "study", row: async (shop) => (await makeRow(shop, "studies")).id, viewer: "staff" },
+  { path: "/jobs/{id}", table: "job", row: (shop) => newJob(shop), viewer: "staff" },
+  { path: "/setup-card/{id}", table: "job", row: (shop) => newJob(shop), viewer: "staff" },
+  { path: "/consult/{id}", table: "job", row: (shop) => newJob(shop, { shared: true }), viewer: "customer" },
+];
+
+describe("pages of one row", () => {
+  it.each(PAGES.map((p) => [p.path, p] as const))("%s answers 404 for another shop's row and leaves it unchanged", async (_path, page) => {
+    // The viewer of shop A: its owner (staff pages) or its customer (consult); the row of shop B is never theirs.
+    const viewer = page.viewer === "staff" ? clients.owner : clients.customer;
+    const own = await page.row(shopA);
+    const others = await page.row(shopB);
+    const before = await rowState(page.table, others);
+    expect(before).not.toBeNull();
+    const res = await viewer.get(page.path.replace("{id}", others));
+    expect(res.status).toBe(404);
+    expect(await rowState(page.table, others)).toBe(before);
+    // The stranger (owner of shop B) cannot open shop A's row either, through the staff pages.
+    if (page.viewer === "staff") {
+      const ownBefore = await rowState(page.table, own);
+      expect((await clients.stranger.get(page.path.replace("{id}", own))).status).toBe(404);
+      expect(await rowState(page.table, own)).toBe(ownBefore);
+    }
+    // The page itself works for its own shop's row: the 404 is the shop check, not a broken page.
+    expect((await viewer.get(page.path.replace("{id}", own))).status).toBe(200);
   });
 });
