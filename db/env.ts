@@ -40,3 +40,15 @@ export function productionSecretProblems(env: NodeJS.ProcessEnv = process.env): 
   }
   return problems;
 }
+
+/** Ends the process with the reasons when a production server's secrets do not hold (called once at start). */
+export function refuseToStartWithoutSecrets(env: NodeJS.ProcessEnv = process.env): void {
+  const problems = productionSecretProblems(env);
+  if (problems.length === 0) return;
+  console.error(
+    `Borewright refuses to start in production:\n${problems.map((p) => `  - ${p}`).join("\n")}\n` +
+      "Generate secrets (for example `openssl rand -base64 32`) and set them in the environment. " +
+      "`npm run demo` generates its own into .env.local.",
+  );
+  process.exit(1);
+}
