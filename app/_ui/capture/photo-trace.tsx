@@ -26,9 +26,17 @@ type Props = {
   /** The case profile the photo is kept with; without one (a case not saved yet) the photo is only traced here. */
   caseId?: string | null;
   units?: LengthUnits;
+  /** A case's deck (deck, mouth, passages) or a kit's base gasket (outline, bore, port windows). */
+  shapesFor?: "case" | "gasket";
 };
 
-export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
+const WORDS = {
+  case: { deck: "Deck", mouth: "Mouth", passage: "Passage", passages: "passages" },
+  gasket: { deck: "Gasket outline", mouth: "Bore", passage: "Port", passages: "ports" },
+} as const;
+
+export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "case" }: Props) {
+  const words = WORDS[shapesFor];
   const [photo, setPhoto] = useState<Photo | null>(null);
   const [photoNotice, setPhotoNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -235,32 +243,33 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
     };
     const studPx = [...(mode === "rectangle" && studsFromRef ? refPx : []), ...studs];
     const studList = studPx.map((p, i) => ({ label: `S${i + 1}`, positionMm: mm(p) }));
-    const deckShape = polygon(deck, "deck");
+    const deckShape = polygon(deck, words.deck.toLowerCase());
     let mouthShape: { outline?: Outline; problem?: string } = {};
     if (mouthRound && mouth.length > 0) {
-      if (mouth.length < 3) mouthShape = { problem: `Click three points on the mouth's edge (${mouth.length} so far).` };
+      if (mouth.length < 3) mouthShape = { problem: `Click three points on the ${words.mouth.toLowerCase()}'s edge (${mouth.length} so far).` };
       else {
         const c = circleThrough(mm(mouth[0]), mm(mouth[1]), mm(mouth[2]));
-        mouthShape = c ? { outline: { kind: "circle", diameterMm: Math.round(c.diameterMm * 1000) / 1000, centerMm: c.centerMm } } : { problem: "The three mouth points lie on one line; click them spread around the edge." };
+        mouthShape = c ? { outline: { kind: "circle", diameterMm: Math.round(c.diameterMm * 1000) / 1000, centerMm: c.centerMm } } : { problem: `The three ${words.mouth.toLowerCase()} points lie on one line; click them spread around the edge.` };
       }
-    } else mouthShape = polygon(mouth, "mouth");
-    const passageShapes = passages.map((p, i) => ({ label: `Passage ${i + 1}`, ...polygon(p, `passage ${i + 1}`) }));
+    } else mouthShape = polygon(mouth, words.mouth.toLowerCase());
+    const passageShapes = passages.map((p, i) => ({ label: `${words.passage} ${i + 1}`, ...polygon(p, `${words.passage.toLowerCase()} ${i + 1}`) }));
     const problems = [deckShape.problem, mouthShape.problem, ...passageShapes.map((p) => p.problem)].filter((p): p is string => Boolean(p));
     const shapes: CapturedShapes = {};
     if (deckShape.outline) shapes.deck = deckShape.outline;
     if (mouthShape.outline) shapes.mouth = mouthShape.outline;
     if (studList.length) shapes.studs = studList;
     const pockets = passageShapes.flatMap((p) => (p.outline ? [{ label: p.label, outline: p.outline }] : []));
-    if (pockets.length) shapes.pockets = pockets;
+    if (pockets.length) shapes[shapesFor === "gasket" ? "ports" : "pockets"] = pockets;
     return { shapes, problems, deckBad: Boolean(deckShape.problem), mouthBad: Boolean(mouthShape.problem), passageBad: passageShapes.map((p) => Boolean(p.problem)) };
-  }, [map, mode, studsFromRef, refPx, studs, deck, mouth, mouthRound, passages]);
+  }, [map, mode, studsFromRef, refPx, studs, deck, mouth, mouthRound, passages, shapesFor, words]);
 
   const nothingTraced = !traced || Object.keys(traced.shapes).length === 0;
 
   function apply() {
     if (!traced || traced.problems.length || nothingTraced) return;
     onApply(traced.shapes);
-    const parts = [traced.shapes.deck ? "the deck" : null, traced.shapes.mouth ? "the mouth" : null, traced.shapes.studs ? `${traced.shapes.studs.length} studs` : null, traced.shapes.pockets ? `${traced.shapes.pockets.length} passages` : null].filter(Boolean);
+    const windows = traced.shapes.pockets ?? traced.shapes.ports;
+    const parts = [traced.shapes.deck ? `the ${words.deck.toLowerCase()}` : null, traced.shapes.mouth ? `the ${words.mouth.toLowerCase()}` : null, traced.shapes.studs ? `${traced.shapes.studs.length} studs` : null, windows ? `${windows.length} ${words.passages}` : null].filter(Boolean);
     setApplied(`Put into the form: ${parts.join(", ")}.`);
   }
 
@@ -301,13 +310,13 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
   const ok = "var(--color-accent)";
   const bad = "var(--color-interfere)";
 
-  const targetWords: Record<string, string> = { studs: "Studs", deck: "Deck corners", mouth: mouthRound ? "Mouth (three points on its edge)" : "Mouth corners" };
+  const targetWords: Record<string, string> = { studs: "Studs", deck: `${words.deck} corners`, mouth: mouthRound ? `${words.mouth} (three points on its edge)` : `${words.mouth} corners` };
   const prompt =
     step === "reference"
       ? mode === "rectangle"
         ? `Click the centres of the four studs (${refPx.length} of 4).`
         : `Click the two points whose distance you measured (${refPx.length} of 2).`
-      : `Click to add: ${target.startsWith("passage-") ? `Passage ${Number(target.slice(8)) + 1} corners` : targetWords[target]}.`;
+      : `Click to add: ${target.startsWith("passage-") ? `${words.passage} ${Number(target.slice(8)) + 1} corners` : targetWords[target]}.`;
 
   return (
     <section className="card flex flex-col gap-4 p-4" aria-label="Trace from a photo">
@@ -384,19 +393,19 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
               </button>
               {(["studs", "deck", "mouth"] as const).map((t) => (
                 <button key={t} type="button" className={step === "trace" && target === t ? "btn" : "btn-quiet"} aria-pressed={step === "trace" && target === t} onClick={() => { setStep("trace"); setTarget(t); }}>
-                  {t === "studs" ? "Studs" : t === "deck" ? "Deck" : "Mouth"}
+                  {t === "studs" ? "Studs" : t === "deck" ? words.deck : words.mouth}
                 </button>
               ))}
               {passages.map((_, i) => (
                 <button key={i} type="button" className={step === "trace" && target === `passage-${i}` ? "btn" : "btn-quiet"} aria-pressed={step === "trace" && target === `passage-${i}`} onClick={() => { setStep("trace"); setTarget(`passage-${i}`); }}>
-                  Passage {i + 1}
+                  {words.passage} {i + 1}
                 </button>
               ))}
               <button type="button" className="btn-quiet" onClick={() => { setPassages((p) => [...p, []]); setStep("trace"); setTarget(`passage-${passages.length}`); }}>
-                Add a passage
+                Add a {words.passage.toLowerCase()}
               </button>
               <label className="flex items-center gap-1">
-                <input type="checkbox" checked={mouthRound} onChange={(e) => { setMouthRound(e.target.checked); setMouth([]); }} /> round mouth
+                <input type="checkbox" checked={mouthRound} onChange={(e) => { setMouthRound(e.target.checked); setMouth([]); }} /> round {words.mouth.toLowerCase()}
               </label>
             </div>
           </fieldset>
@@ -438,7 +447,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm" }: Props) {
             </svg>
           </div>
 
-          {traced ? <TracedReadout shapes={traced.shapes} units={units} /> : null}
+          {traced ? <TracedReadout shapes={traced.shapes} units={units} words={words} /> : null}
           {traced?.problems.length ? (
             <ul className="text-sm text-interfere" role="alert">
               {traced.problems.map((p) => (
@@ -471,7 +480,7 @@ function LengthInput(props: { id: string; label: string; units: LengthUnits; val
   );
 }
 
-function TracedReadout({ shapes, units }: { shapes: CapturedShapes; units: LengthUnits }) {
+function TracedReadout({ shapes, units, words }: { shapes: CapturedShapes; units: LengthUnits; words: (typeof WORDS)[keyof typeof WORDS] }) {
   const pt = (p: readonly [number, number]) => `${lengthLabel(p[0], units)}, ${lengthLabel(p[1], units)}`;
   const outline = (o: Outline) => (o.kind === "circle" ? `circle Ø ${lengthLabel(o.diameterMm, units)} at ${pt(o.centerMm ?? [0, 0])}` : o.pointsMm.map(pt).join("; "));
   return (
@@ -486,17 +495,17 @@ function TracedReadout({ shapes, units }: { shapes: CapturedShapes; units: Lengt
         ) : null}
         {shapes.deck ? (
           <>
-            <dt>Deck</dt>
+            <dt>{words.deck}</dt>
             <dd className="num">{outline(shapes.deck)}</dd>
           </>
         ) : null}
         {shapes.mouth ? (
           <>
-            <dt>Mouth</dt>
+            <dt>{words.mouth}</dt>
             <dd className="num">{outline(shapes.mouth)}</dd>
           </>
         ) : null}
-        {shapes.pockets?.map((p) => (
+        {(shapes.pockets ?? shapes.ports)?.map((p) => (
           <div key={p.label} className="contents">
             <dt>{p.label}</dt>
             <dd className="num">{outline(p.outline)}</dd>
