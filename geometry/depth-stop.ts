@@ -58,13 +58,8 @@ export function depthStopWorkBound(rig: Rig): number {
  * thicknesses; the work is bounded by depthStopWorkBound, never by the number of distinct stack heights.
  */
 export function searchDepthStop(wantedMm: number, rig: Rig, toleranceMm: number): DepthStopSearch {
-  const maxStackMm = Math.max(...rig.grooves.map((g) => g.travelMm)) - wantedMm + toleranceMm;
-  const [stockA, stockB] = splitStock(rig.shims);
-  const q = Math.max(toleranceMm, 1e-9);
-  const A = halfStacks(stockA, maxStackMm, q);
-  const B = halfStacks(stockB, maxStackMm, q);
-  const radixB = combinations(stockB);
-  let visited = A.enumerated + B.enumerated;
+  const { stockA, stockB, A, B, radixB, enumerated } = stockHalves(rig, toleranceMm);
+  let visited = enumerated;
   const overshoot = (travelMm: number, i: number, j: number) => travelMm - (A.heightMm[i] + B.heightMm[j]) - wantedMm;
 
   // Pass 1: the least overshoot at or above the wanted depth over every groove.
@@ -120,6 +115,35 @@ export function searchDepthStop(wantedMm: number, rig: Rig, toleranceMm: number)
     reached: true,
   };
   return { stop, statesVisited: visited };
+}
+
+interface Halves {
+  readonly stockA: Stock;
+  readonly stockB: Stock;
+  readonly A: HalfStacks;
+  readonly B: HalfStacks;
+  readonly radixB: number;
+  readonly maxStackMm: number;
+  readonly q: number;
+  /** Stacks listed to build the halves: 0 when they came from the cache. */
+  readonly enumerated: number;
+}
+
+// The halves depend on the stock, the tallest groove and the tolerance only, not on the depth wanted: a study
+// asks the same rig once per kit, so they are kept per stock array (a WeakMap on the readonly input).
+const halvesCache = new WeakMap<Stock, Halves>();
+
+function stockHalves(rig: Rig, toleranceMm: number): Halves {
+  const maxStackMm = Math.max(...rig.grooves.map((g) => g.travelMm)) + toleranceMm;
+  const q = Math.max(toleranceMm, 1e-9);
+  const cached = halvesCache.get(rig.shims);
+  if (cached && cached.maxStackMm === maxStackMm && cached.q === q) return { ...cached, enumerated: 0 };
+  const [stockA, stockB] = splitStock(rig.shims);
+  const A = halfStacks(stockA, maxStackMm, q);
+  const B = halfStacks(stockB, maxStackMm, q);
+  const halves = { stockA, stockB, A, B, radixB: combinations(stockB), maxStackMm, q, enumerated: A.enumerated + B.enumerated };
+  halvesCache.set(rig.shims, halves);
+  return halves;
 }
 
 /** Number of stacks a stock allows (each size used 0…count times): Π(countᵢ + 1). */

@@ -48,34 +48,52 @@ export interface BoundaryDistance {
   readonly inside: boolean;
 }
 
+// Winding of each polygon seen, so the edge order below costs no extra pass (a WeakMap on the readonly input).
+const counterClockwise = new WeakMap<readonly Vec2[], boolean>();
+
 /**
  * Distance from p to the polygon's boundary: the least over the edges of |p − (a + t·(b − a))| with
- * t = clamp(((p − a)·(b − a)) / |b − a|², 0, 1). Edges are taken counter-clockwise from the first corner, and a
- * later edge replaces the nearest only when closer by more than the tolerance (equidistant edges: the first wins).
+ * t = clamp(((p − a)·(b − a)) / |b − a|², 0, 1), and whether p is inside (winding number, as pointInPolygon), in
+ * one pass. Edges are taken counter-clockwise from the first corner, and a later edge replaces the nearest only
+ * when closer by more than the tolerance (equidistant edges: the first wins).
  */
 export function pointToPolygonBoundary(p: Vec2, points: readonly Vec2[], toleranceMm: number): BoundaryDistance {
   const n = points.length;
-  const ccw = signedArea(points) >= 0;
+  let ccw = counterClockwise.get(points);
+  if (ccw === undefined) {
+    ccw = signedArea(points) >= 0;
+    counterClockwise.set(points, ccw);
+  }
+  const [x, y] = p;
   let best = Infinity;
   let nx = 0;
   let ny = 0;
+  let winding = 0;
+  let onEdge = false;
   for (let k = 0; k < n; k++) {
     const a = ccw ? points[k] : points[n - 1 - k];
     const b = ccw ? points[(k + 1) % n] : points[(2 * n - 2 - k) % n];
     const dx = b[0] - a[0];
     const dy = b[1] - a[1];
     const len2 = dx * dx + dy * dy;
-    const t = len2 > 0 ? Math.min(1, Math.max(0, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2)) : 0;
+    const t = len2 > 0 ? Math.min(1, Math.max(0, ((x - a[0]) * dx + (y - a[1]) * dy) / len2)) : 0;
     const qx = a[0] + t * dx;
     const qy = a[1] + t * dy;
-    const d = Math.hypot(p[0] - qx, p[1] - qy);
+    const d = Math.hypot(x - qx, y - qy);
     if (d < best - toleranceMm) {
       best = d;
       nx = qx;
       ny = qy;
     }
+    const side = dx * (y - a[1]) - (x - a[0]) * dy;
+    if (side === 0 && d === 0) onEdge = true;
+    if (a[1] <= y) {
+      if (b[1] > y && side > 0) winding++;
+    } else if (b[1] <= y && side < 0) {
+      winding--;
+    }
   }
-  return { distanceMm: best, nearestMm: [nx, ny], inside: pointInPolygon(p, points) };
+  return { distanceMm: best, nearestMm: [nx, ny], inside: onEdge || winding !== 0 };
 }
 
 /**
