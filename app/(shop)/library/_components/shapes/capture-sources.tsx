@@ -15,7 +15,7 @@ export function CaptureSources({ onApply, units, caseId, kit = false }: { onAppl
       <details className="card p-4">
         <summary className="cursor-pointer text-sm font-semibold">Trace over a photo</summary>
         <div className="mt-3">
-          <PhotoTrace onApply={onApply} units={units} caseId={kit ? null : (caseId ?? null)} />
+          <PhotoTrace onApply={onApply} units={units} caseId={kit ? null : (caseId ?? null)} shapesFor={kit ? "gasket" : "case"} />
         </div>
       </details>
       <details className="card p-4">
