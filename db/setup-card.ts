@@ -1,6 +1,7 @@
 // The content of a job's bench setup card, built once from the plan snapshot so the printable page and
 // the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
 import { formatLength, type LengthUnits, type Verdict } from "@/geometry";
+import { dateText, dateTimeText } from "@/model/dates";
 import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
@@ -58,8 +59,9 @@ type JobLike = {
   caseVariant: string;
 };
 
-/** Builds the card for one job from its plan. */
-export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: string, units: LengthUnits, printedAt = new Date()): SetupCard {
+/** Builds the card for one job from its plan; dates in the shop's time zone (UTC unless given). */
+export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: string, units: LengthUnits, opts: { printedAt?: Date; timeZone?: string } = {}): SetupCard {
+  const zone = opts.timeZone ?? "UTC";
   const L = (mm: number) => formatLength(mm, units);
   const kitIndex = Math.max(0, plan.result.kits.findIndex((k) => k.kitId === plan.kitId));
   const k = plan.result.kits[kitIndex];
@@ -76,7 +78,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
       k.verdict !== "cannot-fit"
         ? null
         : override
-          ? `${tone.words.toUpperCase()} — planned on ${override.by.name}'s override (${override.at.slice(0, 10)}): ${override.reason}`
+          ? `${tone.words.toUpperCase()} — planned on ${override.by.name}'s override (${dateText(override.at, zone)}): ${override.reason}`
           : `${tone.words.toUpperCase()} — no override recorded: do not cut before the shop's owner decides.`,
   };
   const header: CardLine[] = [
@@ -86,8 +88,8 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     { label: "Case no.", value: job.caseNumber || "—" },
     { label: "Case variant", value: job.caseVariant || plan.study.case.name },
     { label: "Kit", value: k.name },
-    { label: "Study", value: `${plan.studyName} (plan taken ${plan.takenAt.slice(0, 10)})` },
-    { label: "Printed", value: printedAt.toISOString().slice(0, 16).replace("T", " ") },
+    { label: "Study", value: `${plan.studyName} (plan taken ${dateText(plan.takenAt, zone)})` },
+    { label: "Printed", value: dateTimeText(opts.printedAt ?? new Date(), zone) },
   ];
   const planLines: CardLine[] = cut
     ? [

@@ -103,7 +103,7 @@ describe("planning a kit the study calls cannot-fit", () => {
     expect(res.status).toBe(200);
     const pages = await measurePdf(new Uint8Array(await res.arrayBuffer()));
     expect(pages.length).toBeGreaterThanOrEqual(2);
-    for (const p of pages) expect(p.text.replace(/\s+/g, " ")).toMatch(/CANNOT FIT SAFELY — planned on Nell Varga's override \(\d{4}-\d{2}-\d{2}\): passages to be welded/);
+    for (const p of pages) expect(p.text.replace(/\s+/g, " ")).toMatch(/CANNOT FIT SAFELY — planned on Nell Varga's override \(\d{1,2} [A-Z][a-z]{2} \d{4}\): passages to be welded/);
     expect(pages[0].text).toMatch(/Cannot fit safely — /);
     const html = (await owner.get(`/setup-card/${job.id}`)).text;
     expect(html).toMatch(/data-testid="card-verdict" data-verdict="cannot-fit"/);

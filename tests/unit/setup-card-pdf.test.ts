@@ -74,7 +74,7 @@ describe("the setup card PDF", { timeout: 60_000 }, () => {
     expect(card.verdict.color).toBe("#b3362c");
     const pages = await measurePdf(new Uint8Array(await setupCardPdf(card, setupCardDrawings(plan, card.kitIndex, "mm"))));
     expect(pages.length).toBe(3);
-    for (const p of pages) expect(p.text.replace(/\s+/g, " ")).toMatch(/CANNOT FIT SAFELY — planned on Ada Quillfern's override \(2026-12-02\): passages to be welded/);
+    for (const p of pages) expect(p.text.replace(/\s+/g, " ")).toMatch(/CANNOT FIT SAFELY — planned on Ada Quillfern's override \(2 Dec 2026\): passages to be welded/);
     expect(pages[0].text).toMatch(/Cannot fit safely — /);
   });
 

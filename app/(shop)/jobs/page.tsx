@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { shopTimeZone } from "@/db/settings";
+import { dateTimeText } from "@/model/dates";
 import Link from "next/link";
 import { JOB_STATUSES, STATUS_LABEL } from "@/model/job-status";
 import { listJobs } from "@/db/jobs";
@@ -23,6 +25,7 @@ const COLUMNS = [
 /** The jobs board: the shop's jobs by status, filtered, sorted and paged on the server. */
 export default async function JobsPage({ searchParams }: { searchParams: Search }) {
   const caller = await requirePage("/jobs", SHOP_STAFF);
+  const zone = shopTimeZone();
   const raw = Object.fromEntries(Object.entries(await searchParams).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]).filter(([, v]) => v));
   const parsed = JobListQuerySchema.safeParse(raw);
   const query = parsed.success ? parsed.data : JobListQuerySchema.parse({});
@@ -102,7 +105,7 @@ export default async function JobsPage({ searchParams }: { searchParams: Search 
                   <td className="px-3 py-2">{j.title}</td>
                   <td className="px-3 py-2">{j.customer.name}</td>
                   <td className="px-3 py-2"><StatusBadge status={j.status} /></td>
-                  <td className="px-3 py-2 num text-ink-2">{j.updatedAt.slice(0, 16).replace("T", " ")}</td>
+                  <td className="px-3 py-2 num text-ink-2">{dateTimeText(j.updatedAt, zone)}</td>
                   <td className="px-3 py-2">{j.plan?.kitName ?? <span className="text-ink-3">no plan yet</span>}</td>
                   <td className="px-3 py-2 num">{j.deposit.amount > 0 ? `${money(j.deposit.amount, j.deposit.currency)} · ${j.deposit.paid ? "paid" : "unpaid"}` : "—"}</td>
                   <td className="px-3 py-2">{j.verification ? (j.verification.verdict === "pass" ? "within the plan" : j.verification.verdict === "fail" ? "outside the plan" : "incomplete") : "—"}</td>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { SHOP_STAFF } from "@/db/roles";
+import { shopTimeZone } from "@/db/settings";
 import { FormNotice } from "../../_ui/field";
 import { requirePage } from "../../_ui/guard";
 import { QueryProvider } from "../../_ui/query/provider";
@@ -25,7 +26,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
       {saved ? <FormNotice tone="ok">Saved “{saved}”.</FormNotice> : null}
       <QueryProvider>
         {/* Keyed by kind: sorting, paging and filter belong to one shelf and start afresh on another. */}
-        <LibraryList key={kind} kind={kind} units={caller.units} />
+        <LibraryList key={kind} kind={kind} units={caller.units} timeZone={shopTimeZone()} />
         {kind !== "rigs" ? <CsvPanel kind={kind} /> : null}
       </QueryProvider>
     </div>

@@ -5,6 +5,7 @@ import { AccessError } from "@/db/access";
 import { jobDetail } from "@/db/jobs";
 import { SHOP_STAFF } from "@/db/roles";
 import { buildSetupCard, setupCardDrawings, type CardDrawing, type CardVerdict } from "@/db/setup-card";
+import { shopTimeZone } from "@/db/settings";
 import { requirePage } from "../../../_ui/guard";
 import { PrintButton } from "./print-button";
 import "./card.css";
@@ -30,7 +31,7 @@ export default async function SetupCardPage({ params }: { params: Promise<{ jobI
       </main>
     );
   }
-  const card = buildSetupCard(detail.job, detail.plan, caller.shopName, caller.units);
+  const card = buildSetupCard(detail.job, detail.plan, caller.shopName, caller.units, { timeZone: shopTimeZone() });
   const drawings = setupCardDrawings(detail.plan, card.kitIndex, caller.units);
   return (
     <main className="setup-card mx-auto bg-white text-[#2b2f33]">

@@ -1,4 +1,6 @@
 import type { Metadata } from "next";
+import { shopTimeZone } from "@/db/settings";
+import { dateText, dateTimeText } from "@/model/dates";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
@@ -32,6 +34,8 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
   });
   const kit = plan ? plan.result.kits.find((k) => k.kitId === plan.kitId) : undefined;
   const L = (mm: number) => formatLength(mm, caller.units);
+  const zone = shopTimeZone();
+  const when = (at: string) => dateTimeText(at, zone);
   return (
     <div className="flex flex-col gap-6">
       <div className="flex flex-wrap items-start justify-between gap-4">
@@ -85,7 +89,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
               <dt className="text-ink-2">Cutter setting</dt><dd className="num">{kit.rig ? L(kit.rig.cutterSettingToSetMm ?? kit.rig.cutterSettingMm) : "—"}</dd>
               <dt className="text-ink-2">Depth stop</dt><dd>{kit.rig ? `${kit.rig.depthStop.groove}, stack ${L(kit.rig.depthStop.shimStackMm)}` : "—"}</dd>
               <dt className="text-ink-2">Displacement</dt><dd className="num">{kit.displacementCc.stockRounded} → {kit.displacementCc.kitRounded} cc</dd>
-              <dt className="text-ink-2">Taken</dt><dd className="num">{plan.takenAt.slice(0, 16).replace("T", " ")}</dd>
+              <dt className="text-ink-2">Taken</dt><dd className="num">{when(plan.takenAt)}</dd>
             </dl>
           ) : (
             <p className="text-ink-2">No plan yet. Attach a study from the <Link href="/studies">studies</Link>; the job is then planned with its chosen kit.</p>
@@ -95,7 +99,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
 
       {job.approval ? (
         <p className="text-sm text-ink-2" data-testid="approval">
-          Approved by {job.approval.by.name} on {job.approval.at.slice(0, 16).replace("T", " ")}{job.approval.reason ? ` — ${job.approval.reason}` : ""}.
+          Approved by {job.approval.by.name} on {when(job.approval.at)}{job.approval.reason ? ` — ${job.approval.reason}` : ""}.
         </p>
       ) : null}
 
@@ -104,7 +108,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         {readings ? <PlanVsActual verification={readings.verification} at={readings.at} /> : <p className="text-ink-2">No after-cut readings yet.</p>}
         {job.verification?.override ? (
           <p className="rounded-md border-l-4 border-interfere bg-interfere-soft px-4 py-2 text-sm" data-testid="verify-override">
-            Verified although the readings are outside the plan, on {job.verification.override.by.name}&apos;s override ({job.verification.override.at.slice(0, 10)}): {job.verification.override.reason}
+            Verified although the readings are outside the plan, on {job.verification.override.by.name}&apos;s override ({dateText(job.verification.override.at, zone)}): {job.verification.override.reason}
           </p>
         ) : null}
         {job.status === "machined" && plan ? (
@@ -122,7 +126,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
           <ol className="flex flex-col gap-1 text-sm" data-testid="history">
             {detail.history.map((h, i) => (
               <li key={i} className="border-b border-rule py-1">
-                <span className="num text-ink-3">{h.at.slice(0, 16).replace("T", " ")}</span> · <strong>{h.by.name}</strong> {h.summary}
+                <span className="num text-ink-3">{when(h.at)}</span> · <strong>{h.by.name}</strong> {h.summary}
               </li>
             ))}
           </ol>
@@ -134,7 +138,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
           ) : (
             <ul className="flex flex-col gap-2 text-sm">
               {detail.questions.map((q) => (
-                <li key={q.id} className="card p-3"><span className="text-ink-3 num">{q.at.slice(0, 16).replace("T", " ")}</span> · <strong>{q.by.name}</strong>: {q.text}</li>
+                <li key={q.id} className="card p-3"><span className="text-ink-3 num">{when(q.at)}</span> · <strong>{q.by.name}</strong>: {q.text}</li>
               ))}
             </ul>
           )}

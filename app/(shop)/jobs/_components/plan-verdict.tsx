@@ -1,4 +1,6 @@
 import type { KitResult } from "@/geometry";
+import { shopTimeZone } from "@/db/settings";
+import { dateText } from "@/model/dates";
 import { blockingReasons, VERDICT_TEXT } from "@/model/verdict";
 import type { JobView } from "@/db/jobs";
 
@@ -26,7 +28,7 @@ export function PlanVerdict({ kit, job }: { kit: Pick<KitResult, "verdict" | "re
       {kit.verdict === "cannot-fit" ? (
         override ? (
           <p className="mt-1 text-sm" data-testid="plan-override">
-            Planned on {override.by.name}&apos;s override ({override.at.slice(0, 10)}): {override.reason}
+            Planned on {override.by.name}&apos;s override ({dateText(override.at, shopTimeZone())}): {override.reason}
           </p>
         ) : job.status === "intake" ? (
           <p className="mt-1 text-sm">Planning this kit needs the shop owner&apos;s override, with the reason recorded.</p>

@@ -1,14 +1,14 @@
 "use client";
 
 import { formatLength, type LengthUnits } from "@/geometry";
+import { dateText } from "@/model/dates";
 import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import type { CaseRow, KitRow, LibraryKind, RigRow, RowBase } from "../../../_ui/query/types";
 
 const L = (mm: number | undefined, units: LengthUnits) => (mm === undefined ? "—" : formatLength(mm, units, { digits: units === "mm" ? 2 : 3 }));
-const when = (iso: string) => new Date(iso).toLocaleDateString(undefined, { year: "numeric", month: "short", day: "numeric" });
 
-function common<T extends RowBase>(kind: LibraryKind) {
+function common<T extends RowBase>(kind: LibraryKind, zone: string) {
   const h = createColumnHelper<T>();
   return {
     name: h.accessor((r) => r.name, {
@@ -28,7 +28,7 @@ function common<T extends RowBase>(kind: LibraryKind) {
       header: "Changed",
       cell: (c) => (
         <span className="text-ink-2">
-          {when(c.getValue())} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
+          {dateText(c.getValue(), zone)} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
         </span>
       ),
     }),
@@ -37,9 +37,9 @@ function common<T extends RowBase>(kind: LibraryKind) {
 
 const num = (text: string) => <span className="num">{text}</span>;
 
-export function caseColumns(units: LengthUnits): ColumnDef<CaseRow, unknown>[] {
+export function caseColumns(units: LengthUnits, zone: string): ColumnDef<CaseRow, unknown>[] {
   const h = createColumnHelper<CaseRow>();
-  const c = common<CaseRow>("cases");
+  const c = common<CaseRow>("cases", zone);
   return [
     c.name,
     h.display({
@@ -58,9 +58,9 @@ export function caseColumns(units: LengthUnits): ColumnDef<CaseRow, unknown>[] {
   ] as ColumnDef<CaseRow, unknown>[];
 }
 
-export function kitColumns(units: LengthUnits): ColumnDef<KitRow, unknown>[] {
+export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, unknown>[] {
   const h = createColumnHelper<KitRow>();
-  const c = common<KitRow>("kits");
+  const c = common<KitRow>("kits", zone);
   return [
     c.name,
     h.accessor((r) => r.data.boreMm, { id: "boreMm", header: "Bore", cell: (c) => num(L(c.getValue(), units)) }),
@@ -82,9 +82,9 @@ export function kitColumns(units: LengthUnits): ColumnDef<KitRow, unknown>[] {
   ] as ColumnDef<KitRow, unknown>[];
 }
 
-export function rigColumns(units: LengthUnits): ColumnDef<RigRow, unknown>[] {
+export function rigColumns(units: LengthUnits, zone: string): ColumnDef<RigRow, unknown>[] {
   const h = createColumnHelper<RigRow>();
-  const c = common<RigRow>("rigs");
+  const c = common<RigRow>("rigs", zone);
   return [
     c.name,
     h.accessor((r) => r.data.headDiameterMm, { id: "headDiameterMm", header: "Head ⌀", cell: (c) => num(L(c.getValue(), units)) }),

@@ -32,7 +32,8 @@ const SORTABLE: Record<LibraryKind, string[]> = {
 };
 
 /** One shelf of the library as a table that sorts, filters and pages on the server. */
-export function LibraryList({ kind, units }: { kind: LibraryKind; units: LengthUnits }) {
+/** `timeZone`: the shop's, for the dates in the table. */
+export function LibraryList({ kind, units, timeZone }: { kind: LibraryKind; units: LengthUnits; timeZone: string }) {
   const t = useServerTable({ sort: "name" });
   const list = useLibraryList(kind, t.params);
   const [problem, setProblem] = useState<string | null>(null);
@@ -40,7 +41,7 @@ export function LibraryList({ kind, units }: { kind: LibraryKind; units: LengthU
   const words = KIND_WORDS[kind];
 
   const columns = useMemo(() => {
-    const base = (kind === "cases" ? caseColumns(units) : kind === "kits" ? kitColumns(units) : rigColumns(units)) as ColumnDef<RowBase, unknown>[];
+    const base = (kind === "cases" ? caseColumns(units, timeZone) : kind === "kits" ? kitColumns(units, timeZone) : rigColumns(units, timeZone)) as ColumnDef<RowBase, unknown>[];
     const actions: ColumnDef<RowBase, unknown> = {
       id: "actions",
       header: () => <span className="sr-only">Actions</span>,
@@ -61,7 +62,7 @@ export function LibraryList({ kind, units }: { kind: LibraryKind; units: LengthU
       ),
     };
     return [...base.map((c) => ({ ...c, enableSorting: SORTABLE[kind].includes(c.id ?? "") })), actions];
-  }, [kind, units, archive, remove]);
+  }, [kind, units, timeZone, archive, remove]);
 
   const filtered = Boolean(t.params.q) || t.archived;
   const addLink = (

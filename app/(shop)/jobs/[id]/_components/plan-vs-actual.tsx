@@ -1,4 +1,6 @@
 import type { Verification } from "@/db/verification";
+import { shopTimeZone } from "@/db/settings";
+import { dateTimeText } from "@/model/dates";
 
 const STATE = { ok: ["within", "text-clear"], fail: ["outside", "text-interfere"], missing: ["missing", "text-tight"] } as const;
 
@@ -8,7 +10,7 @@ export function PlanVsActual({ verification, at }: { verification: Verification;
   return (
     <div className="flex flex-col gap-2">
       <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-clear bg-clear-soft" : verdict === "fail" ? "border-interfere bg-interfere-soft" : "border-tight bg-tight-soft"}`} data-testid="verdict">
-        {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {at.slice(0, 16).replace("T", " ")}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
+        {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {dateTimeText(at, shopTimeZone())}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
       </p>
       <div className="card overflow-x-auto">
         <table className="w-full text-sm">
