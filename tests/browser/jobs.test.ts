@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
 import { DEMO, signIn, uniqueEmail, waitForMail } from "../support/http";
 import { insertExampleStudy, me, readPdf } from "../integration/jobs-support";
+import { measurePdf } from "../integration/jobs-pdf-measure";
 
 let browser: Browser;
 let studyId: string;
@@ -127,10 +128,21 @@ describe("a job in the browser, from the study to verified", () => {
     for (const c of [/eye protection/, /without crushing it/, /bit and every fastener/, /Remove every chip/, /legal class/, /qualified machinist/]) expect(cardCautions).toMatch(c);
     await bench.emulateMedia({ media: "print" });
     await screenshot(bench, "jobs-06-setup-card-print-preview");
-    // The figures on one page, then the plan and the section each on a landscape page of its own.
+    // The figures on one page, then the plan and the section each on a landscape page of its own, printed at
+    // the scale the caption states: a painted box of the drawing's printed size, measured in the print.
+    const sheets = await bench.getByTestId("drawing-page").evaluateAll((els) => els.map((e) => ({ scale: Number(e.getAttribute("data-scale")), widthMm: Number(e.getAttribute("data-width-mm")), caption: e.textContent ?? "" })));
+    expect(sheets.length).toBe(2);
     for (const format of ["A4", "Letter"] as const) {
-      const printed = await bench.pdf({ format, printBackground: true });
+      const printed = await bench.pdf({ format, printBackground: true, preferCSSPageSize: true });
       expect(readPdf(printed).pages, `${format} print`).toBe(3);
+      const pages = await measurePdf(new Uint8Array(printed));
+      sheets.forEach((sheet, i) => {
+        const page = pages[i + 1];
+        expect(page.widthMm, `${format} page ${i + 2} is landscape`).toBeGreaterThan(page.heightMm);
+        expect(sheet.caption).toContain(`Scale 1:${1 / sheet.scale}`);
+        const drawn = page.boxes.filter((b) => Math.abs(b.widthMm - sheet.widthMm) < 0.5);
+        expect(drawn.length, `${format} page ${i + 2}: a box ${sheet.widthMm} mm wide`).toBeGreaterThan(0);
+      });
     }
     await bench.emulateMedia({ media: "screen" });
     const download = await shop.request.get(`/api/v1/jobs/${jobId}/setup-card.pdf`);
