@@ -1,7 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type DepthStop, chooseDepthStop, depthStopWorkBound, searchDepthStop } from "../../geometry/depth-stop";
-import { BoringRigSchema, MAX_GROOVES, MAX_SHIMS_PER_SIZE, MAX_SHIM_SIZES } from "../../geometry/schema";
+import { evaluateStudy } from "../../geometry/evaluate";
+import { BoringRigSchema, MAX_GROOVES, MAX_SHIMS_PER_SIZE, MAX_SHIM_SIZES, StudySchema } from "../../geometry/schema";
+import { roundStudyInput, testRig } from "./fixtures";
 
 const TOL = 1e-9;
 
@@ -140,6 +142,19 @@ describe("depth stop search", () => {
     // 21⁴ per half instead of the 21⁸ ≈ 3.8·10¹⁰ stacks of a full listing.
     expect(statesVisited).toBeLessThanOrEqual(depthStopWorkBound(rig));
     expect(depthStopWorkBound(rig)).toBeLessThan(21 ** 4 * (2 + 5 * MAX_GROOVES) + 1);
+  });
+
+  it("evaluates a whole study whose rig has five sizes of twenty shims of odd thicknesses", () => {
+    const input = roundStudyInput();
+    const odd = [0.0137, 0.0291, 0.0433, 0.0577, 0.0711];
+    const study = StudySchema.parse({
+      ...input,
+      rig: { ...testRig, shims: odd.map((thicknessMm) => ({ thicknessMm, count: 20 })) },
+    });
+    const stop = evaluateStudy(study).kits[0].rig?.depthStop;
+    expect(stop?.reached).toBe(true);
+    expect(stop?.overshootMm).toBeGreaterThanOrEqual(-TOL);
+    expect(stop?.overshootMm).toBeLessThan(0.0137);
   });
 
   it("refuses a stock beyond what a shop has, in words", () => {

@@ -77,6 +77,11 @@ describe("polygon validity by sweep", () => {
     const r = OutlineSchema.safeParse({ kind: "polygon", pointsMm: twice });
     expect(r.success).toBe(false);
     expect(r.error?.issues[0].message).toBe("corner 5 repeats corner 1: the outline must go round once without coming back to a corner");
+    // As a case's deck it is refused at the deck's corners.
+    const input = roundStudyInput();
+    input.case.deck = { kind: "polygon", pointsMm: twice.map(([x, y]): P => [x * 12 - 60, y * 12 - 60]) };
+    const s = StudySchema.safeParse(input);
+    expect(s.error?.issues.map((i) => i.path.join("."))).toContain("case.deck.pointsMm");
   });
 
   it("refuses a corner given twice in a row, naming both", () => {
