@@ -127,6 +127,8 @@ export const auth = betterAuth({
       creatorRole: "owner",
       allowUserToCreateOrganization: true,
       invitationExpiresIn: 7 * 24 * 60 * 60,
+      // Holding an invitation's id is not proof of owning its address: only a confirmed address may accept.
+      requireEmailVerificationOnInvitation: true,
       cancelPendingInvitationsOnReInvite: true,
       sendInvitationEmail: async ({ email, role, organization: shop, inviter, id }) => {
         await sendMail(

@@ -101,6 +101,11 @@ describe("in the browser", () => {
     await builder.getByLabel("Password").fill("a-long-builder-password");
     await builder.getByRole("button", { name: "Create account" }).click();
     await builder.waitForURL("**/invite/**");
+    // Only a confirmed address may accept: the page asks for the link mailed at sign-up, which leads back.
+    await expect.poll(() => builder.getByRole("heading", { name: /Confirm your e-mail/ }).count()).toBe(1);
+    const confirmation = new URL((await waitForMail(builderEmail, /confirm/i)).links.find((l) => l.includes("/verify-email"))!);
+    await builder.goto(confirmation.pathname + confirmation.search);
+    await builder.waitForURL("**/invite/**");
     await builder.getByRole("button", { name: "Accept the invitation" }).click();
     await builder.waitForURL("**/home");
     expect(await builder.getByTestId("who").textContent()).toContain("Quillfern Engine Works");

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { countRows, DEMO, Http, signIn, signUp, uniqueEmail, waitForMail } from "../support/http";
+import { confirmEmail, countRows, DEMO, Http, signIn, signUp, uniqueEmail, waitForMail } from "../support/http";
 
 type ErrorBody = { error: { code: string; message: string; fields?: Record<string, string> } };
 
@@ -68,10 +68,13 @@ describe("sign-in", () => {
   });
 
   it("rate-limits repeated attempts from one address with 429", async () => {
+    // A fresh account, so the failures count against no one else (sign-in also limits failures per account).
+    const email = uniqueEmail("limited");
+    await signUp("Limited Person", email);
     const http = new Http();
     const statuses: number[] = [];
     for (let i = 0; i < 8; i++) {
-      statuses.push((await http.post("/api/auth/sign-in/email", { email: DEMO.owner.email, password: "wrong-password-here" })).status);
+      statuses.push((await http.post("/api/auth/sign-in/email", { email, password: "wrong-password-here" })).status);
     }
     expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
     expect(statuses).toContain(429);
@@ -118,6 +121,11 @@ describe("invitations", () => {
     const builder = await signUp("Invited Builder", builderEmail);
     // An invited person gets no shop of their own on the way.
     expect(await countRows("organization")).toBe(shopsBefore);
+    // Holding the invitation's id is not enough: the address must be confirmed first.
+    const unconfirmed = await builder.post("/api/auth/organization/accept-invitation", { invitationId });
+    expect(unconfirmed.status, unconfirmed.text).toBe(403);
+    expect(unconfirmed.json).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+    await confirmEmail(builder, builderEmail);
     expect((await builder.post("/api/auth/organization/accept-invitation", { invitationId })).status).toBe(200);
     const me = await builder.get("/api/v1/me");
     expect(me.json).toMatchObject({ me: { role: "builder", shopName: "Inviting Owner's shop" } });

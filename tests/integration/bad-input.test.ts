@@ -27,7 +27,7 @@ import {
   QuestionSchema,
   ReadingsBodySchema,
 } from "@/model/schemas/jobs";
-import { Http, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
+import { confirmEmail, Http, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
 import { insertExampleStudy, jobBody, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, newStudy, ok, rigData } from "./library-fixtures";
 
@@ -284,6 +284,7 @@ beforeAll(async () => {
   const mail = await waitForMail(customerEmail, /shares the plan/);
   const invitationId = mail.links.find((l) => l.includes("/invite/"))!.split("/invite/")[1];
   customer = await signUp("Wren Tallow", customerEmail);
+  await confirmEmail(customer, customerEmail);
   ok(await customer.post("/api/auth/organization/accept-invitation", { invitationId }));
   ok(await customer.post("/api/auth/organization/set-active", { organizationId: shopId }));
   expect(ok<{ me: { role: string; shopId: string } }>(await customer.get("/api/v1/me")).me).toMatchObject({ role: "customer", shopId });

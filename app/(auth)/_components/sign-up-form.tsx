@@ -21,7 +21,10 @@ export function SignUpForm({ next, email }: { next?: string; email?: string }) {
 
   async function onSubmit(values: SignUpValues) {
     setNotice(null);
-    const result = await callApi("/api/auth/sign-up/email", { body: { ...values, callbackURL: "/home?verified=1" } });
+    const result = await callApi("/api/auth/sign-up/email", {
+      // Coming from an invitation, the confirmation link leads back to it (only a confirmed address may accept).
+      body: { ...values, callbackURL: next?.startsWith("/invite/") ? safeNext(next) : "/home?verified=1" },
+    });
     if (!result.ok) {
       for (const [field, message] of Object.entries(result.error.fields ?? {})) {
         if (field === "name" || field === "email" || field === "password") form.setError(field, { message });

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { getSessionUser } from "@/db/access";
 import { findInvitation } from "@/db/invitations";
-import { AcceptInvitation } from "./accept";
+import { AcceptInvitation, ConfirmFirst } from "./accept";
 
 export const metadata: Metadata = { title: "Invitation" };
 
@@ -48,5 +48,6 @@ export default async function InvitePage({ params }: { params: Promise<{ id: str
       </div>
     );
   }
+  if (!session.user.emailVerified) return <ConfirmFirst id={id} email={session.user.email} shopName={invitation.shopName} />;
   return <AcceptInvitation id={id} shopName={invitation.shopName} role={role} />;
 }
