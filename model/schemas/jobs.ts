@@ -1,8 +1,14 @@
 // Request shapes of the jobs, photos, payments and consult API. No server-only code: the forms use them too.
 import { z } from "zod";
+import { BIDI_CONTROL } from "@/model/names";
 import { JOB_STATUSES } from "@/model/job-status";
 
-const text = (max: number, what: string) => z.string({ error: `${what} must be text.` }).trim().max(max, `Keep ${what.toLowerCase()} to ${max} characters or fewer.`);
+const text = (max: number, what: string) =>
+  z
+    .string({ error: `${what} must be text.` })
+    .trim()
+    .max(max, `Keep ${what.toLowerCase()} to ${max} characters or fewer.`)
+    .refine((s) => !BIDI_CONTROL.test(s), { message: `Remove the invisible text-direction characters from ${what.toLowerCase()}.` });
 const Id = z.string({ error: "Expected an id." }).min(1, "Expected an id.").max(100, "That is not an id.");
 
 export const CURRENCIES = ["eur", "usd", "gbp", "chf", "sek", "nok", "dkk", "pln", "czk", "cad", "aud"] as const;
@@ -64,8 +70,8 @@ export const JobMoveSchema = z.strictObject({
 });
 
 export const JobListQuerySchema = z.object({
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+  page: z.coerce.number({ error: "page is a whole number from 1." }).int("page is a whole number from 1.").min(1, "page is a whole number from 1.").max(100_000, "page is at most 100 000.").default(1),
+  pageSize: z.coerce.number({ error: "pageSize is a whole number from 1 to 100." }).int("pageSize is a whole number from 1 to 100.").min(1, "pageSize is a whole number from 1 to 100.").max(100, "pageSize is a whole number from 1 to 100.").default(20),
   status: z.enum(JOB_STATUSES, { error: "Unknown status." }).optional(),
   q: z.string().trim().max(100).optional(),
   sort: z.enum(["updatedAt", "createdAt", "reference", "title", "customerName", "status"], { error: "Unknown sort field." }).optional(),
