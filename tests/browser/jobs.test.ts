@@ -164,5 +164,6 @@ describe("a job in the browser, from the study to verified", () => {
     await screenshot(bench, "jobs-07-job-closed");
     await shop.close();
     await home.close();
-  });
+    // One person's whole afternoon in the shop, two browsers and the payment fake: longer than one step.
+  }, 120_000);
 });
