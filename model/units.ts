@@ -28,7 +28,7 @@ export function fixedText(v: number, digits: number, minus = MINUS): string {
   return v < 0 && Number(t) !== 0 ? `${minus}${t}` : t;
 }
 
-/** A length in the given units as a plain number (mm → in divides by 25.4). */
+/** A length in the given units as a plain number (inches are the exact inch of geometry/units.ts). */
 export function toUnits(mm: number, units: LengthUnits): number {
   return units === "in" ? mmToIn(mm) : mm;
 }
@@ -169,4 +169,9 @@ export function messageInUnits(message: string, units: LengthUnits): string {
       return lengthLabel(v, units);
     })
     .replace(SPEED_FIGURE, (_, n: string) => speedLabel(Number(n), units));
+}
+
+/** A limit or a bound a value is compared with, as typed in a field plus its unit: "200 mm", "7.874 in". */
+export function boundLabel(mm: number, units: LengthUnits): string {
+  return `${lengthFieldText(mm, units)} ${UNIT_TEXT[units]}`;
 }

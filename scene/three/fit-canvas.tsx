@@ -3,6 +3,7 @@
 import { OrbitControls } from "@react-three/drei";
 import { Canvas } from "@react-three/fiber";
 import type { FitStore } from "../store";
+import { quietClockDeprecation } from "./console";
 import { CameraRig, FrameRenderer, type FitCanvasApi } from "./frame";
 import { FitScene } from "./fit-scene";
 import { cameraPosition, type ViewState } from "./view";
@@ -16,6 +17,7 @@ export interface FitCanvasProps {
 }
 
 const START = cameraPosition("three-quarter", 0).toArray();
+quietClockDeprecation();
 
 /** The 3D fit view: case, planned cut, skirt and flange, interference, drawn from the core's result in the store. */
 export default function FitCanvas({ store, view, onReady }: FitCanvasProps) {

@@ -4,6 +4,9 @@ import { type Browser, type BrowserContext, type Page, chromium } from "playwrig
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { evaluateStudy, parseStudy } from "@/geometry";
 import { fitState } from "@/scene/fit";
+import { me, insertExampleStudy } from "../integration/jobs-support";
+import { newPerson, signInThroughForm } from "../support/browser";
+import { DEMO, signIn } from "../support/http";
 
 // The fit studio on the public example page, in Chromium with WebGL on SwiftShader. The verdict
 // threshold is whatever the core gives on the slider's own grid; the page must agree with it.
@@ -13,6 +16,7 @@ const STEP = 0.05;
 let browser: Browser;
 let context: BrowserContext;
 let page: Page;
+const consoleLines: string[] = [];
 
 const example = parseStudy(JSON.parse(readFileSync("public/examples/study.json", "utf8")));
 
@@ -69,6 +73,7 @@ beforeAll(async () => {
   });
   context = await browser.newContext({ viewport: { width: 1400, height: 1000 }, acceptDownloads: true });
   page = await context.newPage();
+  page.on("console", (m) => consoleLines.push(`${m.type()}: ${m.text()}`));
   await page.goto(`${inject("baseURL")}/try`);
   await page.waitForSelector("[data-testid=view] canvas", { timeout: 30_000 });
   await drawn(30_000);
@@ -86,6 +91,10 @@ describe("the fit studio on the example study", () => {
     for (let i = 0; i < px.length; i += 3) if (Math.abs(px[i] - 0xf1) + Math.abs(px[i + 1] - 0xee) + Math.abs(px[i + 2] - 0xe6) > 30) drawn++;
     expect(drawn / (px.length / 3)).toBeGreaterThan(0.08);
     await shot("first-load");
+  });
+
+  it("loads without errors and without three.js warnings (the Clock deprecation included) in the console", async () => {
+    expect(consoleLines.filter((l) => l.startsWith("error:") || l.includes("THREE."))).toEqual([]);
   });
 
   it("turns from interference to clear at the cut diameter the core gives, stepping the slider", async () => {
@@ -202,5 +211,55 @@ describe("the fit studio on the example study", () => {
     await expect.poll(() => page.getByTestId("results").locator("h2").textContent()).toBe(example.kits[1].name);
     await page.evaluate(() => window.scrollTo(0, 0));
     await shot("overlay");
+  });
+});
+
+describe("the study page", () => {
+  let shop: BrowserContext;
+  let bench: Page;
+  let studyId: string;
+  beforeAll(async () => {
+    const owner = await signIn(DEMO.owner.email, DEMO.owner.password);
+    const o = await me(owner);
+    ({ studyId } = await insertExampleStudy(o.shopId, o.userId, `Studio study ${Date.now()}`));
+    shop = await newPerson(browser, { width: 1400, height: 1000 });
+    bench = await shop.newPage();
+    await signInThroughForm(bench, DEMO.builder.email, DEMO.builder.password);
+    await bench.goto(`/studies/${studyId}`);
+    await bench.getByTestId("kit-results").waitFor({ timeout: 30_000 });
+  });
+  afterAll(async () => {
+    await shop?.close();
+  });
+
+  it("has one units toggle, the header's", async () => {
+    expect(await bench.getByRole("group", { name: "Length units" }).count()).toBe(1);
+    expect(await bench.getByRole("group", { name: "Units of this form" }).count()).toBe(0);
+  });
+
+  it("while the cut field holds a half-typed value, says the results are for the last valid one and names it", async () => {
+    const field = bench.getByRole("region", { name: "Cut plan" }).getByLabel("Cut diameter");
+    const planned = bench.getByTestId("kit-results").getByTestId("cut-diameter");
+    await field.fill("55.5");
+    await expect.poll(() => planned.textContent()).toContain("55.50 mm");
+    await expect.poll(() => bench.getByTestId("stale-results").count()).toBe(0);
+    await field.fill("\u221255");
+    const notice = bench.getByTestId("stale-results");
+    await expect.poll(() => notice.count()).toBe(1);
+    expect(await notice.textContent()).toMatch(/Cut diameter reads “\u221255”; the results use 55\.50 mm/);
+    // The results themselves still show the last valid value, never the typed one without its sign.
+    expect(await planned.textContent()).toContain("55.50 mm");
+    await field.fill("55.6");
+    await expect.poll(() => notice.count()).toBe(0);
+    await expect.poll(() => planned.textContent()).toContain("55.60 mm");
+  });
+
+  it("keeps the studio's least cut as the least cut: the plan's fields stay blank and the figure follows", async () => {
+    await bench.getByTestId("use-least-cut").click();
+    const field = bench.getByRole("region", { name: "Cut plan" }).getByLabel("Cut diameter");
+    await expect.poll(() => field.inputValue()).toBe("");
+    await expect.poll(() => bench.getByTestId("cut-mode").textContent()).toMatch(/least cut and follows the readings/);
+    // The plan shows the least cut as the least cut (it follows the readings), not as a number someone set.
+    await expect.poll(() => bench.getByTestId("kit-results").getByTestId("cut-diameter").textContent()).toMatch(/Cut diameter \(least cut\)/);
   });
 });

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
   areaLabel,
+  boundLabel,
   diameterLabel,
   ftPerMinToMPerMin,
   lengthFieldText,
@@ -88,6 +89,12 @@ describe("lengths in fields", () => {
         if (back.ok) expect(Math.abs((back.value ?? Number.NaN) - mm)).toBeLessThanOrEqual(units === "mm" ? 0.0005 + 1e-9 : 0.0127 + 1e-9);
       }),
     );
+  });
+
+  it("write a bound as it would be typed, with its unit", () => {
+    // 200 mm / 25.4 = 7.874 in (exact inch)
+    expect(boundLabel(200, "mm")).toBe("200 mm");
+    expect(boundLabel(200, "in")).toBe("7.874 in");
   });
 
   it("round a length to what is shown, in mm", () => {

@@ -1,14 +1,12 @@
-import { mmToIn, type LengthUnits } from "@/geometry";
-import { parseLengthText, parseNumberText } from "./number-text";
+import type { LengthUnits } from "@/geometry";
+import { boundLabel as limitText, parseLengthText, parseNumberText } from "@/model/units";
 import { FIELD_WORDS, PLAUSIBLE_MAX_MM } from "./plausible";
 
 export type Path = (string | number)[];
 export type TextIssue = { path: Path; message: string };
 
 /** Shows a limit given in mm in the form's units ("200 mm", "7.874 in"). */
-export function limitText(mm: number, units: LengthUnits): string {
-  return units === "in" ? `${Number(mmToIn(mm).toFixed(3))} in` : `${Number(mm.toFixed(3))} mm`;
-}
+export { boundLabel as limitText } from "@/model/units";
 
 const lastName = (path: Path) => [...path].reverse().find((p): p is string => typeof p === "string") ?? "";
 

@@ -3,6 +3,38 @@
 import { useEffect, useId, useRef, useState } from "react";
 import { lengthFieldText, lengthLabel, parseLengthText } from "@/model/units";
 
+/** A figure marked on the slider's track: a point, or a band from one value to another. */
+export type TrackMark = { readonly label: string; readonly fromMm: number; readonly toMm?: number; readonly tone: "accent" | "interfere" };
+
+const MARK_COLOR = { accent: "bg-accent", interfere: "bg-interfere" } as const;
+
+/** The marks under a range input, placed where its thumb would stand (the thumb is about 16 px wide). */
+function TrackMarks({ marks, minMm, maxMm }: { marks: readonly TrackMark[]; minMm: number; maxMm: number }) {
+  const at = (mm: number) => `calc(8px + (100% - 16px) * ${Math.min(1, Math.max(0, (mm - minMm) / (maxMm - minMm)))})`;
+  return (
+    <div className="flex flex-col gap-0.5" data-testid="track-marks">
+      <div className="relative h-1.5" aria-hidden>
+        {marks.map((m) =>
+          m.toMm === undefined ? (
+            <span key={m.label} className={`absolute top-0 h-1.5 w-0.5 ${MARK_COLOR[m.tone]}`} style={{ left: at(m.fromMm) }} />
+          ) : (
+            <span key={m.label} className={`absolute top-0.5 h-0.5 opacity-60 ${MARK_COLOR[m.tone]}`} style={{ left: at(m.fromMm), width: `calc(${at(m.toMm)} - ${at(m.fromMm)})` }} />
+          ),
+        )}
+      </div>
+      <p className="text-xs text-ink-3">
+        {marks.map((m, i) => (
+          <span key={m.label} className="num">
+            {i > 0 ? " · " : ""}
+            <span className={`mr-1 inline-block h-2 w-2 rounded-sm align-middle ${MARK_COLOR[m.tone]}`} aria-hidden />
+            {m.label}
+          </span>
+        ))}
+      </p>
+    </div>
+  );
+}
+
 export interface CutSliderProps {
   readonly label: string;
   readonly valueMm: number;
@@ -11,6 +43,8 @@ export interface CutSliderProps {
   readonly stepMm: number;
   readonly units: "mm" | "in";
   readonly hint?: string;
+  /** Figures marked on the track (the rig's reach, the largest safe cut). */
+  readonly marks?: readonly TrackMark[];
   readonly testId: string;
   /** While dragging or stepping: the new value and the input's time stamp. */
   readonly onLive: (mm: number, at: number) => void;
@@ -19,7 +53,7 @@ export interface CutSliderProps {
 }
 
 /** A slider and a number field for one length, in the user's units; the slider works in mm steps. */
-export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, testId, onLive, onCommit }: CutSliderProps) {
+export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, marks, testId, onLive, onCommit }: CutSliderProps) {
   const id = useId();
   const range = useRef<HTMLInputElement>(null);
   // While the field has focus it keeps what is typed; otherwise it shows the current value.
@@ -42,11 +76,13 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
 
   const submit = () => {
     if (typed === null) return;
+    // While the text is wrong the results stay at the last valid value, and the message names it.
+    const basis = ` The results are for ${lengthLabel(valueMm, units)}, the last valid value.`;
     const r = parseLengthText(text, units);
-    if (!r.ok) return setError(`${r.message[0].toUpperCase()}${r.message.slice(1)}.`);
-    if (r.value === undefined) return setError("Enter a number.");
+    if (!r.ok) return setError(`${r.message[0].toUpperCase()}${r.message.slice(1)}.${basis}`);
+    if (r.value === undefined) return setError(`Enter a number.${basis}`);
     const mm = r.value;
-    if (mm < minMm || mm > maxMm) return setError(`Enter a value from ${lengthLabel(minMm, units)} to ${lengthLabel(maxMm, units)}.`);
+    if (mm < minMm || mm > maxMm) return setError(`Enter a value from ${lengthLabel(minMm, units)} to ${lengthLabel(maxMm, units)}.${basis}`);
     setError(null);
     setTyped(null);
     onCommit(mm);
@@ -93,6 +129,11 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, t
           }}
         />
       </div>
+      {marks && marks.length > 0 ? (
+        <div className="pr-[7.75rem]">
+          <TrackMarks marks={marks} minMm={minMm} maxMm={maxMm} />
+        </div>
+      ) : null}
       {error ? (
         <p id={`${id}-e`} className="field-error" role="alert">
           {error}

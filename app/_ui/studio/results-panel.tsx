@@ -1,7 +1,7 @@
 "use client";
 
 import { memo } from "react";
-import type { CutResult, KitResult, StudyResult } from "@/geometry";
+import type { KitResult, StudyResult } from "@/geometry";
 import { fitState, governingClearanceMm } from "@/scene/fit";
 import { diameterLabel, fixedText, lengthLabel, messageInUnits, signedLengthLabel, volumeLabel } from "@/model/units";
 import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
@@ -9,13 +9,14 @@ import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 interface Props {
   readonly result: StudyResult;
   readonly kitIndex: number;
-  readonly proposed: CutResult | null;
+  /** The existing mouth's diameter when it is round (null for an outline), to say when the largest safe cut is smaller. */
+  readonly mouthDiameterMm: number | null;
   readonly units: "mm" | "in";
   readonly large: boolean;
 }
 
 /** The fit in words and numbers: the text alternative to the 3D view, read out when it changes. */
-export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, proposed, units, large }: Props) {
+export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, mouthDiameterMm, units, large }: Props) {
   const k: KitResult = result.kits[kitIndex];
   const state = fitState(k, result);
   const L = result.limits.values;
@@ -27,12 +28,13 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, propo
     ["Skirt", `${diameterLabel(k.skirt.diameterMm, units)}, ${f(k.skirt.protrusionMm)} below the deck`, k.skirt.gasketMm > 0 ? `base gasket ${f(k.skirt.gasketMm)} counted` : "no gasket counted"],
   ];
   if (k.cut) {
-    rows.push(["Planned cut", `${diameterLabel(k.cut.diameterMm, units)} × ${f(k.cut.depthMm)} deep`, k.cut.diameterProposed && k.cut.depthProposed ? "proposed by Borewright" : k.cut.proposed ? `${k.cut.diameterProposed ? "diameter" : "depth"} proposed by Borewright` : "as set"]);
+    rows.push(["Planned cut", `${diameterLabel(k.cut.diameterMm, units)} × ${f(k.cut.depthMm)} deep`, k.cut.diameterProposed && k.cut.depthProposed ? "the least cut for this kit" : k.cut.proposed ? `the least ${k.cut.diameterProposed ? "diameter" : "depth"} for this kit` : "as set"]);
     rows.push(["Depth clearance", k.depthClearanceMm === null ? "no step left" : signedLengthLabel(k.depthClearanceMm, units), `minimum ${f(L.minDepthClearanceMm)}`]);
   }
-  if (proposed) rows.push(["Least cut that clears", `${diameterLabel(proposed.diameterMm, units)} × ${f(proposed.depthMm)} deep`]);
+  if (k.leastCut) rows.push(["Least cut that clears", `${diameterLabel(k.leastCut.diameterMm, units)} × ${f(k.leastCut.depthMm)} deep`]);
   if (k.thinnestWall) rows.push(["Thinnest wall", `${f(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}`, `needs ${f(k.thinnestWall.requiredMm)}${k.thinnestWall.ok ? "" : " — too thin"}`]);
-  rows.push(["Largest cut the case takes", diameterLabel(k.maxCutDiameterMm, units)]);
+  const belowMouth = mouthDiameterMm !== null && k.maxCutDiameterMm < mouthDiameterMm;
+  rows.push(["Largest cut the case takes", diameterLabel(k.maxCutDiameterMm, units), belowMouth ? "smaller than the existing mouth: a wall is already below the minimum before any cut" : undefined]);
   rows.push(["Stud pattern", k.studMatch.ok ? "lines up" : `off by ${f(k.studMatch.worstOffsetMm)}`]);
   const d = k.displacementCc;
   rows.push(["Displacement", `${d.stockRounded} → ${d.kitRounded} cc`, `${d.change >= 0 ? "+" : ""}${fixedText(d.change, 1)} cc`]);

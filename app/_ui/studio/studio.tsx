@@ -2,11 +2,10 @@
 
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
-import { lengthLabel } from "@/model/units";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
 import { drawnKey, type ViewState } from "@/scene/three/view";
 import { Cautions } from "./cautions";
-import { CutSlider } from "./cut-controls";
+import { CutCard } from "./cut-card";
 import { Drawings } from "./drawings";
 import { download, slug } from "./download";
 import { FitView } from "./fit-view";
@@ -14,7 +13,7 @@ import { Legend } from "./legend";
 import { KitSwitcher, SmallMultiples } from "./lineup";
 import { ResultsPanel } from "./results-panel";
 import { type CompareMode, Toolbar } from "./toolbar";
-import { type CutDraft, useLiveFit, useProposedCuts, useSettled } from "./use-live-fit";
+import { type CutDraft, useLiveFit, useSettled } from "./use-live-fit";
 
 export interface StudioProps {
   readonly study: Study;
@@ -30,8 +29,6 @@ export interface StudioProps {
   readonly lockCustomerMode?: boolean;
 }
 
-const STEP_MM = 0.05;
-
 /** The fit studio: the 3D view, the results in words, the cut controls, the kit lineup and the drawings. */
 export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
@@ -40,7 +37,6 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
   // spring back until the deferred render lands.
   const live = useDeferredValue(snap);
   const settled = useSettled(live);
-  const proposed = useProposedCuts(study);
   const [customerChosen, setCustomer] = useState(customerMode);
   const customer = lockCustomerMode || customerChosen;
   const [compare, setCompare] = useState<CompareMode>("one");
@@ -57,32 +53,24 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
     api.current = a;
   }, []);
 
-  const draft = useRef<CutDraft>({ diameterMm: study.cut?.diameterMm, depthMm: study.cut?.depthMm });
+  // A change starts from the cut on show (the study's, or the last one set here), so a new study from the page is followed.
   const change = useCallback(
     (patch: CutDraft, final: boolean, at?: number) => {
-      const next = { ...draft.current, ...patch };
+      const cur = store.get().study.cut;
+      const next = { diameterMm: cur?.diameterMm, depthMm: cur?.depthMm, ...patch };
       // A drag's end repeats the last live value: save it without evaluating it again.
-      const same = next.diameterMm === draft.current.diameterMm && next.depthMm === draft.current.depthMm;
-      draft.current = next;
+      const same = next.diameterMm === cur?.diameterMm && next.depthMm === cur?.depthMm;
       if (!(final && same)) setCut(next, at);
       onCutChange?.(next, final);
     },
-    [setCut, onCutChange],
+    [store, setCut, onCutChange],
   );
 
-  const ranges = useMemo(() => {
-    const skirts = result.kits.map((k) => k.skirt.diameterMm);
-    const lo = Math.floor(Math.min(...skirts) - 4);
-    const hi = Math.ceil(Math.max(result.case.maxCutDiameterMm, Math.max(...skirts) + 4));
-    const M = study.case.mouth.depthMm;
-    return { dMin: lo, dMax: Math.max(hi, lo + 2), zMin: 1, zMax: Math.ceil(M + 4) };
-  }, [result, study.case.mouth.depthMm]);
-
   const k = snap.result.kits[snap.kitIndex];
-  const p = proposed[snap.kitIndex];
-  const dNow = k.cut?.diameterMm ?? p?.diameterMm ?? k.skirt.diameterMm;
-  const zNow = k.cut?.depthMm ?? p?.depthMm ?? Math.max(1, k.skirt.protrusionMm);
+  const following = snap.study.cut?.diameterMm === undefined && snap.study.cut?.depthMm === undefined;
   const multi = study.kits.length > 1;
+  const mouth = study.case.mouth.outline;
+  const mouthDiameterMm = mouth.kind === "circle" ? mouth.diameterMm : null;
   const snapshot = () => {
     const url = api.current?.snapshot();
     if (url) download(`${slug(`${study.name ?? "study"}-${k.name}`)}-fit.png`, url);
@@ -117,47 +105,10 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
             </div>
             {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           </div>
-          {!customer && (
-            <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label="Planned cut">
-              <CutSlider
-                label="Cut diameter"
-                testId="cut-diameter"
-                valueMm={dNow}
-                minMm={ranges.dMin}
-                maxMm={ranges.dMax}
-                stepMm={STEP_MM}
-                units={units}
-                hint={p ? `Least that clears this kit: ${lengthLabel(p.diameterMm, units)}` : undefined}
-                onLive={(mm, at) => change({ diameterMm: mm }, false, at)}
-                onCommit={(mm) => change({ diameterMm: mm }, true)}
-              />
-              <CutSlider
-                label="Cut depth"
-                testId="cut-depth"
-                valueMm={zNow}
-                minMm={ranges.zMin}
-                maxMm={ranges.zMax}
-                stepMm={STEP_MM}
-                units={units}
-                hint={p ? `Least for this kit: ${lengthLabel(p.depthMm, units)}` : undefined}
-                onLive={(mm, at) => change({ depthMm: mm }, false, at)}
-                onCommit={(mm) => change({ depthMm: mm }, true)}
-              />
-              <div className="flex flex-wrap gap-2 md:col-span-2">
-                {p && (
-                  <button type="button" className="btn-quiet" onClick={() => change({ diameterMm: p.diameterMm, depthMm: p.depthMm }, true)} data-testid="use-least-cut">
-                    Use the least cut for this kit
-                  </button>
-                )}
-                <button type="button" className="btn-quiet" onClick={() => change({ diameterMm: undefined, depthMm: undefined }, true)}>
-                  Let each kit have its own least cut
-                </button>
-              </div>
-            </div>
-          )}
+          {!customer && <CutCard study={snap.study} result={snap.result} kit={k} units={units} following={following} onChange={change} />}
         </div>
         <aside className="flex min-w-0 flex-col gap-3">
-          <ResultsPanel result={live.result} kitIndex={live.kitIndex} proposed={proposed[live.kitIndex]} units={units} large={customer} />
+          <ResultsPanel result={live.result} kitIndex={live.kitIndex} mouthDiameterMm={mouthDiameterMm} units={units} large={customer} />
           {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           <Legend result={live.result} units={units} large={customer} />
         </aside>

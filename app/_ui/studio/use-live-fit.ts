@@ -47,11 +47,6 @@ export function useLiveFit(study: Study, result: StudyResult, initialKit: number
   return { store, snap, setCut, setKit };
 }
 
-/** The least cut the core proposes for each kit (the study evaluated with no diameter or depth given). */
-export function useProposedCuts(study: Study) {
-  return useMemo(() => evaluateStudy(withCut(study, {})).kits.map((k) => k.cut), [study]);
-}
-
 /** A value that follows `value` but lags behind it while it changes quickly (for heavy panels such as SVG drawings). */
 export function useSettled<T>(value: T, ms = 120): T {
   const [v, setV] = useState(value);

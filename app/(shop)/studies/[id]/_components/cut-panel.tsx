@@ -1,13 +1,14 @@
 "use client";
 
-import type { CutResult, LengthUnits } from "@/geometry";
+import type { KitResult } from "@/geometry";
 import { PairInputs } from "@/app/_ui/form/pair-inputs";
 import { TextField } from "@/app/_ui/form/text-field";
-import { len } from "./fmt";
+import { lengthLabel, type LengthUnits } from "@/model/units";
 import type { StudyFormValues } from "./study-values";
 
-/** The cut plan: diameter and depth (blank: the core proposes them per kit), and the centring offset. */
-export function CutPanel({ units, cut }: { units: LengthUnits; cut: CutResult | null }) {
+/** The cut plan: diameter and depth (blank: each kit's least cut, which follows the readings), and the centring offset. */
+export function CutPanel({ units, kit }: { units: LengthUnits; kit: KitResult | null }) {
+  const least = kit?.leastCut ?? null;
   return (
     <section className="card flex flex-col gap-4 p-4" aria-label="Cut plan">
       <h2 className="font-semibold">Cut plan</h2>
@@ -17,16 +18,16 @@ export function CutPanel({ units, cut }: { units: LengthUnits; cut: CutResult | 
           label="Cut diameter"
           unit={units}
           numeric
-          placeholder={cut?.diameterProposed ? len(cut.diameterMm, units) : "proposed"}
-          hint={cut?.diameterProposed ? `Blank: proposed ${len(cut.diameterMm, units)} for the kit shown.` : "Blank: the least cut that clears."}
+          placeholder={least ? `least cut ${lengthLabel(least.diameterMm, units)}` : "least cut"}
+          hint={least ? `Blank: the least cut for ${kit?.name}, ${lengthLabel(least.diameterMm, units)} now; it follows the readings until you type a number.` : "Blank: the least cut that clears."}
         />
         <TextField<StudyFormValues>
           name="cut.depthMm"
           label="Cut depth"
           unit={units}
           numeric
-          placeholder={cut?.depthProposed ? len(cut.depthMm, units) : "proposed"}
-          hint={cut?.depthProposed ? `Blank: proposed ${len(cut.depthMm, units)}.` : "Blank: deep enough for the skirt."}
+          placeholder={least ? `least ${lengthLabel(least.depthMm, units)}` : "least depth"}
+          hint={least ? `Blank: ${lengthLabel(least.depthMm, units)}, deep enough for the skirt.` : "Blank: deep enough for the skirt."}
         />
       </div>
       <div>

@@ -1,17 +1,16 @@
 import type { KitResult, LengthUnits, StudyResult } from "@/geometry";
 import { Cautions } from "./cautions";
+import { CutFigures, tone } from "./cut-figures";
 import { Figure } from "./figure";
-import { len, signedLen, TONE_CLASS, VERDICT } from "./fmt";
+import { areaLabel, lengthLabel } from "@/model/units";
+import { TONE_CLASS, VERDICT } from "./verdict-words";
 import { REASON_WORDS } from "./reasons";
 import { AlignmentFigures, RigSetup } from "./rig-setup";
 import { WallsTable } from "./walls-table";
 import { WarningsList } from "./warnings-list";
 
-const tone = (mm: number | null, min: number): "clear" | "tight" | "interfere" | undefined =>
-  mm === null ? undefined : mm < 0 ? "interfere" : mm < min ? "tight" : "clear";
-
 /** Everything the core says about one kit in this study, as planned. */
-export function KitResults({ kit, result, units }: { kit: KitResult; result: StudyResult; units: LengthUnits }) {
+export function KitResults({ kit, result, units, mouthDiameterMm }: { kit: KitResult; result: StudyResult; units: LengthUnits; mouthDiameterMm: number | null }) {
   const v = VERDICT[kit.verdict];
   const L = result.limits.values;
   const cut = kit.cut;
@@ -26,47 +25,34 @@ export function KitResults({ kit, result, units }: { kit: KitResult; result: Stu
       </div>
 
       <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
-        <Figure label="Skirt diameter (largest reading)" value={len(kit.skirt.diameterMm, units)} note={`protrudes ${len(kit.skirt.protrusionMm, units)} below the base`} />
+        <Figure label="Skirt diameter (largest reading)" value={lengthLabel(kit.skirt.diameterMm, units)} note={`protrudes ${lengthLabel(kit.skirt.protrusionMm, units)} below the base`} />
         <Figure
           label="Against the existing mouth"
           testId="vs-mouth"
           tone={tone(kit.radialClearanceMm.vsMouth, L.minRadialClearanceMm)}
-          value={interferes ? `interferes ${len(-kit.radialClearanceMm.vsMouth, units)}` : `clears ${len(kit.radialClearanceMm.vsMouth, units)}`}
+          value={interferes ? `interferes ${lengthLabel(-kit.radialClearanceMm.vsMouth, units)}` : `clears ${lengthLabel(kit.radialClearanceMm.vsMouth, units)}`}
           note={
             kit.interference.vsMouth && kit.interference.vsMouth.deepestMm > 0
-              ? `deepest at ${Math.round(kit.interference.vsMouth.angleDeg)}°, ${kit.interference.vsMouth.areaMm2.toFixed(1)} mm² overlap`
+              ? `deepest at ${Math.round(kit.interference.vsMouth.angleDeg)}°, ${areaLabel(kit.interference.vsMouth.areaMm2, units)} overlap`
               : "radial clearance at the deck"
           }
         />
-        <Figure label="Largest cut the case takes" value={len(kit.maxCutDiameterMm, units)} note="keeping every minimum wall, at this centre and depth" />
+        <Figure
+          label="Largest cut the case takes"
+          value={lengthLabel(kit.maxCutDiameterMm, units)}
+          tone={mouthDiameterMm !== null && kit.maxCutDiameterMm < mouthDiameterMm ? "interfere" : undefined}
+          note={
+            mouthDiameterMm !== null && kit.maxCutDiameterMm < mouthDiameterMm
+              ? `smaller than the existing mouth (${lengthLabel(mouthDiameterMm, units)}): a wall is already below the minimum before any cut`
+              : "keeping every minimum wall, at this centre and depth"
+          }
+        />
       </div>
 
       <section aria-label="The cut" className="flex flex-col gap-2">
         <h3 className="font-semibold">The cut</h3>
         {cut ? (
-          <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-3">
-            <Figure label={`Cut diameter${cut.diameterProposed ? " (proposed)" : ""}`} value={len(cut.diameterMm, units)} testId="cut-diameter" />
-            <Figure label={`Cut depth${cut.depthProposed ? " (proposed)" : ""}`} value={len(cut.depthMm, units)} note={cut.throughMouth ? "runs through the mouth: no step is left" : undefined} />
-            <Figure
-              label="Radial clearance to the cut"
-              tone={tone(kit.effectiveRadialClearanceMm, L.minRadialClearanceMm)}
-              value={signedLen(kit.radialClearanceMm.vsCut, units)}
-              note={`with the tilt: ${signedLen(kit.effectiveRadialClearanceMm, units)} (minimum ${len(L.minRadialClearanceMm, units)})`}
-            />
-            <Figure
-              label="Depth clearance under the skirt"
-              tone={tone(kit.depthClearanceMm, L.minDepthClearanceMm)}
-              value={signedLen(kit.depthClearanceMm, units)}
-              note={`minimum ${len(L.minDepthClearanceMm, units)}`}
-            />
-            <Figure label="Material removed" value={`${(kit.removal.volumeMm3 / 1000).toFixed(2)} cm³`} note={`about ${kit.removal.massG.toFixed(1)} g of aluminium`} />
-            <Figure
-              label="Displacement"
-              tone={kit.displacementCc.crossesClasses.length ? "tight" : undefined}
-              value={`${kit.displacementCc.stockRounded} → ${kit.displacementCc.kitRounded} cc`}
-              note={kit.displacementCc.crossesClasses.length ? `crosses ${kit.displacementCc.crossesClasses.join(", ")} cc: the legal class may change` : `+${kit.displacementCc.change.toFixed(1)} cc`}
-            />
-          </div>
+          <CutFigures kit={kit} limits={L} units={units} />
         ) : (
           <p className="text-sm text-ink-2">
             No cut is needed for this kit: the skirt clears the mouth by at least the minimum. Displacement {kit.displacementCc.stockRounded} →{" "}
@@ -91,14 +77,14 @@ export function KitResults({ kit, result, units }: { kit: KitResult; result: Stu
         <h3 className="font-semibold">Stud pattern</h3>
         <p className={kit.studMatch.ok ? "text-clear" : "text-interfere"}>
           {kit.studMatch.ok ? "✓ The kit's studs line up with the case's" : "✕ The kit's studs do not line up with this case"} (worst offset{" "}
-          <span className="num">{len(kit.studMatch.worstOffsetMm, units)}</span>)
+          <span className="num">{lengthLabel(kit.studMatch.worstOffsetMm, units)}</span>)
           {kit.studMatch.thread ? `; thread ${kit.studMatch.thread.kit} on the kit, ${kit.studMatch.thread.case} in the case` : ""}.
         </p>
       </section>
 
       <section aria-label="Warnings" className="flex flex-col gap-2">
         <h3 className="font-semibold">Warnings</h3>
-        <WarningsList warnings={[...result.warnings, ...kit.warnings]} />
+        <WarningsList warnings={[...result.warnings, ...kit.warnings]} units={units} />
       </section>
     </div>
   );

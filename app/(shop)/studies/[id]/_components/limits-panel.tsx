@@ -3,10 +3,10 @@
 import type { LengthUnits } from "@/geometry";
 import { useFormContext, useWatch } from "react-hook-form";
 import { TextField } from "@/app/_ui/form/text-field";
-import { len } from "./fmt";
+import { lengthLabel, speedLabel } from "@/model/units";
 import { LIMIT_KEYS, type LimitKey, type StudyFormValues } from "./study-values";
 
-const LABEL: Record<LimitKey, string> = {
+export const LIMIT_LABEL: Record<LimitKey, string> = {
   minRadialClearanceMm: "Radial clearance around the skirt, at least",
   minDepthClearanceMm: "Depth clearance under the skirt, at least",
   minSealingLandMm: "Sealing land at each stud, at least",
@@ -28,7 +28,7 @@ export function LimitsPanel({ units, shopLimits }: { units: LengthUnits; shopLim
     const v = shopLimits[k];
     if (Array.isArray(v)) return `${v.join(", ")} cc`;
     if (typeof v !== "number") return "—";
-    return k.endsWith("Mm") ? len(v, units) : `${v} m/min`;
+    return k.endsWith("Mm") ? lengthLabel(v, units) : speedLabel(v, units);
   };
   return (
     <section className="card flex flex-col gap-3 p-4" aria-label="Limits">
@@ -41,7 +41,7 @@ export function LimitsPanel({ units, shopLimits }: { units: LengthUnits; shopLim
             <TextField<StudyFormValues>
               key={k}
               name={`limits.${k}`}
-              label={LABEL[k]}
+              label={LIMIT_LABEL[k]}
               unit={k.endsWith("Mm") ? units : k === "displacementClassesCc" ? "cc" : "m/min"}
               numeric
               placeholder={shopText(k)}

@@ -38,8 +38,9 @@ export function lineupRows(needed: StudyResult, prices: Record<string, number | 
       needDepthMm: k.cut?.depthMm ?? null,
       thinnestWallMm: w ? w.minWallMm : null,
       thinnestWhere: w ? `${WHERE[w.kind]}${w.kind === "outline" ? "" : ` ${w.label}`}` : "",
-      rigOk: k.cut === null ? null : rig ? problems.length === 0 : null,
-      rigText: k.cut === null ? "no cut needed" : !rig ? "no rig chosen" : problems.length ? problems.join(", ") : "can make it",
+      // A kit that cannot fit is not going to be cut: the rig is not judged for it.
+      rigOk: k.cut === null || k.verdict === "cannot-fit" ? null : rig ? problems.length === 0 : null,
+      rigText: k.cut === null ? "no cut needed" : k.verdict === "cannot-fit" ? "—" : !rig ? "no rig chosen" : problems.length ? problems.join(", ") : "can make this cut",
     };
   });
 }

@@ -5,7 +5,8 @@ import { createColumnHelper, type ColumnDef, type SortingFn } from "@tanstack/re
 import { useMemo } from "react";
 import { EmptyState } from "../../../../_ui/empty-state";
 import { DataTable } from "../../../../_ui/table/data-table";
-import { len, TONE_TEXT, VERDICT } from "./fmt";
+import { lengthLabel } from "@/model/units";
+import { TONE_TEXT, VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
 
@@ -57,13 +58,13 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
           id: "needDiameter",
           header: "Cut needed ⌀",
           sortingFn: nullsLast((r) => r.needDiameterMm),
-          cell: (c) => <span className="num">{c.getValue() === null ? "none" : len(c.getValue(), units)}</span>,
+          cell: (c) => <span className="num">{c.getValue() === null ? "none" : lengthLabel(c.getValue(), units)}</span>,
         }),
         h.accessor("needDepthMm", {
           id: "needDepth",
           header: "Depth",
           sortingFn: nullsLast((r) => r.needDepthMm),
-          cell: (c) => <span className="num">{c.getValue() === null ? "—" : len(c.getValue(), units)}</span>,
+          cell: (c) => <span className="num">{c.getValue() === null ? "—" : lengthLabel(c.getValue(), units)}</span>,
         }),
         h.accessor("thinnestWallMm", {
           id: "thinnestWall",
@@ -75,7 +76,7 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
             const cls = w.minWallMm < 0 ? "text-interfere" : w.ok ? "text-clear" : "text-tight";
             return (
               <span data-testid="thinnest-wall">
-                <span className={`num ${cls}`}>{len(w.minWallMm, units)}</span> <span className="text-ink-2">{row.original.thinnestWhere}</span>
+                <span className={`num ${cls}`}>{lengthLabel(w.minWallMm, units)}</span> <span className="text-ink-2">{row.original.thinnestWhere}</span>
               </span>
             );
           },

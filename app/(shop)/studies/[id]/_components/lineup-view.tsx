@@ -29,10 +29,10 @@ export function LineupView({
   const mouth = mouthRow ? caseFromRow(mouthRow).mouth.outline : null;
   const mouthDiameterMm = mouth?.kind === "circle" ? mouth.diameterMm : null;
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex min-w-0 flex-col gap-4">
       <WindowChart rows={rows} result={shown.needed} mouthDiameterMm={mouthDiameterMm} units={units} />
       <p className="text-sm text-ink-2">
-        Each kit at the least cut that clears it, as the core proposes it{shown.study.cut?.centerOffsetMm ? ", with the study's centring offset" : ""}. Click a
+        Each kit at the smallest cut that clears it by the shop&apos;s minimum{shown.study.cut?.centerOffsetMm ? ", with the study's centring offset" : ""}. Click a
         column to sort; mark the kit the shop recommends as the choice.
       </p>
       <LineupTable rows={rows} units={units} chosen={chosen} onChoose={onChoose} />

@@ -3,7 +3,7 @@
 import type { LengthUnits } from "@/geometry";
 import { useState } from "react";
 import type { Evaluation } from "./assemble";
-import { TONE_TEXT, VERDICT } from "./fmt";
+import { TONE_TEXT, VERDICT } from "./verdict-words";
 import { KitResults } from "./kit-results";
 
 /** The live results: a kit picker and everything the core says about that kit. */
@@ -21,6 +21,8 @@ export function ResultsView({
   const [picked, setPicked] = useState<string | null>(null);
   if (!shown) return <p className="text-ink-2">{loading ? "Loading the case and kits…" : "Results appear once the inputs are complete."}</p>;
   const kits = shown.result.kits;
+  const mouth = shown.study.case.mouth.outline;
+  const mouthDiameterMm = mouth.kind === "circle" ? mouth.diameterMm : null;
   const current = kits.find((k) => k.kitId === picked) ?? kits.find((k) => k.kitId === chosen) ?? kits[0];
   return (
     <div className="flex flex-col gap-4" aria-label="Results">
@@ -42,7 +44,7 @@ export function ResultsView({
           );
         })}
       </div>
-      {current ? <KitResults kit={current} result={shown.result} units={units} /> : null}
+      {current ? <KitResults kit={current} result={shown.result} units={units} mouthDiameterMm={mouthDiameterMm} /> : null}
     </div>
   );
 }

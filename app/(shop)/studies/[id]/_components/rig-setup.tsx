@@ -1,25 +1,25 @@
 import type { KitResult, LengthUnits, RigResult, StudyResult } from "@/geometry";
 import { Figure } from "./figure";
-import { len, signedLen } from "./fmt";
+import { lengthLabel, signedLengthLabel } from "@/model/units";
 
 /** How to set the boring rig for the cut: cutter setting, bit reach, hardware, depth stop, speed. */
 export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null; units: LengthUnits; cutDiameterMm: number | null }) {
   if (!rig) return <p className="text-sm text-ink-2">Choose a boring rig to get its set-up for this cut.</p>;
   const ds = rig.depthStop;
-  const shims = ds.shims.length ? ds.shims.map((s) => `${s.count} × ${len(s.thicknessMm, units)}`).join(" + ") : "no shims";
+  const shims = ds.shims.length ? ds.shims.map((s) => `${s.count} × ${lengthLabel(s.thicknessMm, units)}`).join(" + ") : "no shims";
   const rpm = rig.spindleRpm;
   return (
     <div className="grid gap-2 sm:grid-cols-2" data-testid="rig-setup">
       <Figure
         label="Cutter setting (caliper across the head and the bit)"
-        value={len(rig.cutterSettingToSetMm ?? rig.cutterSettingMm, units)}
-        note={`exact ${len(rig.cutterSettingMm, units)}, rounded up to the ${len(rig.settingResolutionMm, units)} the calipers read · cuts ${len(rig.cutAtSettingMm ?? cutDiameterMm, units)}`}
+        value={lengthLabel(rig.cutterSettingToSetMm ?? rig.cutterSettingMm, units)}
+        note={`exact ${lengthLabel(rig.cutterSettingMm, units)}, rounded up to the ${lengthLabel(rig.settingResolutionMm, units)} the calipers read · cuts ${lengthLabel(rig.cutAtSettingMm ?? cutDiameterMm, units)}`}
       />
       <Figure
         label="Bit"
         tone={rig.bitReaches ? "clear" : "interfere"}
-        value={rig.bitReaches ? "reaches the cut" : rig.grindOffMm > 0 ? `grind off ${len(rig.grindOffMm, units)}` : `too short by ${len(rig.bitTooShortByMm, units)}`}
-        note={`${len(rig.bitLengthMm, units)} bit cuts ${len(rig.bitReachMm.min, units)} – ${len(rig.bitReachMm.max, units)}; lengths that reach: ${len(rig.bitLengthWindowMm.min, units)} – ${len(rig.bitLengthWindowMm.max, units)}`}
+        value={rig.bitReaches ? "reaches the cut" : rig.grindOffMm > 0 ? `grind off ${lengthLabel(rig.grindOffMm, units)}` : `too short by ${lengthLabel(rig.bitTooShortByMm, units)}`}
+        note={`${lengthLabel(rig.bitLengthMm, units)} bit cuts ${lengthLabel(rig.bitReachMm.min, units)} – ${lengthLabel(rig.bitReachMm.max, units)}; lengths that reach: ${lengthLabel(rig.bitLengthWindowMm.min, units)} – ${lengthLabel(rig.bitLengthWindowMm.max, units)}`}
       />
       <Figure
         label="Screw heads on the head"
@@ -28,10 +28,10 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
           rig.hardwareClearanceMm === null
             ? "not given"
             : rig.hardwareClears
-              ? `clear by ${len(rig.hardwareClearanceMm, units)}`
+              ? `clear by ${lengthLabel(rig.hardwareClearanceMm, units)}`
               : rig.hardwareClearanceMm < 0
-                ? `strike: ${len(-rig.hardwareClearanceMm, units)} past the cut`
-                : `strike: only ${len(rig.hardwareClearanceMm, units)} inside the cut`
+                ? `strike: ${lengthLabel(-rig.hardwareClearanceMm, units)} past the cut`
+                : `strike: only ${lengthLabel(rig.hardwareClearanceMm, units)} inside the cut`
         }
         note={
           rig.hardwareClears === false
@@ -43,7 +43,7 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
         label="Depth stop"
         tone={ds.reached ? "clear" : "interfere"}
         value={ds.reached ? `${ds.groove} + ${shims}` : "cannot reach"}
-        note={ds.reached ? `gives ${len(ds.travelMm, units)} for ${len(ds.wantedMm, units)} wanted (+${len(ds.overshootMm, units)})` : `the most travel is ${len(ds.travelMm, units)}`}
+        note={ds.reached ? `gives ${lengthLabel(ds.travelMm, units)} for ${lengthLabel(ds.wantedMm, units)} wanted (+${lengthLabel(ds.overshootMm, units)})` : `the most travel is ${lengthLabel(ds.travelMm, units)}`}
       />
       <Figure
         label="Spindle speed"
@@ -67,20 +67,20 @@ export function AlignmentFigures({ a, units, kit, limits }: { a: KitResult["alig
   return (
     <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
       <Figure label="Holder tilt" value={`${a.tiltDeg.toFixed(3)}°`} note={`towards ${Math.round(a.directionDeg)}°`} />
-      <Figure label="Rocking" value={len(a.rockMm, units)} note="how far the readings leave one plane" />
-      <Figure label="Shift at the cut's bottom" value={len(a.lateralShiftMm, units)} note={`depth varies ${len(a.depthVariationMm, units)} across the bottom`} />
+      <Figure label="Rocking" value={lengthLabel(a.rockMm, units)} note="how far the readings leave one plane" />
+      <Figure label="Shift at the cut's bottom" value={lengthLabel(a.lateralShiftMm, units)} note={`depth varies ${lengthLabel(a.depthVariationMm, units)} across the bottom`} />
       {cost !== null ? (
         <Figure
           label="What the tilt costs"
           testId="tilt-cost"
           tone={rocks || short ? "tight" : "clear"}
-          value={`${len(cost, units)} of clearance`}
+          value={`${lengthLabel(cost, units)} of clearance`}
           note={
             rocks
               ? "the holder rocks: re-seat it and read again before cutting"
               : short
-                ? `leaves ${signedLen(withTilt, units)}: shim the holder level before cutting`
-                : `leaves ${signedLen(withTilt, units)}: no shim needed`
+                ? `leaves ${signedLengthLabel(withTilt, units)}: shim the holder level before cutting`
+                : `leaves ${signedLengthLabel(withTilt, units)}: no shim needed`
           }
         />
       ) : null}

@@ -1,7 +1,7 @@
 import { CutPlanSchema, DEFAULT_LIMITS, ReadingsSchema, StudyLimitsSchema, type LengthUnits } from "@/geometry";
 import { z } from "zod";
 import type { FormReader } from "@/app/_ui/form/form-reader";
-import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import { lengthFieldText, numberFieldText } from "@/model/units";
 import type { PairText } from "@/app/_ui/form/text-values";
 import type { StudyRow } from "../../../../_ui/query/types";
 
@@ -33,12 +33,12 @@ export type StudyInputs = z.output<typeof StudyInputsSchema>;
 const isLength = (k: LimitKey) => k.endsWith("Mm");
 
 export function studyDefaults(row: StudyRow, units: LengthUnits): StudyFormValues {
-  const L = (v: number | undefined) => lengthText(v, units);
+  const L = (v: number | undefined) => lengthFieldText(v, units);
   const limits = Object.fromEntries(
     LIMIT_KEYS.map((k) => {
       const v = row.limits?.[k];
       if (v === undefined) return [k, ""];
-      return [k, Array.isArray(v) ? v.join(" ") : isLength(k) ? L(v as number) : numberText(v as number)];
+      return [k, Array.isArray(v) ? v.join(" ") : isLength(k) ? L(v as number) : numberFieldText(v as number)];
     }),
   ) as Record<LimitKey, string>;
   return {

@@ -1,5 +1,5 @@
 import type { LengthUnits, WallResult } from "@/geometry";
-import { len } from "./fmt";
+import { lengthLabel } from "@/model/units";
 
 const KIND: Record<WallResult["kind"], string> = { stud: "sealing land at stud", pocket: "wall to pocket", outline: "wall to the outside" };
 
@@ -25,8 +25,8 @@ export function WallsTable({ walls, units }: { walls: WallResult[]; units: Lengt
               <td className="py-1">
                 {KIND[w.kind]} <span className="text-ink-2">{w.kind === "outline" ? "" : w.label}</span>
               </td>
-              <td className={`py-1 text-right num ${state[1]}`}>{len(w.minWallMm, units)}</td>
-              <td className="py-1 text-right num text-ink-2">{len(w.requiredMm, units)}</td>
+              <td className={`py-1 text-right num ${state[1]}`}>{lengthLabel(w.minWallMm, units)}</td>
+              <td className="py-1 text-right num text-ink-2">{lengthLabel(w.requiredMm, units)}</td>
               <td className={`py-1 pl-3 ${state[1]}`}>
                 <span aria-hidden="true">{!w.reached ? "·" : w.ok ? "✓" : "✕"}</span> {state[0]}
               </td>

@@ -1,5 +1,6 @@
-import { mmToIn, type LengthUnits, type StudyResult } from "@/geometry";
-import { len, VERDICT } from "./fmt";
+import type { StudyResult } from "@/geometry";
+import { fromUnits, lengthLabel, toUnits, type LengthUnits } from "@/model/units";
+import { VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
 
@@ -11,13 +12,13 @@ const WIDTH = 1000;
 
 /** Tick positions (in mm) at a round step of the display unit. */
 function ticks(minMm: number, maxMm: number, units: LengthUnits): number[] {
-  const toU = (mm: number) => (units === "in" ? mmToIn(mm) : mm);
+  const toU = (mm: number) => toUnits(mm, units);
   const span = toU(maxMm) - toU(minMm);
   const raw = span / 6;
   const mag = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => s >= raw) ?? 10 * mag;
   const out: number[] = [];
-  for (let v = Math.ceil(toU(minMm) / step) * step; v <= toU(maxMm) + 1e-9; v += step) out.push(units === "in" ? v * 25.4 : v);
+  for (let v = Math.ceil(toU(minMm) / step) * step; v <= toU(maxMm) + 1e-9; v += step) out.push(fromUnits(v, units));
   return out;
 }
 
@@ -56,8 +57,8 @@ export function WindowChart({
       <figcaption className="flex flex-wrap items-baseline justify-between gap-2">
         <span className="font-semibold">Cut window per kit</span>
         <span className="text-xs text-ink-2">
-          Bar: from the cut the kit needs to the largest cut this case takes at the minimum wall ({len(result.limits.values.minWallMm, units)}, sealing land{" "}
-          {len(result.limits.values.minSealingLandMm, units)}).
+          Bar: from the cut the kit needs to the largest cut this case takes at the minimum wall ({lengthLabel(result.limits.values.minWallMm, units)}, sealing land{" "}
+          {lengthLabel(result.limits.values.minSealingLandMm, units)}).
         </span>
       </figcaption>
       <svg viewBox={`0 0 ${WIDTH} ${height}`} className="w-full" role="img" aria-label="Cut window of each kit against the case">
@@ -65,7 +66,7 @@ export function WindowChart({
           <g>
             <rect x={x(reach.min)} y={top - 6} width={Math.max(1, x(reach.max) - x(reach.min))} height={rows.length * ROW_H + 6} fill="var(--color-accent-soft)" opacity={0.55} />
             <text x={x(reach.min) + 3} y={top - 10} fontSize="11" fill="var(--color-accent)">
-              rig reach {len(reach.min, units)} – {len(reach.max, units)}
+              rig reach {lengthLabel(reach.min, units)} – {lengthLabel(reach.max, units)}
             </text>
           </g>
         ) : null}
@@ -73,7 +74,7 @@ export function WindowChart({
           <g>
             <line x1={x(mouthDiameterMm)} x2={x(mouthDiameterMm)} y1={top - 6} y2={axisY} stroke="var(--color-ink-2)" strokeDasharray="4 3" />
             <text x={x(mouthDiameterMm) - 3} y={top - 10} fontSize="11" textAnchor="end" fill="var(--color-ink-2)">
-              existing mouth {len(mouthDiameterMm, units)}
+              existing mouth {lengthLabel(mouthDiameterMm, units)}
             </text>
           </g>
         ) : null}
@@ -89,10 +90,10 @@ export function WindowChart({
           const words = blocked
             ? blocked
             : r.needDiameterMm === null
-              ? `no cut needed · case takes up to ${len(max, units)}`
+              ? `no cut needed · case takes up to ${lengthLabel(max, units)}`
               : fits
-                ? `needs ${len(need, units)} · window ${len(max - need, units)}`
-                : `needs ${len(need, units)} · ${len(need - max, units)} past the limit`;
+                ? `needs ${lengthLabel(need, units)} · window ${lengthLabel(max - need, units)}`
+                : `needs ${lengthLabel(need, units)} · ${lengthLabel(need - max, units)} past the limit`;
           return (
             <g key={r.kitId} data-testid="window-row">
               <text x={LEFT - 10} y={y + ROW_H / 2 + 4} fontSize="12" textAnchor="end" fill="var(--color-ink)">
@@ -111,9 +112,13 @@ export function WindowChart({
                 strokeDasharray={fits ? undefined : "3 2"}
               />
               <line x1={x(need)} x2={x(need)} y1={y + 4} y2={y + ROW_H - 4} stroke={COLOR[v.tone]} strokeWidth={2} />
-              <text x={WIDTH - RIGHT + 12} y={y + ROW_H / 2 + 4} fontSize="11" fill="var(--color-ink-2)">
+              {/* Two short lines, so the words stay inside the chart's right margin (about 50 characters at 11 px). */}
+              <text x={WIDTH - RIGHT + 12} y={y + ROW_H / 2 - 2} fontSize="11" fill="var(--color-ink-2)">
                 <title>{`${v.short}: ${words}`}</title>
-                {v.short}: {words.length > 52 ? `${words.slice(0, 51)}…` : words}
+                <tspan fontWeight={600}>{v.short}</tspan>
+                <tspan x={WIDTH - RIGHT + 12} dy={13}>
+                  {words.length > 48 ? `${words.slice(0, 47)}…` : words}
+                </tspan>
               </text>
             </g>
           );
@@ -123,7 +128,7 @@ export function WindowChart({
           <g key={t}>
             <line x1={x(t)} x2={x(t)} y1={axisY} y2={axisY + 4} stroke="var(--color-ink-3)" />
             <text x={x(t)} y={axisY + 16} fontSize="10" textAnchor="middle" fill="var(--color-ink-3)" className="num">
-              {units === "in" ? Number(mmToIn(t).toFixed(3)) : Number(t.toFixed(1))}
+              {Number(toUnits(t, units).toFixed(units === "in" ? 3 : 1))}
             </text>
           </g>
         ))}

@@ -1,0 +1,83 @@
+"use client";
+
+import type { KitResult, Study, StudyResult } from "@/geometry";
+import { diameterLabel, lengthLabel, type LengthUnits } from "@/model/units";
+import { CutSlider, type TrackMark } from "./cut-controls";
+import type { CutDraft } from "./use-live-fit";
+
+const STEP_MM = 0.05;
+
+/** The slider ranges: the cut from below the smallest skirt to past the rig's reach and the case's largest safe cut. */
+export function cutRanges(study: Study, result: StudyResult) {
+  const skirts = result.kits.map((k) => k.skirt.diameterMm);
+  const reach = result.kits.find((k) => k.rig)?.rig?.bitReachMm ?? null;
+  const lo = Math.floor(Math.min(Math.min(...skirts) - 4, reach?.min ?? Infinity));
+  const hi = Math.ceil(Math.max(result.case.maxCutDiameterMm, Math.max(...skirts) + 4, (reach?.max ?? 0) + 1));
+  return { dMin: lo, dMax: Math.max(hi, lo + 2), zMin: 1, zMax: Math.ceil(study.case.mouth.depthMm + 4), reach };
+}
+
+/** Why the least cut moves in steps: the caliper reads the setting in the rig's resolution, and the cut is twice the setting. */
+function stepNote(k: KitResult, units: LengthUnits): string {
+  if (!k.rig) return "rounded up to the next 0.1 mm of diameter";
+  const res = k.rig.settingResolutionMm;
+  return `moves in ${lengthLabel(2 * res, units)} steps: the caliper reads the setting across head and bit in ${lengthLabel(res, units)} steps, and the cut is twice the setting less the head`;
+}
+
+type Props = {
+  study: Study;
+  result: StudyResult;
+  kit: KitResult;
+  units: LengthUnits;
+  /** True while the cut is each kit's least cut (no number typed): it follows the readings. */
+  following: boolean;
+  onChange: (patch: CutDraft, final: boolean, at?: number) => void;
+};
+
+/** The planned cut: diameter and depth sliders with their fields, the rig's reach and the largest safe cut on the track. */
+export function CutCard({ study, result, kit, units, following, onChange }: Props) {
+  const r = cutRanges(study, result);
+  const least = kit.leastCut;
+  const marks: TrackMark[] = [{ label: `largest safe cut ${diameterLabel(kit.maxCutDiameterMm, units)}`, fromMm: kit.maxCutDiameterMm, tone: "interfere" }];
+  if (r.reach) marks.unshift({ label: `rig reaches ${diameterLabel(r.reach.min, units)} – ${lengthLabel(r.reach.max, units)}`, fromMm: r.reach.min, toMm: r.reach.max, tone: "accent" });
+  const dNow = kit.cut?.diameterMm ?? least?.diameterMm ?? kit.skirt.diameterMm;
+  const zNow = kit.cut?.depthMm ?? least?.depthMm ?? Math.max(1, kit.skirt.protrusionMm);
+  return (
+    <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label="Planned cut">
+      <CutSlider
+        label="Cut diameter"
+        testId="cut-diameter"
+        valueMm={dNow}
+        minMm={r.dMin}
+        maxMm={r.dMax}
+        stepMm={STEP_MM}
+        units={units}
+        marks={marks}
+        hint={least ? `${following ? "Least cut, followed: " : "Least that clears this kit: "}${lengthLabel(least.diameterMm, units)}; it ${stepNote(kit, units)}.` : undefined}
+        onLive={(mm, at) => onChange({ diameterMm: mm }, false, at)}
+        onCommit={(mm) => onChange({ diameterMm: mm }, true)}
+      />
+      <CutSlider
+        label="Cut depth"
+        testId="cut-depth"
+        valueMm={zNow}
+        minMm={r.zMin}
+        maxMm={r.zMax}
+        stepMm={STEP_MM}
+        units={units}
+        hint={least ? `Least for this kit: ${lengthLabel(least.depthMm, units)}` : undefined}
+        onLive={(mm, at) => onChange({ depthMm: mm }, false, at)}
+        onCommit={(mm) => onChange({ depthMm: mm }, true)}
+      />
+      <div className="flex flex-wrap items-center gap-2 md:col-span-2">
+        {least && (
+          <button type="button" className="btn-quiet" aria-pressed={following} onClick={() => onChange({ diameterMm: undefined, depthMm: undefined }, true)} data-testid="use-least-cut">
+            Use the least cut for this kit
+          </button>
+        )}
+        <p className="text-xs text-ink-2" data-testid="cut-mode">
+          {following ? "The cut is each kit's least cut and follows the readings; type or drag to fix a number." : "The cut is fixed at the numbers above."}
+        </p>
+      </div>
+    </div>
+  );
+}
