@@ -101,7 +101,8 @@ describe("reading a DXF", () => {
     const mouth = byRole(read, (s) => s.layer === "MOUTH");
     expect(mouth.shape).toEqual({ kind: "circle", center: [0, 0], radius: 30 });
     const slot = byRole(read, (s) => /closed loop/.test(s.source));
-    expect(slot.source).toBe("closed loop of 2 ARC and 2 LINE");
+    expect(slot.source).toBe("closed loop of 2 ARC and 2 LINE on layer PASSAGE");
+    expect(slot.layer).toBe("PASSAGE");
     expectWithinTolerance(polygonOf(slot), arcSlot(34, 44, Math.PI / 6, Math.PI / 3), TOL);
     expect(read.shapes.filter((s) => s.layer === "STUDS")).toHaveLength(4);
     expect(read.notUsed).toEqual(expect.arrayContaining(["1 TEXT", "1 open polyline"]));
@@ -215,5 +216,26 @@ describe("reading an SVG", () => {
     expect(shapes.deck).toBeUndefined();
     expect(problems[0]).toMatch(/^The deck \(closed polygon, 4 points\): polygon edges \d and \d cross/);
     expect(() => readDrawing("none.svg", `<svg xmlns="http://www.w3.org/2000/svg"><text>hi</text></svg>`, { unit: "mm" })).toThrow("No closed outline in this SVG drawing. Found: 1 text.");
+  });
+});
+
+describe("the demo case's drawing", () => {
+  it("imports to the same deck, mouth and studs as the demo photo shows", async () => {
+    const { DEMO_CASE, demoCaseDxf } = await import("../../scripts/render-demo-case-photo");
+    const read = readDrawing("eight-sided-case-deck.dxf", demoCaseDxf(), { unit: "mm" });
+    const roles = Object.fromEntries(read.shapes.map((s) => [s.id, s.layer === "DECK" ? "deck" : s.layer === "MOUTH" ? "mouth" : s.layer === "STUDS" ? "stud" : "passage"] as const));
+    const { shapes, problems } = pickShapes(read, roles, { unit: "mm", origin: "mouth" });
+    expect(problems).toEqual([]);
+    expect(shapes.deck).toEqual({ kind: "polygon", pointsMm: DEMO_CASE.deck });
+    expect(shapes.mouth).toEqual({ kind: "circle", diameterMm: 62, centerMm: [0, 0] });
+    expect(shapes.studs?.map((s) => s.positionMm)).toEqual(DEMO_CASE.studs.map((s) => s.at));
+    expect(shapes.pockets).toHaveLength(2);
+    // Each passage is the arc slot between radii 31 and 38 over ±22° about the x axis (0° and 180°).
+    for (const [i, centre] of [0, Math.PI].entries()) {
+      const outline = shapes.pockets?.[i]?.outline;
+      if (outline?.kind !== "polygon") throw new Error("passage should be a polygon");
+      const span = (22 * Math.PI) / 180;
+      expectWithinTolerance(outline.pointsMm, arcSlot(31, 38, centre - span, centre + span), TOL);
+    }
   });
 });

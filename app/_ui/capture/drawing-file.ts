@@ -209,7 +209,7 @@ function noClosed(format: string, notUsed: string[]): DrawingFileError {
   return new DrawingFileError("no-closed-outline", `No closed outline in this ${format} drawing.${found} Draw the deck as a closed polyline or a closed path.`);
 }
 
-type Piece = { points: P[]; what: string };
+type Piece = { points: P[]; what: string; layer?: string | null };
 
 /** Joins open pieces (lines, arcs) whose ends meet into closed loops; the rest stay open. */
 function joinPieces(pieces: Piece[], eps: number): { loops: Piece[]; open: Piece[] } {
@@ -221,6 +221,7 @@ function joinPieces(pieces: Piece[], eps: number): { loops: Piece[]; open: Piece
     const first = left.shift()!;
     let chain = [...first.points];
     const parts = [first.what];
+    const layers = new Set([first.layer ?? null]);
     let grew = true;
     while (grew && !same(chain[0], chain[chain.length - 1])) {
       grew = false;
@@ -231,6 +232,7 @@ function joinPieces(pieces: Piece[], eps: number): { loops: Piece[]; open: Piece
         else if (same(end, pts[pts.length - 1])) chain = [...chain, ...[...pts].reverse().slice(1)];
         else continue;
         parts.push(left[i].what);
+        layers.add(left[i].layer ?? null);
         left.splice(i, 1);
         grew = true;
         break;
@@ -239,7 +241,7 @@ function joinPieces(pieces: Piece[], eps: number): { loops: Piece[]; open: Piece
     if (same(chain[0], chain[chain.length - 1]) && tidyRing(chain, eps).length >= 3) {
       const byKind = new Map<string, number>();
       for (const w of parts) byKind.set(w, (byKind.get(w) ?? 0) + 1);
-      loops.push({ points: chain, what: `closed loop of ${counted(byKind).join(" and ")}` });
+      loops.push({ points: chain, what: `closed loop of ${counted(byKind).join(" and ")}`, layer: layers.size === 1 ? [...layers][0] : null });
     } else {
       // Put back what was joined as one open piece per original part, for the count.
       for (const w of parts) open.push({ points: [], what: w });
@@ -329,7 +331,7 @@ function readDxf(text: string, tolerance: number): DrawingRead {
           const ring = tidyRing(pts, 1e-9 * Math.max(1, sizeOf(pts)));
           add(e, `closed polyline${onLayer(e)} (${vs.length} corners${arcs ? `, ${arcs} arcs` : ""})`, { kind: "polygon", points: ring });
         } else {
-          pieces.push({ points: pts, what: "open polyline" });
+          pieces.push({ points: pts, what: "open polyline", layer: layerOf(e) });
         }
         break;
       }
@@ -339,14 +341,14 @@ function readDxf(text: string, tolerance: number): DrawingRead {
           skip("LINE without two ends");
           break;
         }
-        pieces.push({ points: [[l.vertices[0].x, l.vertices[0].y], [l.vertices[1].x, l.vertices[1].y]], what: "LINE" });
+        pieces.push({ points: [[l.vertices[0].x, l.vertices[0].y], [l.vertices[1].x, l.vertices[1].y]], what: "LINE", layer: layerOf(e) });
         break;
       }
       case "ARC": {
         const a = e as IArcEntity;
         let sweep = a.endAngle - a.startAngle;
         if (sweep <= 0) sweep += 2 * Math.PI;
-        pieces.push({ points: arcPoints([a.center.x, a.center.y], a.radius, a.startAngle, sweep, tolerance), what: "ARC" });
+        pieces.push({ points: arcPoints([a.center.x, a.center.y], a.radius, a.startAngle, sweep, tolerance), what: "ARC", layer: layerOf(e) });
         break;
       }
       case "ELLIPSE": {
@@ -362,7 +364,7 @@ function readDxf(text: string, tolerance: number): DrawingRead {
         };
         const pts = flattenCurve(at, el.startAngle, el.startAngle + sweep, tolerance);
         if (Math.abs(sweep - 2 * Math.PI) < 1e-9) add(e, `ellipse${onLayer(e)}`, { kind: "polygon", points: tidyRing(pts, 1e-12) });
-        else pieces.push({ points: pts, what: "elliptical ARC" });
+        else pieces.push({ points: pts, what: "elliptical ARC", layer: layerOf(e) });
         break;
       }
       case "SPLINE": {
@@ -389,7 +391,7 @@ function readDxf(text: string, tolerance: number): DrawingRead {
         for (let i = 0; i + 1 < breaks.length; i++) pts.push(...flattenCurve(at, breaks[i], breaks[i + 1], tolerance).slice(i === 0 ? 0 : 1));
         const closed = s.closed || s.periodic || Math.hypot(pts[0][0] - pts[pts.length - 1][0], pts[0][1] - pts[pts.length - 1][1]) <= 1e-9 * Math.max(1, sizeOf(pts));
         if (closed) add(e, `closed spline${onLayer(e)}`, { kind: "polygon", points: tidyRing(pts, 1e-9 * Math.max(1, sizeOf(pts))) });
-        else pieces.push({ points: pts, what: "open SPLINE" });
+        else pieces.push({ points: pts, what: "open SPLINE", layer: layerOf(e) });
         break;
       }
       default:
@@ -399,7 +401,7 @@ function readDxf(text: string, tolerance: number): DrawingRead {
   const all = pieces.flatMap((p) => p.points);
   const { loops, open } = joinPieces(pieces, 1e-6 * Math.max(1, all.length ? sizeOf(all) : 1));
   for (const loop of loops) {
-    shapes.push({ id: `d${++seq}`, source: loop.what, layer: null, shape: { kind: "polygon", points: tidyRing(loop.points, 1e-9) } });
+    shapes.push({ id: `d${++seq}`, source: `${loop.what}${loop.layer ? ` on layer ${loop.layer}` : ""}`, layer: loop.layer ?? null, shape: { kind: "polygon", points: tidyRing(loop.points, 1e-9) } });
   }
   for (const o of open) skip(o.what === "open polyline" ? "open polyline" : `${o.what} not joined into a closed loop`);
   const notUsed = counted(skipped);
