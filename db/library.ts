@@ -20,7 +20,7 @@ import {
 } from "@/model/schemas";
 import type { Caller } from "./access";
 import { getDb } from "./client";
-import { StoredReadingSchema, assertStaff, iso, notFound, parseStoredReadings, readColumn, readingOut, storedData, type StoredReading } from "./rows";
+import { StoredReadingSchema, assertStaff, notFound, parseStoredReadings, readColumn, readingOut, rowBaseOf, storedData, type StoredReading } from "./rows";
 import * as schema from "./schema";
 
 // The shop's library: case profiles, cylinder kits and boring rigs. Every function takes the caller,
@@ -47,37 +47,24 @@ export function parseKitReadings(json: string): KitReadingsStored {
   return readColumn(KitReadingsStoredSchema, json, { skirtDiameter: [], skirtLength: [] }, "a kit's skirt readings");
 }
 
-function base(r: AnyRecord, creatorName: string) {
-  return {
-    id: r.id,
-    name: r.name,
-    version: r.version,
-    createdAt: iso(r.createdAt) ?? "",
-    updatedAt: iso(r.updatedAt) ?? "",
-    createdBy: { id: r.createdBy, name: creatorName },
-    archivedAt: iso(r.archivedAt),
-    notes: r.notes,
-  };
-}
-
 /** A stored row as the API shows it. */
 export function toRow<K extends LibraryKind>(kind: K, r: AnyRecord, creatorName: string): LibraryRow[K] {
   if (kind === "cases") {
     const c = r as schema.CaseProfileRow;
     const data = storedData(CaseDataSchema, r.dataJson, "a case profile");
-    const row: CaseRow = { ...base(r, creatorName), data: { ...data, name: r.name }, mouthReadingsMm: parseStoredReadings(c.mouthReadingsJson).map(readingOut) };
+    const row: CaseRow = { ...rowBaseOf(r, creatorName), data: { ...data, name: r.name }, mouthReadingsMm: parseStoredReadings(c.mouthReadingsJson).map(readingOut) };
     return row as LibraryRow[K];
   }
   if (kind === "kits") {
     const readings = parseKitReadings((r as schema.CylinderKitRow).readingsJson);
     const row: KitRow = {
-      ...base(r, creatorName),
+      ...rowBaseOf(r, creatorName),
       data: storedData(KitDataSchema, r.dataJson, "a cylinder kit"),
       readings: { skirtDiameter: readings.skirtDiameter.map(readingOut), skirtLength: readings.skirtLength.map(readingOut) },
     };
     return row as LibraryRow[K];
   }
-  const row: RigRow = { ...base(r, creatorName), data: storedData(RigDataSchema, r.dataJson, "a boring rig") };
+  const row: RigRow = { ...rowBaseOf(r, creatorName), data: storedData(RigDataSchema, r.dataJson, "a boring rig") };
   return row as LibraryRow[K];
 }
 

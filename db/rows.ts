@@ -23,6 +23,23 @@ export const newId = (): string => randomUUID();
 export const iso = (d: Date | number | null | undefined): string | null =>
   d === null || d === undefined ? null : new Date(d).toISOString();
 
+/** The fields every library and study row shows the same way: id, name, version, times, creator, notes. */
+export function rowBaseOf(
+  r: { id: string; name: string; version: number; createdAt: Date; updatedAt: Date; createdBy: string; archivedAt: Date | null; notes: string },
+  creatorName: string,
+) {
+  return {
+    id: r.id,
+    name: r.name,
+    version: r.version,
+    createdAt: iso(r.createdAt) ?? "",
+    updatedAt: iso(r.updatedAt) ?? "",
+    createdBy: { id: r.createdBy, name: creatorName },
+    archivedAt: iso(r.archivedAt),
+    notes: r.notes,
+  };
+}
+
 /** A reading as stored: the value, and who took it when. */
 export const StoredReadingSchema = z.object({ valueMm: z.number(), takenById: z.string(), takenByName: z.string(), takenAt: z.number() });
 export type StoredReading = z.infer<typeof StoredReadingSchema>;
@@ -70,10 +87,14 @@ export function readingOut(r: StoredReading) {
   return { valueMm: r.valueMm, takenBy: { id: r.takenById, name: r.takenByName }, takenAt: new Date(r.takenAt).toISOString() };
 }
 
-/** Parses a JSON column the data layer itself wrote. */
-export function parseJson<T>(json: string | null | undefined): T | null {
-  if (json === null || json === undefined || json === "") return null;
-  return JSON.parse(json) as T;
+/**
+ * Reads a row's data column through the schema its writes were checked with. Data that no longer reads is
+ * a defect of the data layer, not something a caller sent: it is thrown as such (logged, answered 500).
+ */
+export function storedData<T>(schema: z.ZodType<T>, json: string, what: string): T {
+  const r = schema.safeParse(JSON.parse(json));
+  if (r.success) return r.data;
+  throw new Error(`${what}: the stored data does not read as written: ${r.error.issues.slice(0, 3).map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`);
 }
 
 /** Each failing field of a zod error by its dotted path ("kits.0.boreMm"), with the reason. */

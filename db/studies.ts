@@ -8,7 +8,7 @@ import type { Caller } from "./access";
 import { getClient, getDb } from "./client";
 import { DataError } from "./errors";
 import { archivedFilter, libraryRowsById, nameFilter } from "./library";
-import { assertStaff, fieldsOf, iso, notFound, readColumn } from "./rows";
+import { assertStaff, fieldsOf, iso, notFound, readColumn, rowBaseOf } from "./rows";
 import * as schema from "./schema";
 import { shopLimits } from "./settings";
 import type { StudySnapshot } from "@/model/study-history";
@@ -24,14 +24,7 @@ export type Loaded = { record: schema.StudyRow; creatorName: string; caseName: s
 export function toStudyRow(l: Loaded): StudyRow {
   const r = l.record;
   return {
-    id: r.id,
-    name: r.name,
-    version: r.version,
-    createdAt: iso(r.createdAt) ?? "",
-    updatedAt: iso(r.updatedAt) ?? "",
-    createdBy: { id: r.createdBy, name: l.creatorName },
-    archivedAt: iso(r.archivedAt),
-    notes: r.notes,
+    ...rowBaseOf(r, l.creatorName),
     caseId: r.caseId,
     caseName: l.caseName,
     kitIds: l.kitIds,
