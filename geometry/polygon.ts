@@ -16,7 +16,12 @@ export function signedArea(points: readonly Vec2[]): number {
 
 /** True when every vertex lies within distance r of c, i.e. the polygon lies inside the disk (a disk is convex). */
 export function polygonInsideDisk(points: readonly Vec2[], c: Vec2, r: number, toleranceMm: number): boolean {
-  for (const p of points) if (Math.hypot(p[0] - c[0], p[1] - c[1]) > r + toleranceMm) return false;
+  const limit = (r + toleranceMm) ** 2;
+  for (const p of points) {
+    const dx = p[0] - c[0];
+    const dy = p[1] - c[1];
+    if (dx * dx + dy * dy > limit) return false;
+  }
   return true;
 }
 
@@ -79,14 +84,20 @@ export function pointToPolygonBoundary(p: Vec2, points: readonly Vec2[], toleran
     const t = len2 > 0 ? Math.min(1, Math.max(0, ((x - a[0]) * dx + (y - a[1]) * dy) / len2)) : 0;
     const qx = a[0] + t * dx;
     const qy = a[1] + t * dy;
-    const d = Math.hypot(x - qx, y - qy);
-    if (d < best - toleranceMm) {
-      best = d;
-      nx = qx;
-      ny = qy;
+    const ex = x - qx;
+    const ey = y - qy;
+    const d2 = ex * ex + ey * ey;
+    // d < best − tol needs d² < best²; the square root is taken only then.
+    if (d2 < best * best) {
+      const d = Math.sqrt(d2);
+      if (d < best - toleranceMm) {
+        best = d;
+        nx = qx;
+        ny = qy;
+      }
     }
     const side = dx * (y - a[1]) - (x - a[0]) * dy;
-    if (side === 0 && d === 0) onEdge = true;
+    if (side === 0 && d2 === 0) onEdge = true;
     if (a[1] <= y) {
       if (b[1] > y && side > 0) winding++;
     } else if (b[1] <= y && side < 0) {

@@ -18,14 +18,16 @@ export function scale(a: Vec2, k: number): Vec2 {
   return [a[0] * k, a[1] * k];
 }
 
-/** Euclidean length √(x² + y²). */
+/** Euclidean length √(x² + y²) (Math.sqrt rather than Math.hypot: several times faster, and no length here comes near overflow). */
 export function length(a: Vec2): number {
-  return Math.hypot(a[0], a[1]);
+  return Math.sqrt(a[0] * a[0] + a[1] * a[1]);
 }
 
 /** |a − b|. */
 export function distance(a: Vec2, b: Vec2): number {
-  return Math.hypot(a[0] - b[0], a[1] - b[1]);
+  const dx = a[0] - b[0];
+  const dy = a[1] - b[1];
+  return Math.sqrt(dx * dx + dy * dy);
 }
 
 /** a / |a|, or the +x unit vector when a is shorter than the tolerance (direction undefined). */
