@@ -4,9 +4,11 @@ import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo } from "react";
+import { dateTimeText } from "@/model/dates";
 import { EmptyState } from "../../../_ui/empty-state";
 import { FormNotice } from "../../../_ui/field";
 import { errorText } from "../../../_ui/query/fetch";
+import { useShopTimeZone } from "../../../_ui/query/settings/use-shop-settings";
 import { exportStudyUrl } from "../../../_ui/query/studies/fetchers";
 import { useStudies, useStudyActions } from "../../../_ui/query/studies/use-studies";
 import type { StudyRow } from "../../../_ui/query/types";
@@ -15,7 +17,6 @@ import { TableToolbar } from "../../../_ui/table/table-toolbar";
 import { useServerTable } from "../../../_ui/table/use-server-table";
 
 const h = createColumnHelper<StudyRow>();
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: "medium", timeStyle: "short" });
 
 /** The shop's studies: sorted, filtered and paged on the server; archived ones behind a switch. */
 export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | null) => void; onNew: () => void }) {
@@ -23,6 +24,7 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
   const t = useServerTable({ sort: "updatedAt", dir: "desc" });
   const list = useStudies(t.params);
   const { duplicate, archive } = useStudyActions((text) => onProblem(text));
+  const zone = useShopTimeZone();
 
   const columns = useMemo<ColumnDef<StudyRow, unknown>[]>(
     () =>
@@ -52,7 +54,7 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
           header: "Changed",
           cell: (c) => (
             <span className="text-ink-2">
-              {when(c.getValue())} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
+              {dateTimeText(c.getValue(), zone)} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
             </span>
           ),
         }),
@@ -92,7 +94,7 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
           },
         }),
       ] as ColumnDef<StudyRow, unknown>[],
-    [duplicate, archive, onProblem, router],
+    [duplicate, archive, onProblem, router, zone],
   );
 
   const filtered = Boolean(t.params.q) || t.archived;
