@@ -17,8 +17,8 @@ export function cutRanges(study: Study, result: StudyResult) {
 }
 
 /** Why the least cut moves in steps: the caliper reads the setting in the rig's resolution, and the cut is twice the setting. */
-function stepNote(k: KitResult, units: LengthUnits): string {
-  if (!k.rig) return "rounded up to the next 0.1 mm of diameter";
+export function stepNote(k: KitResult, units: LengthUnits): string {
+  if (!k.rig) return `is rounded up to the next ${lengthLabel(0.1, units)} of diameter`;
   const res = k.rig.settingResolutionMm;
   return `moves in ${lengthLabel(2 * res, units)} steps: the caliper reads the setting across head and bit in ${lengthLabel(res, units)} steps, and the cut is twice the setting less the head`;
 }

@@ -3,6 +3,7 @@
 import type { KitResult } from "@/geometry";
 import { PairInputs } from "@/app/_ui/form/pair-inputs";
 import { TextField } from "@/app/_ui/form/text-field";
+import { stepNote } from "@/app/_ui/studio/cut-card";
 import { lengthLabel, type LengthUnits } from "@/model/units";
 import type { StudyFormValues } from "./study-values";
 
@@ -19,7 +20,7 @@ export function CutPanel({ units, kit }: { units: LengthUnits; kit: KitResult | 
           unit={units}
           numeric
           placeholder={least ? `least cut ${lengthLabel(least.diameterMm, units)}` : "least cut"}
-          hint={least ? `Blank: the least cut for ${kit?.name}, ${lengthLabel(least.diameterMm, units)} now; it follows the readings until you type a number.` : "Blank: the least cut that clears."}
+          hint={least ? `Blank: the least cut for ${kit?.name}, ${lengthLabel(least.diameterMm, units)} now; it follows the readings until you type a number, and ${kit ? stepNote(kit, units) : ""}.` : "Blank: the least cut that clears."}
         />
         <TextField<StudyFormValues>
           name="cut.depthMm"
