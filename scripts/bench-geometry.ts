@@ -9,6 +9,7 @@
 // the largest rig the schema allows.
 
 import { readFileSync } from "node:fs";
+import { availableParallelism, loadavg } from "node:os";
 import { depthStopWorkBound, searchDepthStop } from "../geometry/depth-stop";
 import { flattenDiskPolygonArea, flattenPointToPolygonBoundary } from "../geometry/flatten-adapter";
 import { type Outline, type Study, type StudyInput, StudySchema, evaluateStudy } from "../geometry/index";
@@ -28,8 +29,14 @@ function median(xs: number[]): number {
   return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
 }
 
-/** Median wall time of fn in ms; fast calls are timed in batches so the timer's resolution does not count. */
-function timeMedianMs(fn: () => void, budgetMs = 400): number {
+/** A timing: the median, and the best sample (what the call costs when nothing else takes the core). */
+interface Timing {
+  readonly median: number;
+  readonly best: number;
+}
+
+/** Wall time of fn in ms; fast calls are timed in batches so the timer's resolution does not count. */
+function timeMs(fn: () => void, budgetMs = 400): Timing {
   const t0 = performance.now();
   let calls = 0;
   while (performance.now() - t0 < budgetMs / 4 || calls < 3) {
@@ -45,7 +52,7 @@ function timeMedianMs(fn: () => void, budgetMs = 400): number {
     for (let i = 0; i < batch; i++) fn();
     samples.push((performance.now() - s) / batch);
   }
-  return median(samples);
+  return { median: median(samples), best: Math.min(...samples) };
 }
 
 type Query = { kind: "distance"; p: Vec2; points: readonly Vec2[] } | { kind: "area"; c: Vec2; r: number; outline: Outline & { kind: "polygon" } };
@@ -71,18 +78,19 @@ function polygonQueries(study: Study): Query[] {
 function scenario(name: string, input: StudyInput) {
   const study = StudySchema.parse(input);
   const queries = polygonQueries(study);
-  const evalMs = timeMedianMs(() => void evaluateStudy(study));
+  const evalMs = timeMs(() => void evaluateStudy(study));
   let flattenFailures = 0;
+  const none: Timing = { median: 0, best: 0 };
   const analyticMs = queries.length
-    ? timeMedianMs(() => {
+    ? timeMs(() => {
         for (const q of queries) {
           if (q.kind === "distance") pointToPolygonBoundary(q.p, q.points, TOL);
           else diskInsideArea(q.c, q.r, q.outline, TOL);
         }
       })
-    : 0;
+    : none;
   const flattenMs = queries.length
-    ? timeMedianMs(() => {
+    ? timeMs(() => {
         for (const q of queries) {
           if (q.kind === "distance") flattenPointToPolygonBoundary(q.p, q.points);
           else {
@@ -95,7 +103,7 @@ function scenario(name: string, input: StudyInput) {
           }
         }
       })
-    : 0;
+    : none;
   return { name, kits: study.kits.length, queries: queries.length, evalMs, analyticMs, flattenMs, flattenFailed: flattenFailures > 0 };
 }
 
@@ -138,9 +146,10 @@ const rows = [
   }),
 ];
 
-const ms = (x: number) => (x < 0.1 ? `${(x * 1000).toFixed(1)} µs` : `${x.toFixed(3)} ms`);
-const ratio = (a: number, b: number) => (b > 0 ? `${(a / b).toFixed(2)}×` : "n/a");
-console.log(`geometry bench — Node ${process.version}, medians\n`);
+const one_ = (x: number) => (x < 0.1 ? `${(x * 1000).toFixed(1)} µs` : `${x.toFixed(3)} ms`);
+const ms = (t: Timing) => `${one_(t.median)} (best ${one_(t.best)})`;
+const ratio = (a: Timing, b: Timing) => (b.median > 0 ? `${(a.median / b.median).toFixed(2)}× (best ${(a.best / b.best).toFixed(2)}×)` : "n/a");
+console.log(`geometry bench — Node ${process.version}, medians; ${availableParallelism()} cores, load average ${loadavg()[0].toFixed(1)} (figures scale with it)\n`);
 console.log("## Evaluation (evaluateStudy)\n");
 console.log("| scenario | kits | polygon queries | evaluation | analytic floor | flatten-js floor | evaluation / flatten floor | analytic / flatten floor |");
 console.log("|---|---|---|---|---|---|---|---|");
@@ -172,8 +181,8 @@ console.log("\n## Outline validation (one polygon)\n");
 console.log("| outline | sweep (polygonProblem) | pairwise check (before) | sweep / pairwise |");
 console.log("|---|---|---|---|");
 for (const [name, pts] of shapes) {
-  const sweepMs = timeMedianMs(() => void polygonProblem(pts));
-  const pairMs = timeMedianMs(() => void pairwiseCrossings(pts), 1500);
+  const sweepMs = timeMs(() => void polygonProblem(pts));
+  const pairMs = timeMs(() => void pairwiseCrossings(pts), 1500);
   console.log(`| ${name} | ${ms(sweepMs)} | ${ms(pairMs)} | ${ratio(sweepMs, pairMs)} |`);
 }
 const bigCase = {
@@ -185,7 +194,7 @@ const bigCase = {
     pockets: [{ label: "traced passage", outline: { kind: "polygon" as const, pointsMm: jitteredRing(n, 3, 0.001, 9).map((p): P => [p[0] + 33, p[1]]) } }],
   },
 };
-const parseMs = timeMedianMs(() => void StudySchema.parse(bigCase), 1500);
+const parseMs = timeMs(() => void StudySchema.parse(bigCase), 1500);
 console.log(`\nWhole study with the most case corners allowed (3 outlines × ${n}): StudySchema.parse ${ms(parseMs)}`);
 
 // Depth stop: the largest rig the schema allows, thicknesses with no two stacks alike.
@@ -195,9 +204,10 @@ const rig = {
   shims: odd.slice(0, MAX_SHIM_SIZES).map((thicknessMm) => ({ thicknessMm, count: MAX_SHIMS_PER_SIZE })),
 };
 let visited = 0;
-const stopMs = timeMedianMs(() => void (visited = searchDepthStop(27.77, rig, TOL).statesVisited), 1500);
-console.log(`\n## Depth stop\n\nLargest rig allowed (${MAX_GROOVES} grooves, ${MAX_SHIM_SIZES} sizes × ${MAX_SHIMS_PER_SIZE}): ${ms(stopMs)}, ${visited} states visited (bound ${depthStopWorkBound(rig)})`);
+// A new stock array each call, so the halves are built afresh rather than taken from the per-stock cache.
+const freshMs = timeMs(() => void (visited = searchDepthStop(27.77, { grooves: rig.grooves, shims: [...rig.shims] }, TOL).statesVisited), 1500);
+const cachedMs = timeMs(() => void searchDepthStop(27.77, rig, TOL), 1500);
+console.log(`\n## Depth stop\n\nLargest rig allowed (${MAX_GROOVES} grooves, ${MAX_SHIM_SIZES} sizes × ${MAX_SHIMS_PER_SIZE}): first search ${ms(freshMs)}, ${visited} states visited (bound ${depthStopWorkBound(rig)}); the next kit of the study ${ms(cachedMs)}`);
 
-const one = rows[1].evalMs <= 0.1;
-const twenty = rows[2].evalMs <= 1;
-console.log(`\naims: polygon case one kit ≤ 0.1 ms — ${one ? "met" : "NOT met"} (${ms(rows[1].evalMs)}); 20 kits ≤ 1 ms — ${twenty ? "met" : "NOT met"} (${ms(rows[2].evalMs)})`);
+const aim = (t: Timing, limitMs: number) => (t.median <= limitMs ? "met" : t.best <= limitMs ? "met by the best sample only (a busy machine)" : "NOT met");
+console.log(`\naims: polygon case one kit ≤ 0.1 ms — ${aim(rows[1].evalMs, 0.1)} (${ms(rows[1].evalMs)}); 20 kits ≤ 1 ms — ${aim(rows[2].evalMs, 1)} (${ms(rows[2].evalMs)})`);
