@@ -121,6 +121,10 @@ describe("trace a deck from a photo", () => {
   });
 
   it("refuses reference points that coincide, saying so next to the fields", async () => {
+    // A page of its own: the first one holds unsaved changes, which the form guards when leaving.
+    await page.close();
+    page = await context.newPage();
+    page.on("pageerror", (e) => pageErrors.push(e.message));
     const panel = await openPanel();
     // The kept photo comes back with the case profile.
     const surface = panel.getByTestId("trace-surface");
