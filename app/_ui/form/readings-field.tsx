@@ -2,6 +2,8 @@
 
 import { formatLength, type LengthUnits } from "@/geometry";
 import { useController, useFormContext, type FieldValues, type Path } from "react-hook-form";
+import { dateText } from "@/model/dates";
+import { useShopTimeZone } from "../query/settings/use-shop-settings";
 import { errorAt } from "./field-error";
 import { parseLengthText } from "./number-text";
 
@@ -35,6 +37,7 @@ export function ReadingsField<FV extends FieldValues>({
 }) {
   const { control, formState } = useFormContext<FV>();
   const { field } = useController({ control, name });
+  const zone = useShopTimeZone();
   const texts = (field.value as string[] | undefined) ?? [];
   const values = texts.map((t) => parseLengthText(t, units)).map((r) => (r.ok ? r.value : undefined));
   // Only readings without a message count towards the worst one and the spread.
@@ -86,7 +89,7 @@ export function ReadingsField<FV extends FieldValues>({
               ) : null}
               {stamp ? (
                 <p className="field-hint ml-22">
-                  taken by {stamp.takenBy}, {new Date(stamp.takenAt).toLocaleDateString()}
+                  taken by {stamp.takenBy}, {dateText(stamp.takenAt, zone)}
                 </p>
               ) : null}
             </li>
