@@ -1,7 +1,9 @@
 "use client";
 
 import { CylinderKitSchema, type LengthUnits } from "@/geometry";
+import { useMemo, useRef, useState } from "react";
 import { FormProvider, useFormContext } from "react-hook-form";
+import { useStore } from "zustand";
 import { FormNotice } from "../../../_ui/field";
 import type { KitRow } from "../../../_ui/query/types";
 import { CopyStudsFromCase } from "./copy-studs";
@@ -11,14 +13,24 @@ import { SaveBar } from "@/app/_ui/form/save-bar";
 import { StudsField } from "@/app/_ui/form/studs-field";
 import { TextField } from "@/app/_ui/form/text-field";
 import { UnitToggle } from "@/app/_ui/form/unit-toggle";
-import { useLibraryForm } from "@/app/_ui/form/use-library-form";
-import { kitDefaults, kitToCore, type KitFormValues } from "./kit-values";
+import { convertLengthTexts } from "@/app/_ui/form/units-text";
+import { useLibraryForm, type OutsideValues } from "@/app/_ui/form/use-library-form";
+import { kitDefaults, kitDoc, kitToCore, mergeKit, type KitFormValues } from "./kit-values";
+import { GasketSection } from "./shapes/gasket-section";
+import { createShapeStore, switchUnits } from "./shapes/shape-store";
+import { useShapeValidation } from "./shapes/use-shape-validation";
 
 /** Half the last digit of a length shown in inches (0.0001 in): a reading shown in inches still finds its stamp. */
 const INCH_TEXT_MM = 0.0013;
 
-/** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets, price. */
+/** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets and the base gasket's ports, price. */
 export function KitForm({ row, units: initialUnits }: { row: KitRow | null; units: LengthUnits }) {
+  const [store] = useState(() => createShapeStore(convertLengthTexts(kitDoc(row), "mm", initialUnits), initialUnits));
+  const saved = useRef(store.getState().doc);
+  const outside = useMemo<OutsideValues<KitFormValues>>(
+    () => ({ merge: (v) => mergeKit(v, store.getState().doc), switchUnits: (to) => switchUnits(store, to), saved: () => void (saved.current = store.getState().doc) }),
+    [store],
+  );
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "kits",
     id: row?.id ?? null,
@@ -32,7 +44,12 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
       void _id;
       return { name, notes: values.notes, data };
     },
+    fieldPath: (p) => p.replace(/^data\./, ""),
+    outside,
   });
+  const shapesDirty = useStore(store, (s) => s.doc !== saved.current);
+  const scope = useRef<HTMLFormElement>(null);
+  const validate = useShapeValidation(store, form);
   const stamp = (list: KitRow["readings"]["skirtDiameter"] | undefined) => (v: number | undefined) => {
     const r = v === undefined ? undefined : list?.find((x) => Math.abs(x.valueMm - v) < INCH_TEXT_MM);
     return r ? { takenBy: r.takenBy.name, takenAt: r.takenAt } : undefined;
@@ -40,7 +57,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
 
   return (
     <FormProvider {...form}>
-      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit kit ${row.name}` : "New cylinder kit"}>
+      <form ref={scope} onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit kit ${row.name}` : "New cylinder kit"}>
         <div className="flex flex-wrap items-center justify-between gap-3">
           <h1 className="text-2xl font-semibold">{row ? row.name : "New cylinder kit"}</h1>
           <UnitToggle units={units} onChange={setUnits} />
@@ -88,7 +105,8 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
           />
           <GasketSwitch />
         </FormSection>
-        <SaveBar busy={busy} isNew={!row} backHref="/library?kind=kits" dirty={form.formState.isDirty} />
+        <GasketSection store={store} units={units} scope={scope} onCommit={validate} />
+        <SaveBar busy={busy} isNew={!row} backHref="/library?kind=kits" dirty={form.formState.isDirty || shapesDirty} />
       </form>
     </FormProvider>
   );

@@ -1,8 +1,11 @@
-import type { LengthUnits } from "@/geometry";
+import { CylinderKitSchema, type LengthUnits } from "@/geometry";
+import type { Capture } from "@/geometry/shapes";
 import type { KitRow } from "../../../_ui/query/types";
 import type { FormReader } from "@/app/_ui/form/form-reader";
 import { lengthText, numberText } from "@/app/_ui/form/number-text";
-import { readStuds, studsText } from "@/app/_ui/form/read-shapes";
+import { outlineText, readOutline, readStuds, studsText } from "@/app/_ui/form/read-shapes";
+import { emptyOutline, type OutlineText } from "@/app/_ui/form/text-values";
+import type { PocketText, ShapeDoc } from "./shapes/shape-store";
 import type { StudText } from "@/app/_ui/form/text-values";
 
 export type KitFormValues = {
@@ -17,7 +20,39 @@ export type KitFormValues = {
   baseGasketsMm: string[];
   alwaysWithGasket: boolean;
   price: string;
+  /** The base gasket at the deck (kept in the shape store): its outline, optional, and its port windows. */
+  gasket?: { outline: OutlineText; ports: PocketText[] };
+  /** The measurements the gasket's shapes were drawn from. */
+  capture?: Capture;
 };
+
+/** The kit's base gasket as the shape store's first doc (lengths in mm); the bore stands in for the mouth. */
+export function kitDoc(row: KitRow | null): ShapeDoc {
+  const g = row?.data.baseGasket;
+  return {
+    deck: g?.outline ? outlineText(g.outline, "mm") : emptyOutline("polygon"),
+    mouth: emptyOutline("circle"),
+    studs: [],
+    pockets: (g?.ports ?? []).map((p) => ({ label: p.label, startDepthMm: "0", outline: outlineText(p.outline, "mm") })),
+    capture: renameKeys(row?.data.capture ?? {}, "gasket", "ports", "deck", "pockets"),
+  };
+}
+
+/** The store calls the gasket's outline and ports "deck" and "pockets"; the kit's data names them as they are. */
+function renameKeys(c: Capture, outline: string, ports: string, toOutline: string, toPorts: string): Capture {
+  return Object.fromEntries(Object.entries(c).map(([k, v]) => [k === outline ? toOutline : k.replace(new RegExp(`^${ports}\\.`), `${toPorts}.`), v]));
+}
+
+/** The form's values with the gasket from the store. */
+export function mergeKit(v: KitFormValues, doc: ShapeDoc): KitFormValues {
+  return { ...v, gasket: { outline: doc.deck ?? emptyOutline("polygon"), ports: doc.pockets }, capture: renameKeys(doc.capture, "deck", "pockets", "gasket", "ports") };
+}
+
+/** Whether an outline's texts hold anything (a gasket without an outline leaves it empty). */
+const filled = (o: OutlineText) => (o.kind === "polygon" ? o.pointsMm.length > 0 : o.diameterMm.trim() !== "");
+
+/** The kit schema knows the base gasket (the port overlay's input). */
+const TAKES_GASKET = "baseGasket" in CylinderKitSchema.shape;
 
 export function kitDefaults(row: KitRow | null, units: LengthUnits): KitFormValues {
   const d = row?.data;
@@ -55,5 +90,18 @@ export function kitToCore(v: KitFormValues, read: FormReader): unknown {
     baseGasketsMm: read.lengths(v.baseGasketsMm, ["baseGasketsMm"]),
     alwaysWithGasket: v.alwaysWithGasket,
     price: read.number(v.price, ["price"]),
+    ...gasketToCore(v, read),
   };
+}
+
+function gasketToCore(v: KitFormValues, read: FormReader): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  if (v.capture && Object.keys(v.capture).length) out.capture = v.capture;
+  const g = v.gasket;
+  if (!TAKES_GASKET || !g || (!filled(g.outline) && g.ports.length === 0)) return out;
+  out.baseGasket = {
+    ...(filled(g.outline) ? { outline: readOutline(g.outline, ["baseGasket", "outline"], read) } : {}),
+    ports: g.ports.map((p, i) => ({ label: p.label.trim(), outline: readOutline(p.outline, ["baseGasket", "ports", i, "outline"], read) })),
+  };
+  return out;
 }

@@ -1,10 +1,11 @@
 "use client";
 
 import type { LengthUnits } from "@/geometry";
-import { useMemo, type RefObject } from "react";
+import { useMemo, useState, type RefObject } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { parseLengthText } from "@/app/_ui/form/number-text";
 import { CaptureSources } from "./capture-sources";
+import { CaseTrial } from "./case-trial";
 import { HistoryBar } from "./history-bar";
 import { PlanEditor, type ShapeWords } from "./plan-editor";
 import type { ShapeStore } from "./shape-store";
@@ -22,6 +23,7 @@ export function CasePlan({ store, units, scope, onCommit, caseId }: { store: Sha
   const { control } = useFormContext();
   const readings = useWatch({ control, name: "mouthReadingsMm" }) as string[] | undefined;
   const hole = useWatch({ control, name: "studHoleDiameterMm" }) as string | undefined;
+  const [shown, setShown] = useState(true);
   const key = `${(readings ?? []).join("|")}#${hole ?? ""}#${units}`;
   const extras = useMemo(() => {
     const values = (readings ?? []).map((t) => mm(t, units)).filter((v): v is number => v !== null);
@@ -34,10 +36,16 @@ export function CasePlan({ store, units, scope, onCommit, caseId }: { store: Sha
       <section className="card flex flex-col gap-3 p-4" aria-label="Plan at the deck">
         <div className="flex flex-wrap items-center justify-between gap-2">
           <h2 className="text-base font-semibold">Plan at the deck</h2>
-          <HistoryBar store={store} scope={scope} onChange={onCommit} />
+          <div className="flex items-center gap-2">
+            <HistoryBar store={store} scope={scope} onChange={onCommit} />
+            <button type="button" className="btn-quiet" aria-pressed={!shown} onClick={() => setShown(!shown)}>
+              {shown ? "Hide the plan" : "Show the plan"}
+            </button>
+          </div>
         </div>
-        <PlanEditor store={store} extras={extras} words={WORDS} title="Plan at the deck, as entered" fixedCircles={FIXED} onCommit={onCommit} />
+        {shown ? <PlanEditor store={store} extras={extras} words={WORDS} title="Plan at the deck, as entered" fixedCircles={FIXED} onCommit={onCommit} /> : null}
       </section>
+      <CaseTrial store={store} />
       <CaptureSources units={units} caseId={caseId} onApply={(s) => store.getState().act.apply(s, "passage")} />
     </div>
   );

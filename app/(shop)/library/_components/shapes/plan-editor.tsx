@@ -2,6 +2,7 @@
 
 import { useDrag } from "@use-gesture/react";
 import { useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
+import { flushSync } from "react-dom";
 import { useStore } from "zustand";
 import { editDrawing, type Frame } from "@/scene/drawing/plan-edit";
 import { docIssues, docShapes, type DocExtras } from "./read-doc";
@@ -101,7 +102,9 @@ export function PlanEditor({
         return grip;
       }
       const at = toMm(cx, cy);
-      if (!tap && at && (!first || Math.hypot(cx - ix, cy - iy) > 0)) store.getState().act.movePoint(grip.key, [at[0] + grip.offset[0], at[1] + grip.offset[1]], !altKey);
+      const g = grip;
+      // Rendered before the event returns, so the frame that follows the pointer shows the point where it is.
+      if (!tap && at && (!first || Math.hypot(cx - ix, cy - iy) > 0)) flushSync(() => store.getState().act.movePoint(g.key, [at[0] + g.offset[0], at[1] + g.offset[1]], !altKey));
       if (last) {
         grip.end?.();
         setFrame(null);

@@ -22,6 +22,7 @@ export function StoreOutlineField({
   measures,
   circleSlot,
   mirror,
+  what,
   children,
 }: {
   store: ShapeStore;
@@ -32,6 +33,8 @@ export function StoreOutlineField({
   circleSlot?: ReactNode;
   /** "flip": mirror in place; "copy": add a mirrored copy (a passage traced on one side). */
   mirror?: "flip" | "copy";
+  /** What the measurements draw ("gasket outline"); the label in lower case when absent. */
+  what?: string;
   children?: ReactNode;
 }) {
   const o = useStore(store, (s) => outlineAt(s.doc, shapeKey)) ?? emptyOutline();
@@ -58,7 +61,7 @@ export function StoreOutlineField({
         {mirror ? <MirrorButtons store={store} shapeKey={shapeKey} label={label} copy={mirror === "copy"} /> : null}
       </div>
       {children}
-      {measures ? <MeasurePanel key={`${units}-${params?.kind ?? ""}`} specs={measures} params={params} units={units} what={label.toLowerCase()} onApply={apply} /> : null}
+      {measures ? <MeasurePanel key={`${units}-${params?.kind ?? ""}`} specs={measures} params={params} units={units} what={what ?? label.toLowerCase()} onApply={apply} /> : null}
       {o.kind === "polygon" ? (
         <Corners store={store} shapeKey={shapeKey} path={path} label={label} points={o.pointsMm} units={units} onChange={(pointsMm) => set({ ...o, pointsMm })} />
       ) : (
