@@ -7,6 +7,7 @@ import { chamferedDeck, circle, project, renderDeckPhoto, type Camera, type Deck
 import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
 import { newCase, ok } from "../integration/library-fixtures";
+import { demoCaseDxf } from "../../scripts/render-demo-case-photo";
 
 const DECK = chamferedDeck(110, 100, 18);
 const STUDS: Mm[] = [[-28, -28], [28, -28], [28, 28], [-28, 28]];
@@ -135,5 +136,25 @@ describe("trace a deck from a photo", () => {
     for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickAt(surface, s);
     await expect.poll(() => panel.getByRole("alert").first().innerText()).toMatch(/are on the same spot/);
     await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
+  });
+
+  it("imports the same deck from a DXF drawing, each shape picked by its layer", async () => {
+    await page.goto(`/library/cases/${caseId}`);
+    const opener = page.locator("summary", { hasText: "Import a drawing" });
+    await opener.or(page.getByRole("region", { name: "Import a drawing" })).first().waitFor();
+    if (await opener.count()) await opener.click();
+    const panel = page.getByRole("region", { name: "Import a drawing" });
+    await panel.waitFor();
+
+    await panel.getByLabel(/^Drawing \(DXF or SVG/).setInputFiles({ name: "empty.dxf", mimeType: "application/dxf", buffer: Buffer.from("") });
+    await expect.poll(() => panel.getByRole("alert").first().innerText()).toBe("The file is empty. Nothing was put into the form.");
+
+    await panel.getByLabel(/^Drawing \(DXF or SVG/).setInputFiles({ name: "eight-sided-case-deck.dxf", mimeType: "application/dxf", buffer: Buffer.from(demoCaseDxf()) });
+    const rows = panel.getByRole("table", { name: "Which shape is which" }).locator("tbody tr");
+    await expect.poll(() => rows.count()).toBe(8);
+    await expect.poll(() => panel.getByLabel(/What shape 1 \(closed polyline on layer DECK/).inputValue()).toBe("deck");
+    expect(await panel.getByLabel(/What shape 2 \(circle on layer MOUTH/).inputValue()).toBe("mouth");
+    await panel.getByRole("button", { name: "Put the shapes into the form" }).click();
+    await expect.poll(() => panel.getByRole("status").first().innerText()).toBe("Put into the form: the deck, the mouth, 4 studs, 2 passages.");
   });
 });
