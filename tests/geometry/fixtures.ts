@@ -73,3 +73,21 @@ export const testRig = {
 export function parse(input: StudyInput): Study {
   return StudySchema.parse(input);
 }
+
+type P = [number, number];
+
+/** Four studs on a square of half-side `half` centred at `center` (not necessarily the cylinder axis). */
+export function squarePattern(half: number, center: P = [0, 0]) {
+  return squareStuds(half).map((s) => ({ ...s, positionMm: [s.positionMm[0] + center[0], s.positionMm[1] + center[1]] as P }));
+}
+
+/** The round study with the case's studs (and the kit's, which match them) centred at `center` instead of the cylinder axis. */
+export function offCentreStudyInput(center: P): StudyInput {
+  const s = roundStudyInput();
+  return { ...s, case: { ...s.case, studs: squarePattern(28, center) }, kits: s.kits.map((k) => ({ ...k, studs: squarePattern(28, center) })) };
+}
+
+/** Holder-height readings at the given studs lying exactly on the plane h = a·x + b·y + c. */
+export function planeReadings(studs: readonly { label: string; positionMm: readonly number[] }[], a: number, b: number, c: number) {
+  return { holderHeights: studs.map((s) => ({ stud: s.label, heightMm: a * s.positionMm[0] + b * s.positionMm[1] + c })) };
+}
