@@ -48,11 +48,20 @@ interface Edge {
  * Computational Geometry, 3rd ed., §2.1).
  */
 export function polygonProblem(points: readonly Vec2[], minAreaMm2: number = DEFAULT_MIN_POLYGON_AREA_MM2): PolygonProblem | null {
+  return polygonCheck(points, minAreaMm2).problem;
+}
+
+/**
+ * polygonProblem's answer and how the edges were decided: "sweep", or "pairwise" if the sweep ever found its
+ * order broken and checked every pair instead (never expected: it keeps a wrong answer impossible, at O(n²)).
+ */
+export function polygonCheck(points: readonly Vec2[], minAreaMm2: number = DEFAULT_MIN_POLYGON_AREA_MM2): { problem: PolygonProblem | null; method: "sweep" | "pairwise" } {
   const n = points.length;
+  const early = (problem: PolygonProblem) => ({ problem, method: "sweep" as const });
   for (let i = 0; i < n; i++) {
     const p = points[i];
     const q = points[(i + 1) % n];
-    if (p[0] === q[0] && p[1] === q[1]) return { kind: "repeated-point", corner: i };
+    if (p[0] === q[0] && p[1] === q[1]) return early({ kind: "repeated-point", corner: i });
   }
   const xs = Float64Array.from(points, (p) => p[0]);
   const ys = Float64Array.from(points, (p) => p[1]);
@@ -60,14 +69,19 @@ export function polygonProblem(points: readonly Vec2[], minAreaMm2: number = DEF
   for (let k = 1; k < n; k++) {
     const a = points[order[k - 1]];
     const b = points[order[k]];
-    if (a[0] === b[0] && a[1] === b[1]) return { kind: "repeated-corner", first: Math.min(order[k - 1], order[k]), second: Math.max(order[k - 1], order[k]) };
+    if (a[0] === b[0] && a[1] === b[1]) return early({ kind: "repeated-corner", first: Math.min(order[k - 1], order[k]), second: Math.max(order[k - 1], order[k]) });
   }
-  const met = sweep(points, order);
+  const swept = sweep(points, order);
+  const method = swept === LOST ? "pairwise" : "sweep";
+  const met = swept === LOST ? bruteForce(points, edgesOf(points)) : swept;
   // Corners all on one line fold the outline onto itself: say it has no area rather than which edges overlap.
   const flat = Math.abs(signedArea(points)) < minAreaMm2;
-  if (flat && (met === undefined || met.kind === "edges-touch")) return { kind: "no-area" };
-  return met ?? null;
+  if (flat && (met === undefined || met.kind === "edges-touch")) return { problem: { kind: "no-area" }, method };
+  return { problem: met ?? null, method };
 }
+
+/** What the sweep returns when its order is found broken. */
+const LOST = "lost";
 
 /** Compatibility form of polygonProblem's edge test: the first pair of edges that cross or touch, or none. */
 export function selfIntersections(points: readonly Vec2[]): Array<[number, number]> {
@@ -88,7 +102,7 @@ function edgesOf(points: readonly Vec2[]): Edge[] {
 const pair = (a: number, b: number): [number, number] => (a < b ? [a, b] : [b, a]);
 
 /** The sweep proper, over corners that are all distinct: the status holds the edges the sweep line crosses, bottom to top. */
-function sweep(points: readonly Vec2[], order: Uint32Array): PolygonProblem | undefined {
+function sweep(points: readonly Vec2[], order: Uint32Array): PolygonProblem | undefined | typeof LOST {
   const n = points.length;
   const edges = edgesOf(points);
   const adjacent = (a: Edge, b: Edge) => (a.i + 1) % n === b.i || (b.i + 1) % n === a.i;
@@ -121,8 +135,8 @@ function sweep(points: readonly Vec2[], order: Uint32Array): PolygonProblem | un
       if (s !== prev && s !== next) return { kind: "edges-touch", edges: pair(s.i, adjacent(s, next) ? prev.i : next.i) };
       end++;
     }
-    // Every edge ending here must be in the status at this corner; if not, the order was lost, so decide the slow way.
-    if (end - lo !== ending.length) return bruteForce(points, edges);
+    // Every edge ending here must be in the status at this corner; if not, the order was lost.
+    if (end - lo !== ending.length) return LOST;
     status.splice(lo, ending.length);
     if (ending.length === 2 && orient2d(x, y, prev.lx, prev.ly, next.lx, next.ly) === 0) return { kind: "edges-touch", edges: pair(prev.i, next.i) };
     if (starting.length === 2) {

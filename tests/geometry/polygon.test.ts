@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { MAX_CASE_CORNERS, MAX_OUTLINE_CORNERS, OutlineSchema, StudySchema } from "../../geometry/schema";
-import { describePolygonProblem, polygonProblem } from "../../geometry/simplicity";
+import { describePolygonProblem, polygonCheck, polygonProblem } from "../../geometry/simplicity";
 import { roundStudyInput } from "./fixtures";
 
 type P = [number, number];
@@ -56,8 +56,10 @@ describe("polygon validity by sweep", () => {
     fc.assert(
       fc.property(fc.oneof(gridPolygonArb, snappedStarArb), (pts) => {
         const expected = simpleByBruteForce(pts);
-        const problem = polygonProblem(pts);
+        const { problem, method } = polygonCheck(pts);
         expect(problem === null).toBe(expected);
+        // The sweep decides alone: the pairwise safety net, which would make it O(n²), is never needed.
+        expect(method).toBe("sweep");
         seen[expected ? "valid" : "invalid"]++;
         // An edge pair it names really meets.
         if (problem && (problem.kind === "edges-cross" || problem.kind === "edges-touch")) {
@@ -108,7 +110,7 @@ describe("polygon validity by sweep", () => {
     const comb: P[] = [];
     for (let t = 0; t < (n - 4) / 4; t++) comb.push([0, 2 * t], [1000, 2 * t], [1000, 2 * t + 1], [1, 2 * t + 1]);
     comb.push([1, n / 2], [-1, n / 2], [-1, 0]);
-    for (const pts of [traced, star, comb]) expect(polygonProblem(pts)).toBeNull();
+    for (const pts of [traced, star, comb]) expect(polygonCheck(pts)).toEqual({ problem: null, method: "sweep" });
     // One corner moved across the star's centre makes it cross itself.
     const broken = star.map((p, i): P => (i === 500 ? [-p[0], -p[1]] : p));
     expect(polygonProblem(broken)?.kind).toBe("edges-cross");
