@@ -1,6 +1,7 @@
 // Tracing a case from a photo in Chromium: the test paints a known eight-sided deck with four studs at a known
 // spacing, seen by a tilted pinhole camera, uploads it to a case profile, clicks the four studs and the deck's
 // corners at the pixels the same camera puts them, and checks the traced outline against the truth.
+import { createRequire } from "node:module";
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { chamferedDeck, circle, project, renderDeckPhoto, type Camera, type DeckScene, type Mm } from "../../scripts/deck-photo";
@@ -61,6 +62,18 @@ async function openPanel(): Promise<Locator> {
   return panel;
 }
 
+/** Serious or critical accessibility violations inside one region, by axe-core's rules. */
+async function axeViolations(selector: string): Promise<string[]> {
+  await page.addScriptTag({ path: createRequire(import.meta.url).resolve("axe-core/axe.min.js") });
+  return page.evaluate(
+    (sel) =>
+      (window as unknown as { axe: { run: (ctx: string) => Promise<{ violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[] }> } }).axe
+        .run(sel)
+        .then((r) => r.violations.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(" ")).join("; ")})`)),
+    selector,
+  );
+}
+
 /** A length as the field wants it: mm as typed, or inches when the form is in inches. */
 async function lengthFor(panel: Locator, label: RegExp, mm: number): Promise<string> {
   const text = await panel.getByText(label).first().innerText();
@@ -119,6 +132,7 @@ describe("trace a deck from a photo", () => {
     await panel.getByRole("button", { name: "Put the traced shapes into the form" }).click();
     await expect.poll(() => panel.getByText(/^Put into the form:/).innerText()).toBe("Put into the form: the deck, 4 studs.");
     await screenshot(page, "photo-trace");
+    expect(await axeViolations('[aria-label="Trace from a photo"]')).toEqual([]);
   });
 
   it("refuses reference points that coincide, saying so next to the fields", async () => {
@@ -156,5 +170,6 @@ describe("trace a deck from a photo", () => {
     expect(await panel.getByLabel(/What shape 2 \(circle on layer MOUTH/).inputValue()).toBe("mouth");
     await panel.getByRole("button", { name: "Put the shapes into the form" }).click();
     await expect.poll(() => panel.getByRole("status").first().innerText()).toBe("Put into the form: the deck, the mouth, 4 studs, 2 passages.");
+    expect(await axeViolations('[aria-label="Import a drawing"]')).toEqual([]);
   });
 });

@@ -160,7 +160,7 @@ export function DrawingImport({ onApply, roles: allowed = ["deck", "mouth", "pas
           {view?.declaredUnit ? <p className="field-hint">The file says {view.declaredUnit === "mm" ? "millimetres" : "inches"}.</p> : view ? <p className="field-hint">The file does not say; check one known length.</p> : null}
         </div>
         <div className="w-44">
-          <label htmlFor="drawing-tolerance" className="field-label">Chord tolerance <span className="text-ink-3 num">(mm)</span></label>
+          <label htmlFor="drawing-tolerance" className="field-label">Chord tolerance <span className="text-ink-2 num">(mm)</span></label>
           <input id="drawing-tolerance" className="field-input num" inputMode="decimal" value={toleranceText} onChange={(e) => setToleranceText(e.target.value)} aria-invalid={toleranceError ? true : undefined} aria-describedby={toleranceError ? "drawing-tolerance-error" : undefined} />
           {toleranceError ? <p id="drawing-tolerance-error" className="field-error" role="alert">{toleranceError}</p> : null}
         </div>

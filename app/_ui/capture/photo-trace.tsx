@@ -472,7 +472,7 @@ function LengthInput(props: { id: string; label: string; units: LengthUnits; val
   return (
     <div className="w-56">
       <label htmlFor={props.id} className="field-label">
-        {props.label} <span className="text-ink-3 num">({props.units})</span>
+        {props.label} <span className="text-ink-2 num">({props.units})</span>
       </label>
       <input id={props.id} className="field-input num" inputMode="decimal" value={props.value} onChange={(e) => props.onChange(e.target.value)} aria-invalid={error ? true : undefined} aria-describedby={error ? `${props.id}-error` : props.hint ? `${props.id}-hint` : undefined} />
       {error ? <p id={`${props.id}-error`} className="field-error" role="alert">{error}</p> : props.hint ? <p id={`${props.id}-hint`} className="field-hint">{props.hint}</p> : null}
