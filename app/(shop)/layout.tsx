@@ -40,7 +40,7 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
           Confirm your e-mail address: the link is in your inbox.
         </div>
       ) : null}
-      <main className="mx-auto w-full min-w-0 max-w-7xl flex-1 px-4 py-6 sm:px-6 sm:py-8">{children}</main>
+      <main className="mx-auto w-full min-w-0 max-w-7xl flex-1 px-6 py-6 sm:py-8">{children}</main>
       <footer className="border-t border-rule px-6 py-4 text-center text-xs text-ink-3">
         Borewright plans cuts; it does not replace the kit maker&apos;s instructions, local regulations or a qualified machinist.
       </footer>

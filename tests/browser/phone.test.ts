@@ -3,12 +3,21 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
-import { DEMO } from "../support/http";
+import { DEMO, signIn } from "../support/http";
+import { insertExampleStudy, jobBody, me } from "../integration/jobs-support";
 
 const PHONE = { width: 390, height: 844 };
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();
+  // Rows for every kind of page: the example's case, kits, rig and study, and a job shared with the demo customer.
+  const owner = await signIn(DEMO.owner.email, DEMO.owner.password);
+  const o = await me(owner);
+  const { studyId } = await insertExampleStudy(o.shopId, o.userId, `Phone study ${Date.now()}`);
+  const job = await owner.post("/api/v1/jobs", jobBody({ studyId, customerEmail: DEMO.customer.email }));
+  expect(job.status, job.text).toBe(201);
+  const shared = await owner.post(`/api/v1/jobs/${(job.json as { item: { id: string } }).item.id}/share`, {});
+  expect(shared.status, shared.text).toBe(200);
 });
 afterAll(async () => {
   await browser?.close();
@@ -20,7 +29,15 @@ async function overflow(page: Page): Promise<{ scrollWidth: number; innerWidth: 
     const root = document.scrollingElement ?? document.documentElement;
     let culprit = "";
     let widest = window.innerWidth;
+    // An element inside a box that scrolls or clips sideways does not widen the page, unless it is positioned
+    // out of that box (an absolutely placed label escapes a scroll box that is not its containing block).
+    const clipped = (el: Element) => {
+      if (["absolute", "fixed"].includes(getComputedStyle(el).position)) return false;
+      for (let p = el.parentElement; p && p !== document.body; p = p.parentElement) if (getComputedStyle(p).overflowX !== "visible") return true;
+      return false;
+    };
     for (const el of Array.from(document.body.querySelectorAll("*"))) {
+      if (clipped(el)) continue;
       const r = el.getBoundingClientRect();
       if (r.right > widest + 0.5) {
         widest = r.right;
@@ -31,10 +48,11 @@ async function overflow(page: Page): Promise<{ scrollWidth: number; innerWidth: 
   });
 }
 
-/** The first link on a page whose address matches, as a path (to reach a row's own page). */
-async function firstHref(page: Page, pattern: RegExp): Promise<string | null> {
-  const hrefs = await page.locator("a[href]").evaluateAll((as) => as.map((a) => a.getAttribute("href") ?? ""));
-  return hrefs.find((h) => pattern.test(h)) ?? null;
+/** The address of the first link a CSS selector finds, once the list has loaded (to reach a row's own page). */
+async function firstHref(page: Page, selector: string): Promise<string | null> {
+  const link = page.locator(selector).first();
+  await link.waitFor({ state: "attached", timeout: 20_000 }).catch(() => undefined);
+  return (await link.count()) ? link.getAttribute("href") : null;
 }
 
 async function checkPages(page: Page, paths: string[]) {
@@ -42,7 +60,9 @@ async function checkPages(page: Page, paths: string[]) {
   for (const path of paths) {
     await page.goto(path);
     await page.waitForLoadState("load");
-    await page.locator("h1").first().waitFor();
+    // The page's own content is there and no table is still loading its rows.
+    await page.locator("main").first().waitFor();
+    await expect.poll(() => page.locator('[aria-busy="true"]').count(), { message: path }).toBe(0);
     const o = await overflow(page);
     if (o.scrollWidth > o.innerWidth) wide.push(`${path}: ${o.scrollWidth} px > ${o.innerWidth} px (${o.culprit})`);
   }
@@ -52,14 +72,14 @@ async function checkPages(page: Page, paths: string[]) {
 async function staffPages(page: Page, role: "owner" | "builder"): Promise<string[]> {
   const paths = ["/home", "/studies", "/library", "/library?kind=kits", "/library?kind=rigs", "/library/cases/new", "/library/kits/new", "/library/rigs/new", "/jobs", "/jobs/new"];
   await page.goto("/studies");
-  const study = await firstHref(page, /^\/studies\/[^/?]+$/);
+  const study = await firstHref(page, 'table a[href^="/studies/"]');
   await page.goto("/library");
-  const caseRow = await firstHref(page, /^\/library\/cases\/(?!new)[^/?]+$/);
+  const caseRow = await firstHref(page, 'table a[href^="/library/cases/"]');
   await page.goto("/jobs");
-  const job = await firstHref(page, /^\/jobs\/(?!new)[^/?]+$/);
+  const job = await firstHref(page, 'table a[href^="/jobs/"]');
   for (const p of [study, caseRow, job, job ? job.replace("/jobs/", "/setup-card/") : null]) if (p) paths.push(p);
   if (role === "owner") paths.push("/settings", "/outbox");
-  expect(study && caseRow && job, "the demo has a study, a case profile and a job to open").toBeTruthy();
+  expect(study && caseRow && job, "a study, a case profile and a job to open").toBeTruthy();
   return paths;
 }
 
@@ -86,8 +106,8 @@ describe("every page at 390 px, by role", () => {
     const page = await person.newPage();
     await signInThroughForm(page, DEMO.customer.email, DEMO.customer.password);
     await page.goto("/consult");
-    const consult = await firstHref(page, /^\/consult\/[^/?]+$/);
-    expect(consult, "the demo customer has a shared job").toBeTruthy();
+    const consult = await firstHref(page, 'main a[href^="/consult/"]');
+    expect(consult, "the customer has a shared job").toBeTruthy();
     await checkPages(page, ["/consult", consult!]);
     await person.close();
   });

@@ -77,7 +77,7 @@ export default async function JobsPage({ searchParams }: { searchParams: Search 
             : "Try another status or fewer words."}
         </EmptyState>
       ) : (
-        <div className="card overflow-x-auto">
+        <div className="card relative overflow-x-auto">
           <table className="w-full text-sm">
             <thead className="border-b border-rule text-left text-ink-2">
               <tr>

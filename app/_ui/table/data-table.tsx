@@ -79,7 +79,8 @@ export function DataTable<T>({ label, data, columns, server, filter, initialSort
 
   return (
     <div className="flex flex-col gap-2" data-testid={testId}>
-      <div className="card overflow-x-auto">
+      {/* relative: the table's visually hidden labels (absolutely placed) stay inside the scroll box, not beside the page. */}
+      <div className="card relative overflow-x-auto">
         <table className="w-full border-collapse text-sm" aria-label={label} aria-busy={loading || undefined}>
           <thead className="bg-paper-2/70 text-left">
             {table.getHeaderGroups().map((hg) => (

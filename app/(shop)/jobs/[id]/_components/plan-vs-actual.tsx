@@ -12,7 +12,7 @@ export function PlanVsActual({ verification, at }: { verification: Verification;
       <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-clear bg-clear-soft" : verdict === "fail" ? "border-interfere bg-interfere-soft" : "border-tight bg-tight-soft"}`} data-testid="verdict">
         {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {dateTimeText(at, shopTimeZone())}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
       </p>
-      <div className="card overflow-x-auto">
+      <div className="card relative overflow-x-auto">
         <table className="w-full text-sm">
           <thead className="border-b border-rule text-left text-ink-2">
             <tr><th className="px-3 py-2">Check</th><th className="px-3 py-2">Plan</th><th className="px-3 py-2">Actual</th><th className="px-3 py-2">Result</th></tr>
