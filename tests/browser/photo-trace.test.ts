@@ -172,4 +172,24 @@ describe("trace a deck from a photo", () => {
     await expect.poll(() => panel.getByRole("status").first().innerText()).toBe("Put into the form: the deck, the mouth, 4 studs, 2 passages.");
     expect(await axeViolations('[aria-label="Import a drawing"]')).toEqual([]);
   });
+
+  it("turns a photo upright by its EXIF orientation before tracing", async () => {
+    const painter = await context.newPage();
+    const jpeg = await renderDeckPhoto(painter, CAMERA, SCENE, "image/jpeg", 0.8);
+    await painter.close();
+    // An APP1 segment right after the JPEG's start marker: "Exif", a big-endian TIFF header and one IFD entry,
+    // Orientation (tag 0x0112, SHORT) = 6, "rotate 90° clockwise to view" (CIPA DC-008 Exif 2.32, §4.6.4 A).
+    const tiff = Buffer.from([0x4d, 0x4d, 0x00, 0x2a, 0x00, 0x00, 0x00, 0x08, 0x00, 0x01, 0x01, 0x12, 0x00, 0x03, 0x00, 0x00, 0x00, 0x01, 0x00, 0x06, 0x00, 0x00, 0x00, 0x00, 0x00, 0x00]);
+    const body = Buffer.concat([Buffer.from("Exif\0\0", "latin1"), tiff]);
+    const app1 = Buffer.concat([Buffer.from([0xff, 0xe1, (body.length + 2) >> 8, (body.length + 2) & 0xff]), body]);
+    const turned = Buffer.concat([jpeg.subarray(0, 2), app1, jpeg.subarray(2)]);
+
+    const panel = await openPanel();
+    await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck-turned.jpg", mimeType: "image/jpeg", buffer: turned });
+    await expect.poll(() => panel.getByRole("status").first().innerText()).toMatch(/Photo kept with the case profile/);
+    // Upright, the 1200 × 900 picture stored on its side is 900 wide and 1200 tall.
+    const surface = panel.getByTestId("trace-surface");
+    expect([await surface.getAttribute("data-photo-width"), await surface.getAttribute("data-photo-height")]).toEqual(["900", "1200"]);
+    expect((await photos())[0]).toMatchObject({ state: "ready", widthPx: 900, heightPx: 1200 });
+  });
 });
