@@ -1,16 +1,9 @@
+import { ApiProblem } from "@/model/api-problem";
 import { callApi } from "../api-client";
 
 /** A refused or failed API call, in the product's one error shape. */
-export class ApiFailure extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly fields?: Record<string, string>,
-  ) {
-    super(message);
-    this.name = "ApiFailure";
-  }
+export class ApiFailure extends ApiProblem {
+  override name = "ApiFailure";
 }
 
 /** Reads JSON from the API; throws ApiFailure for any answer that is not 2xx. */

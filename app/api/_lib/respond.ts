@@ -5,20 +5,14 @@ import { AccessError } from "@/db/access";
 import { trustedOrigins } from "@/db/config";
 import { DataError } from "@/db/errors";
 import { GeometryError } from "@/geometry/errors";
+import { ApiProblem } from "@/model/api-problem";
 
 /** The one JSON error shape every API route answers with. */
 export type ApiErrorBody = { error: { code: string; message: string; fields?: Record<string, string> } };
 
-export class ApiError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly fields?: Record<string, string>,
-  ) {
-    super(message);
-    this.name = "ApiError";
-  }
+/** A refusal a route handler throws; `handle` answers it in the one error shape. */
+export class ApiError extends ApiProblem {
+  override name = "ApiError";
 }
 
 export function errorResponse(status: number, code: string, message: string, fields?: Record<string, string>) {
