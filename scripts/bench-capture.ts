@@ -14,8 +14,8 @@ import { join } from "node:path";
 import { chromium, type Page } from "playwright-core";
 import { applyMigrations } from "../db/migrate";
 import * as schema from "../db/schema";
-import { DEMO_PEOPLE, seedDemo } from "../db/seed";
-import { DEMO_CASES, DEMO_KITS } from "../db/seed-library";
+import { DEMO_PEOPLE, DEMO_SHOP, seedDemo } from "../db/seed";
+import { DEMO_CASES, DEMO_KITS, seedLibrary } from "../db/seed-library";
 import { freePort, root, startNext, waitFor } from "./lib.mjs";
 
 const dist = process.env.NEXT_DIST_DIR || ".next";
@@ -134,11 +134,13 @@ async function main() {
   const databaseURL = `file:${join(dir, "bench.db")}`;
   await applyMigrations({ ...process.env, DATABASE_URL: databaseURL });
   const seed = createClient({ url: databaseURL });
-  await seedDemo(drizzle(seed, { schema }));
+  const db = drizzle(seed, { schema });
+  await seedDemo(db);
+  await seedLibrary(db, DEMO_SHOP.id, DEMO_PEOPLE[0], DEMO_PEOPLE[1]);
   seed.close();
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
-  const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: randomBytes(32).toString("base64url") } });
+  const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"), PAYMENTS: "off" } });
   const browser = await chromium.launch({
     executablePath: "/usr/bin/chromium",
     args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],

@@ -34,6 +34,8 @@ export interface EditOptions {
   /** What the shapes are called ("deck", "mouth", "passage", …): the kit's gasket names them differently. */
   words?: { deck: string; mouth: string; pocket: string };
   title?: string;
+  /** A point is being dragged: the edges are not offered for clicking meanwhile (fewer elements to redraw). */
+  dragging?: boolean;
   /** Circles whose diameter is not dragged (a mouth whose diameter comes from its readings). */
   fixedCircles?: readonly string[];
   /** Studs drawn without handles (a kit's studs, entered in their own list). */
@@ -70,6 +72,7 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
   for (const i of o.issues ?? []) if (!bad.has(i.at)) bad.set(i.at, i.message);
   const mark = (key: string) => (bad.has(key) ? { stroke: INK.interfere, "stroke-width": 0.6 } : within(o.highlight, key) ? { stroke: INK.accent, "stroke-width": 0.6 } : {});
   const body: string[] = [];
+  const edges: string[] = [];
   const handles: string[] = [];
   const notes: string[] = [];
 
@@ -117,7 +120,7 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
     pts.forEach((p, i) => {
       const q = pts[(i + 1) % pts.length];
       const [x1, y1] = flip(p), [x2, y2] = flip(q);
-      handles.unshift(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge", style: "cursor:copy" }));
+      if (!o.dragging) edges.push(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge", style: "cursor:copy" }));
       point(`${key}:${i}`, "corner", p, `${word} corner ${i + 1}`);
     });
   };
@@ -166,6 +169,6 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
     if (y1 - y0 > 1) body.push(vdim(x0 - fs * 2.4, -y1, -y0, x0, lengthLabel(y1 - y0, o.units), fs * 0.85, INK.ink2));
   }
   body.push(el("circle", { cx: 0, cy: 0, r: hr * 0.6, fill: INK.ink2 }));
-  const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, w, h, body.join("") + handles.join("") + notes.join(""), "group");
+  const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, w, h, body.join("") + edges.join("") + handles.join("") + notes.join(""), "group");
   return { ...d, frame: f };
 }

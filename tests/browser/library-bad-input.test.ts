@@ -75,3 +75,27 @@ describe("bad input in the kit form", () => {
     await expect.poll(() => page.getByTestId("f-skirtDiameterReadingsMm-summary").innerText()).toMatch(/largest counts: 54\.55 mm \(reading 2\) · spread 0\.05 mm/);
   });
 });
+
+describe("bad input in the case form", () => {
+  it("shows a deck whose edges cross in the warning colour, says which edges, and refuses to save it", async () => {
+    await page.goto(`${inject("baseURL")}/library/cases/new`);
+    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await page.locator("#f-name").fill("Crossed deck case");
+    await page.getByRole("radiogroup", { name: "Deck shape" }).getByLabel("Polygon (corners)").check();
+    // A bow tie: (−50, −50) → (50, 50) → (50, −50) → (−50, 50) crosses itself between edges 1 and 3.
+    const corners = [["-50", "-50"], ["50", "50"], ["50", "-50"], ["-50", "50"]];
+    for (const [i, [x, y]] of corners.entries()) {
+      await page.getByRole("group", { name: "Deck", exact: true }).getByRole("button", { name: "Add a corner" }).click();
+      await page.getByLabel(`Deck corner ${i + 1} x (mm)`, { exact: true }).fill(x);
+      await page.getByLabel(`Deck corner ${i + 1} y (mm)`, { exact: true }).fill(y);
+    }
+    await expect.poll(() => page.getByTestId("shape-issues").innerText()).toMatch(/deck outline: polygon edges 1 and 3 cross/);
+    expect(await page.getByTestId("shape-plan").locator('path[data-key="deck"]').getAttribute("stroke")).toBe("#b3362c");
+    await expect.poll(() => page.getByRole("group", { name: "Deck", exact: true }).getByRole("alert").first().innerText()).toMatch(/edges 1 and 3 cross/);
+
+    await page.getByRole("button", { name: "Create" }).click();
+    await expect.poll(() => page.getByRole("alert").first().innerText()).toMatch(/nothing was saved and nothing was lost/);
+    expect(page.url()).toMatch(/\/library\/cases\/new$/);
+    expect(await page.getByLabel("Deck corner 4 y (mm)", { exact: true }).inputValue()).toBe("50");
+  });
+});

@@ -2,7 +2,7 @@
 
 import { CaseProfileSchema, evaluateStudy, safeParseStudy, type CaseProfile, type LengthUnits } from "@/geometry";
 import { diameterLabel, lengthLabel } from "@/model/units";
-import { useDeferredValue, useMemo, useState } from "react";
+import { useDeferredValue, useMemo, useRef, useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { useStore } from "zustand";
 import { FormReader } from "@/app/_ui/form/form-reader";
@@ -48,7 +48,9 @@ function trial(c: CaseProfile, row: KitRow, units: LengthUnits): Trial {
 export function CaseTrial({ store }: { store: ShapeStore }) {
   const kits = useLibraryOptions("kits");
   const [ids, setIds] = useState<string[]>([]);
-  const doc = useDeferredValue(useStore(store, (s) => s.doc));
+  // The trial follows every change, except in the middle of a drag (the history is paused then): it runs on the release.
+  const settled = useRef(store.getState().doc);
+  const doc = useDeferredValue(useStore(store, (s) => (store.temporal.getState().isTracking ? (settled.current = s.doc) : settled.current)));
   const units = useStore(store, (s) => s.units);
   const { control } = useFormContext<CaseFormValues>();
   const values = useWatch({ control }) as CaseFormValues;

@@ -45,7 +45,7 @@ export function PlanEditor({
   const shapes = useMemo(() => docShapes(doc, units, extras), [doc, units, extras]);
   const issues = useMemo(() => docIssues(shapes, words.pocket), [shapes, words.pocket]);
   const drawing = useMemo(
-    () => editDrawing(shapes, { units, highlight: hover, selected, issues, frame, words, title, fixedCircles, fixedStuds }),
+    () => editDrawing(shapes, { units, highlight: hover, selected, issues, frame, words, title, fixedCircles, fixedStuds, dragging: frame !== null }),
     [shapes, units, hover, selected, issues, frame, words, title, fixedCircles, fixedStuds],
   );
   const host = useRef<HTMLDivElement>(null);
