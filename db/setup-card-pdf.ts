@@ -116,37 +116,42 @@ function figuresPage(doc: Doc, card: SetupCard, drawings: readonly CardDrawing[]
   card.checks.forEach((c, i) => {
     const y = doc.y;
     doc.rect(left, y + 1, 7, 7).lineWidth(0.6).strokeColor(INK2).stroke();
-    doc.font("body").fontSize(8).fillColor(INK).text(`${i + 1}. ${c}`, left + 12, y, { width: half - 12 });
-    doc.y += 1;
+    doc.font("body").fontSize(7.5).fillColor(INK).text(`${i + 1}. ${c}`, left + 12, y, { width: half - 12 });
+    doc.y += 0.5;
   });
   const checksEnd = doc.y;
   const right = left + half + gutter;
   doc.y = below;
   heading("Cautions", right, half);
   for (const c of card.cautions) {
-    doc.font("body").fontSize(8).fillColor(INK).text(`!  ${c}`, right, undefined, { width: half });
-    doc.y += 1;
+    doc.font("body").fontSize(7.5).fillColor(INK).text(`!  ${c}`, right, undefined, { width: half });
+    doc.y += 0.5;
   }
+  // The plan's warnings under whichever column ends higher, so the page keeps room for the readings.
   if (card.warnings.length) {
-    heading("Warnings from the plan", right, half);
-    for (const w of card.warnings) doc.font("body").fontSize(8).fillColor(WARN).text(`•  ${w}`, right, undefined, { width: half });
+    const cautionsEnd = doc.y;
+    const x = checksEnd < cautionsEnd ? left : right;
+    doc.y = x === left ? checksEnd : cautionsEnd;
+    heading("Warnings from the plan", x, half);
+    for (const w of card.warnings) doc.font("body").fontSize(8).fillColor(WARN).text(`•  ${w}`, x, undefined, { width: half });
+    doc.y = Math.max(doc.y, cautionsEnd);
   }
   doc.x = left;
   doc.y = Math.max(checksEnd, doc.y);
   heading("After-cut readings");
   for (const b of card.blanks) {
     const y = doc.y;
-    doc.font("body").fontSize(8.5).fillColor(INK).text(b.label.replace(/☐/g, "[  ]"), left, y + 3, { width: b.cells ? 250 : width });
+    doc.font("body").fontSize(8.5).fillColor(INK).text(b.label.replace(/☐/g, "[  ]"), left, y + 2, { width: b.cells ? 250 : width });
     const cell = Math.min(80, (width - 260) / Math.max(1, b.cells) - 6);
     for (let i = 0; i < b.cells; i++) {
       const x = left + 260 + i * (cell + 6);
-      doc.rect(x, y, cell, 15).lineWidth(0.6).strokeColor(INK2).stroke();
+      doc.rect(x, y, cell, 13).lineWidth(0.6).strokeColor(INK2).stroke();
       const tag = b.cellLabels?.[i];
       if (tag) doc.font("body").fontSize(5.5).fillColor(INK2).text(tag, x + 2, y + 1.5, { width: cell - 4, lineBreak: false });
     }
-    doc.y = Math.max(doc.y, y + 17) + 2;
+    doc.y = Math.max(doc.y, y + 14) + 1.5;
   }
-  doc.moveDown(0.5).font("body").fontSize(7).fillColor(INK2).text("Borewright plans cuts; it does not replace the kit maker's instructions, local regulations or a qualified machinist.", left, undefined, { width });
+  doc.moveDown(0.2).font("body").fontSize(7).fillColor(INK2).text("Borewright plans cuts; it does not replace the kit maker's instructions, local regulations or a qualified machinist.", left, undefined, { width });
 }
 
 /** The verdict at the top of page 1: its words in its colour, framed in it, and why for a kit that cannot fit. */

@@ -1,6 +1,7 @@
 // The content of a job's bench setup card, built once from the plan snapshot so the printable page and
 // the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
 import { formatLength, type LengthUnits, type Verdict } from "@/geometry";
+import { SETUP_CARD_CAUTIONS, TRIAL_CUT_READING, TRIAL_CUT_STEP } from "@/model/cautions";
 import { dateText, dateTimeText } from "@/model/dates";
 import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
 import { planDrawing } from "@/scene/drawing/plan";
@@ -39,15 +40,8 @@ export type SetupCard = {
   kitIndex: number;
 };
 
-/** The cautions every card carries, in the order a builder meets them. */
-export const SETUP_CAUTIONS = [
-  "Wear eye protection while cutting; aluminium chips fly.",
-  "Clamp the case securely without crushing it: an over-tightened case can crack.",
-  "Stop during the cut to check that the bit and every fastener are still tight.",
-  "Remove every chip from the crankcase before assembly: flush, blow out and look again.",
-  "A change of displacement can change the vehicle's legal class; local rules decide.",
-  "Follow the kit maker's instructions; when in doubt, defer to a qualified machinist.",
-];
+/** The cautions every card carries, in the order of the work. */
+export const SETUP_CAUTIONS = SETUP_CARD_CAUTIONS;
 
 type JobLike = {
   reference: string;
@@ -158,9 +152,11 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     k.rig?.depthStop.reached
       ? `Depth stop confirmed with the bit resting on the deck: ring in ${k.rig.depthStop.groove}, stack ${L(k.rig.depthStop.shimStackMm)}.`
       : "Depth stop confirmed with the bit resting on the deck.",
+    TRIAL_CUT_STEP,
     "Light feed, drill at the speed above; stop at the ring and let the cutter dwell before withdrawing.",
   ];
   const blanks = [
+    { label: `${TRIAL_CUT_READING} (${units})`, cells: 1 },
     { label: `Cut diameter readings (${units})`, cells: 3 },
     { label: `Cut depth readings (${units})`, cells: 3 },
     { label: `Sealing land at each stud (${units})`, cells: studs.length, cellLabels: studs },
@@ -177,7 +173,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     rig,
     rigMissing,
     checks,
-    cautions: SETUP_CAUTIONS,
+    cautions: [...SETUP_CAUTIONS],
     blanks,
     warnings: k.warnings.map((w) => w.message),
     kitIndex,

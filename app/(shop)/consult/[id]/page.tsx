@@ -5,6 +5,7 @@ import { AccessError } from "@/db/access";
 import { jobDetail } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
 import { formatLength, type KitResult } from "@/geometry";
+import { CONSULT_CAUTIONS } from "@/model/cautions";
 import { requirePage } from "../../../_ui/guard";
 import { Photos } from "../../jobs/[id]/_components/photos";
 import { PlanVsActual } from "../../jobs/[id]/_components/plan-vs-actual";
@@ -89,8 +90,8 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
 
           <section aria-label="Cautions" className="caution flex flex-col gap-1 text-base" data-testid="consult-cautions">
             <h2 className="text-xl font-semibold">Before you decide</h2>
-            <p>A change of displacement can change the vehicle&apos;s legal class (for example its licence, registration or insurance class); local rules decide — check them before approving.{chosen.displacementCc.crossesClasses.length ? ` This kit crosses the ${chosen.displacementCc.crossesClasses.join(", ")} cc line.` : ""}</p>
-            <p>Cutting a crankcase cannot be undone. The shop follows the kit maker&apos;s instructions and defers to qualified machinists where in doubt.</p>
+            <p>{CONSULT_CAUTIONS.legalClass}{chosen.displacementCc.crossesClasses.length ? ` This kit crosses the ${chosen.displacementCc.crossesClasses.join(", ")} cc line.` : ""}</p>
+            <p>{CONSULT_CAUTIONS.kitMaker}</p>
             {chosen.warnings.map((w) => <p key={w.code + w.message}>{w.message}</p>)}
           </section>
 

@@ -1,5 +1,4 @@
 import type { KitResult, LengthUnits, StudyResult } from "@/geometry";
-import { Cautions } from "./cautions";
 import { CutFigures, tone } from "./cut-figures";
 import { Figure } from "./figure";
 import { areaLabel, lengthLabel } from "@/model/units";
@@ -60,7 +59,6 @@ export function KitResults({ kit, result, units, mouthDiameterMm }: { kit: KitRe
           </p>
         )}
         {cut ? <WallsTable walls={kit.walls} units={units} /> : null}
-        {cut ? <Cautions compact /> : null}
       </section>
 
       <section aria-label="Rig set-up" className="flex flex-col gap-2">
