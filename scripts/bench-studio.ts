@@ -9,7 +9,7 @@ import { createRequire } from "node:module";
 import { gzipSync } from "node:zlib";
 import { chromium } from "playwright-core";
 import type { StudyInput } from "../geometry";
-import { freePort, root, startNext, waitFor } from "./lib.mjs";
+import { ensureSecrets, freePort, root, startNext, waitFor } from "./lib.mjs";
 
 const dist = process.env.NEXT_DIST_DIR || ".next";
 const STEPS = 100;
@@ -62,7 +62,9 @@ async function main() {
   if (!existsSync(join(root, dist, "BUILD_ID"))) throw new Error(`no production build in ${dist}: run NEXT_DIST_DIR=${dist} npx next build first`);
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
-  const server = startNext({ port, quiet: true, env: { BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: process.env.BETTER_AUTH_SECRET || "bench-only-secret-0123456789abcdef0123456789" } });
+  // A production server refuses to start without its secrets: the install's own, from .env.local.
+  ensureSecrets();
+  const server = startNext({ port, quiet: true, env: { BETTER_AUTH_URL: base } });
   const browser = await chromium.launch({
     executablePath: "/usr/bin/chromium",
     args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"],
@@ -74,12 +76,16 @@ async function main() {
     await page.route("**/examples/study.json", (r) => r.fulfill({ status: 200, contentType: "application/json", body: study }));
     await page.goto(`${base}/try`);
     await page.waitForSelector("[data-testid=view] canvas", { timeout: 60_000 });
-    await page.waitForTimeout(1500);
+    // The canvas carries the key of what its last frame shows; the studio, the key of what it asks for.
+    await page.waitForFunction(() => {
+      const view = document.querySelector<HTMLElement>("[data-testid=view]");
+      return Boolean(view && view.querySelector("canvas")?.dataset.drawn === view.dataset.wanted);
+    }, undefined, { timeout: 60_000 });
     const slider = page.getByTestId("cut-diameter");
     const field = page.getByTestId("cut-diameter-field");
     await field.fill("52");
     await field.press("Enter");
-    await page.waitForTimeout(500);
+    await page.waitForFunction(() => document.querySelector("[data-testid=verdict]")?.getAttribute("data-cut") === "52.00", undefined, { timeout: 30_000 });
     await slider.focus();
     await page.evaluate(() => {
       window.__fitFrames = [];

@@ -3,7 +3,8 @@
 import { useFrame, useThree } from "@react-three/fiber";
 import { useEffect, useRef } from "react";
 import type { FitStore } from "../store";
-import { TARGET, cameraPosition, drawnKey, type ViewState } from "./view";
+import { drawnKey } from "./drawn-key";
+import { TARGET, cameraPosition, type ViewState } from "./view";
 
 /** What the studio can ask of the canvas. */
 export interface FitCanvasApi {

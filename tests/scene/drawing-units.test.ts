@@ -2,7 +2,8 @@ import { describe, expect, it } from "vitest";
 import { evaluateStudy } from "@/geometry";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
-import { drawnKey, type ViewState } from "@/scene/three/view";
+import { drawnKey } from "@/scene/three/drawn-key";
+import type { ViewState } from "@/scene/three/view";
 import { roundStudy } from "./fixtures";
 
 // The drawings write every figure with the units module: decimal inches to 0.001 for an inch user (what an

@@ -3,7 +3,8 @@
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
-import { drawnKey, type ViewState } from "@/scene/three/view";
+import { drawnKey } from "@/scene/three/drawn-key";
+import type { ViewState } from "@/scene/three/view";
 import { Cautions } from "./cautions";
 import { CutCard } from "./cut-card";
 import { Drawings } from "./drawings";
