@@ -17,6 +17,8 @@ export function StudyHeader({ studyId, caseName, archived, save }: { studyId: st
   return (
     <header className="flex flex-wrap items-start justify-between gap-3">
       <div className="min-w-0 flex-1 basis-64">
+        {/* The page's heading is the study's name; sighted users read it in the field that edits it. */}
+        <h1 className="sr-only">{form.watch("name") || "Study"}</h1>
         <label htmlFor="study-name" className="sr-only">
           Study name
         </label>
