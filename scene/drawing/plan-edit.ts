@@ -8,7 +8,7 @@ import { INK, el, hdim, n, sheet, text, vdim, type Drawing } from "./svg";
 // The plan at the deck of a profile being entered: the same layers as the study's plan, with a handle
 // on every corner, stud and circle edge, named by data-key so the form can find what was touched.
 // Keys: a shape is "deck", "mouth", "pockets.1", "studs.2"; a corner "deck:3"; a circle's edge
-// "mouth:edge"; the edge after corner 3 "deck~3".
+// "mouth:edge"; the edge after corner 3 "deck~3". A handle's centre (cx, −cy) is its point in mm.
 
 /** The drawing's viewBox, in drawing coordinates (y down). */
 export type Frame = { minX: number; minY: number; maxX: number; maxY: number };
@@ -103,9 +103,6 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
         "aria-pressed": o.selected === key ? "true" : undefined,
         "data-key": key,
         "data-kind": kind,
-        "data-x-mm": n(at[0]),
-        "data-y-mm": n(at[1]),
-        style: "cursor:grab",
       }),
     );
   };
@@ -120,7 +117,7 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
     pts.forEach((p, i) => {
       const q = pts[(i + 1) % pts.length];
       const [x1, y1] = flip(p), [x2, y2] = flip(q);
-      if (!o.dragging) edges.push(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge", style: "cursor:copy" }));
+      if (!o.dragging) edges.push(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge" }));
       point(`${key}:${i}`, "corner", p, `${word} corner ${i + 1}`);
     });
   };

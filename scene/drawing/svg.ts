@@ -27,6 +27,8 @@ export interface Drawing {
 export const n = (v: number) => String(Math.round(v * 1000) / 1000);
 
 export function esc(s: string): string {
+  // Most texts need nothing: skip the four replacements for them (a drawing being dragged writes thousands).
+  if (!/[&<>"]/.test(s)) return s;
   return s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;");
 }
 

@@ -43,7 +43,10 @@ export function PlanEditor({
   const selected = useStore(store, (s) => s.selected);
   const [frame, setFrame] = useState<Frame | null>(null);
   const shapes = useMemo(() => docShapes(doc, units, extras), [doc, units, extras]);
-  const issues = useMemo(() => docIssues(shapes, words.pocket), [shapes, words.pocket]);
+  // The checks run again when a drag is released, not on every pointer move (a 200-corner outline's sweep each frame).
+  const [settled, setSettled] = useState(shapes);
+  if (!frame && settled !== shapes) setSettled(shapes);
+  const issues = useMemo(() => docIssues(settled, words.pocket), [settled, words.pocket]);
   const drawing = useMemo(
     () => editDrawing(shapes, { units, highlight: hover, selected, issues, frame, words, title, fixedCircles, fixedStuds, dragging: frame !== null }),
     [shapes, units, hover, selected, issues, frame, words, title, fixedCircles, fixedStuds],
@@ -70,7 +73,8 @@ export function PlanEditor({
     const p = new DOMPoint(clientX, clientY).matrixTransform(m.inverse());
     return [p.x, -p.y];
   };
-  const pointOf = (el: Element): [number, number] => [Number(el.getAttribute("data-x-mm")), Number(el.getAttribute("data-y-mm"))];
+  // The drawing's y runs down: a handle at (cx, cy) stands for the point (cx, −cy) in mm.
+  const pointOf = (el: Element): [number, number] => [Number(el.getAttribute("cx")), -Number(el.getAttribute("cy"))];
 
   const bind = useDrag<PointerEvent>(
     ({ first, last, tap, xy: [cx, cy], initial: [ix, iy], event, memo, altKey }) => {
@@ -162,7 +166,7 @@ export function PlanEditor({
           if (!frame && store.getState().hover !== key) store.setState({ hover: key });
         }}
         onPointerLeave={() => !frame && store.setState({ hover: null })}
-        className="rounded-md border border-rule bg-white [&_[data-kind]]:touch-none [&_svg]:h-auto [&_svg]:max-h-[70vh] [&_svg]:w-full [&_[data-kind]:focus-visible]:outline-2"
+        className="rounded-md border border-rule bg-white [&_[data-kind]]:touch-none [&_[data-kind=edge]]:cursor-copy [&_circle[data-kind]]:cursor-grab [&_svg]:h-auto [&_svg]:max-h-[70vh] [&_svg]:w-full [&_[data-kind]:focus-visible]:outline-2"
         dangerouslySetInnerHTML={html}
       />
       <p className="text-xs text-ink-3">Drag a point (it snaps to {units === "in" ? "0.005 in" : "0.1 mm"}; hold Alt to place it freely), click an edge to add a corner; Tab to a point and use the arrow keys to nudge it (Shift: ten steps), Delete to remove a corner.</p>
