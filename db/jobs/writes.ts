@@ -109,7 +109,9 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
   if (replan && status !== "intake" && status !== "planned")
     throw new DataError("plan_fixed", "The plan is fixed once approved: move the job back to planned, with a reason, before changing it.");
   const studyId = patch.studyId === undefined ? record.studyId : patch.studyId;
-  const plan = replan && studyId ? await snapshotPlan(caller, studyId, patch.kitId === undefined ? record.kitId : patch.kitId) : undefined;
+  // Another study without a kit named takes that study's chosen kit, not the old study's.
+  const kitId = patch.kitId !== undefined ? patch.kitId : patch.studyId !== undefined && patch.studyId !== record.studyId ? null : record.kitId;
+  const plan = replan && studyId ? await snapshotPlan(caller, studyId, kitId) : undefined;
   // A planned job keeps its status only with a plan this caller may plan; an intake job is planned by a move later.
   const backToIntake = plan !== undefined && status === "planned" && caller.role !== "owner" && planVerdict(plan) === "cannot-fit";
   const override = plan && status === "planned" && !backToIntake ? checkPlan(caller, plan, patch.planOverrideReason) : null;
