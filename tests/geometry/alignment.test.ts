@@ -5,6 +5,9 @@ import { parse, roundStudyInput, testRig } from "./fixtures";
 
 const at = (x: number, y: number, h: number) => ({ atMm: [x, y] as const, heightMm: h });
 
+// The plane fit is ordinary least squares (checked against a worked example and ml-matrix in sources.test.ts);
+// the expected figures here are worked by hand from the readings. That the tool axis stands square to the holder
+// and passes through the bearing at the stud-pattern centre is common practice, no published source.
 describe("holder plane", () => {
   it("a holder 0.1 mm higher at +x over 56 mm tilts atan(0.1/56) towards +x", () => {
     const f = fitPlane([at(-28, 28, 30), at(28, 28, 30.1), at(28, -28, 30.1), at(-28, -28, 30)]);

@@ -5,6 +5,11 @@ import { parse, polygonStudyInput, roundStudyInput, testRig } from "./fixtures";
 
 const codes = (k: { warnings: { code: string }[] }) => k.warnings.map((w) => w.code);
 
+// The default limits (0.5 mm radial and depth clearance, 2 mm land and wall, 0.3 mm stud tolerance) are the
+// shop's defaults: common practice, no published source. Displacement is V = π/4·d²·s (howmotorcycleswork.com,
+// "engine mathematics"); the 50 cc class is an example of a class that local rules set. Density 2.74 g/cm³ is
+// die-casting alloy 383 (NADCA table A-3-2). Every other expected figure is worked by hand from the fixture.
+
 describe("verdict", () => {
   it("a skirt narrower than the mouth by more than twice the minimum clearance fits as is, with no cut", () => {
     const input = roundStudyInput();
@@ -162,8 +167,10 @@ describe("the example study", () => {
     expect(r.kits.map((k) => k.kitId)).toEqual(study.kits.map((k) => k.id));
     expect(r.kits.some((k) => k.verdict === "fits-after-cut")).toBe(true);
   });
-  it("is deterministic", () => {
+  it("leaves the study it evaluates unchanged, so a page can evaluate the same study again", () => {
     const study = StudySchema.parse(raw);
-    expect(JSON.stringify(evaluateStudy(study))).toBe(JSON.stringify(evaluateStudy(study)));
+    const before = structuredClone(study);
+    evaluateStudy(study);
+    expect(study).toEqual(before);
   });
 });

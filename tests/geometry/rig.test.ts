@@ -4,6 +4,8 @@ import { chooseDepthStop } from "../../geometry/depth-stop";
 import { spindleSpeed } from "../../geometry/speed";
 
 const TOL = 1e-9;
+// A bit cut down to 35 mm reaching 52.5–62 mm, and a cutter setting read across head and bit: common practice,
+// no published source (the same figures as in sources.test.ts). Expected values are worked by hand.
 const calibration = { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 };
 
 describe("cutter setting", () => {

@@ -6,19 +6,19 @@ import {
   DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN,
   DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN,
   DEFAULT_MIN_DEPTH_CLEARANCE_MM,
-  DEFAULT_MIN_RADIAL_CLEARANCE_MM,
-  DEFAULT_MIN_SEALING_LAND_MM,
-  DEFAULT_MIN_WALL_MM,
   LimitsSchema,
 } from "../../geometry/index";
 import { bitLengthWindowMm, bitReachMm, cutterSettingMm } from "../../geometry/rig";
 import { depthClearance, skirtProtrusionMm } from "../../geometry/depth";
 import { MM_PER_INCH, inToMm, toFractionalInches } from "../../geometry/units";
 import { displacementCc, roundCc } from "../../geometry/displacement";
-import { cuttingSpeedMPerMin, spindleRpm } from "../../geometry/speed";
+import { cuttingSpeedMPerMin, spindleRpm, spindleSpeed } from "../../geometry/speed";
+import { removal } from "../../geometry/removal";
 import { minorDiameterMm, parseMetricThread } from "../../geometry/threads";
 import { lensArea } from "../../geometry/lens";
 import { fitPlane } from "../../geometry/alignment";
+import { evaluateStudy } from "../../geometry/index";
+import { parse, roundStudyInput } from "./fixtures";
 
 describe("cutter setting", () => {
   it("a 34.5 mm head set for a 57 mm bore reads 45.75 mm across head and bit", () => {
@@ -33,11 +33,14 @@ describe("bit reach", () => {
   const calibration = { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 };
 
   it("each millimetre off the bit moves both ends of its range down 2 mm, so the uncut bit was 42 mm long", () => {
-    const originalLength = 35 + (66.5 - 52.5) / 2;
-    expect(originalLength).toBeCloseTo(42, 9);
-    const before = bitReachMm(originalLength, calibration);
+    // The longest bit whose smallest cut is the 66.5 mm the uncut bit gave is the uncut bit's length.
+    expect(bitLengthWindowMm(66.5, calibration).max).toBeCloseTo(42, 9);
+    const before = bitReachMm(42, calibration);
     expect(before.min).toBeCloseTo(66.5, 9);
     expect(before.max).toBeCloseTo(76, 9);
+    // One millimetre off moves both ends down 2 mm.
+    expect(bitReachMm(41, calibration).min).toBeCloseTo(64.5, 9);
+    expect(bitReachMm(41, calibration).max).toBeCloseTo(74, 9);
   });
 
   it("the 35 mm bit is inside the window of lengths that reach a 57 mm cut, and the 42 mm bit is not", () => {
@@ -93,24 +96,28 @@ describe("displacement", () => {
 });
 
 describe("spindle speed", () => {
-  it("Ø150 mm at 250 min⁻¹ is 117.8 m/min, and the inverse gives 250 min⁻¹ back", () => {
-    // Tungaloy technical data.
+  it("Ø150 mm at 250 min⁻¹ is 117.8 m/min, and 117.8 m/min at Ø150 mm is 250 min⁻¹", () => {
+    // Tungaloy technical data, turning formulas: the worked example Vc = π·150·250/1000 ≈ 117.8 m/min.
     expect(cuttingSpeedMPerMin(150, 250)).toBeCloseTo(117.8, 1);
-    expect(spindleRpm(117.81, 150)).toBeCloseTo(250, 1);
+    // The source's rounded figure fed the other way: 1000·117.8/(π·150) = 249.97 min⁻¹.
+    expect(spindleRpm(117.8, 150)).toBeCloseTo(250, 0);
+    expect(spindleRpm(117.8, 150)).toBeLessThan(250);
   });
-  it("the default cutting-speed range lies inside the cited ranges for aluminium with carbide", () => {
-    // Carvill, Mechanical Engineer's Data Handbook §5.6.7: 90–150 m/min rough (180–225 m/min fine).
-    expect(DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN).toBeGreaterThanOrEqual(90);
-    expect(DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN).toBeLessThanOrEqual(150);
-    // Kyocera turning data: 100–200 m/min.
-    expect(DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN).toBeGreaterThanOrEqual(100);
-    expect(DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN).toBeLessThanOrEqual(200);
-    expect(DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN).toBeLessThan(DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN);
+  it("the spindle window the rig set-up gives a Ø57 mm cut lies inside the speeds the cited ranges give at that diameter", () => {
+    // Carvill, Mechanical Engineer's Data Handbook §5.6.7: aluminium with carbide 90–150 m/min rough (from memory);
+    // Kyocera turning data: 100–200 m/min (from memory). n = 1000·Vc/(π·D) (Tungaloy technical data).
+    const n = (vc: number) => (1000 * vc) / (Math.PI * 57);
+    const s = spindleSpeed(57, DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN, DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN, 10_000);
+    expect(s.min).toBeGreaterThanOrEqual(Math.max(n(90), n(100)) - 1e-9);
+    expect(s.max).toBeLessThanOrEqual(Math.min(n(150), n(200)) + 1e-9);
+    expect(s.min).toBeLessThan(s.max);
   });
 });
 
 describe("ISO metric threads", () => {
-  // ISO 262 pitches; minor diameter D1 = D − 1.082532·P from a tap maker's published thread-limits table.
+  // Coarse pitches from ISO 262:1998, Table 1 (M7 → 1, M8 → 1.25). Minor diameter of the internal thread
+  // D1 = D − 1.082532·P (ISO 724:1993, basic dimensions); the figures 5.917 and 6.647 mm as listed in a tap
+  // maker's published thread-limits table for M7×1 and M8×1.25 (from memory; no maker named).
   it("M7 takes the coarse pitch 1.0 when none is given", () => {
     const t = parseMetricThread("M7");
     expect(t.pitchMm).toBe(1);
@@ -135,7 +142,9 @@ describe("circle–circle lens", () => {
 });
 
 describe("plane fit", () => {
-  // Points (0,0,1), (1,0,2), (0,1,3), (1,1,5) → a = 1.5, b = 2.5, c = 0.75 (worked least-squares example).
+  // Points (0,0,1), (1,0,2), (0,1,3), (1,1,5) → a = 1.5, b = 2.5, c = 0.75 with residuals ±0.25: a worked
+  // least-squares plane-fit example, worked by hand from the normal equations (from memory, no published page
+  // named); cross-checked below against ml-matrix's QR solve.
   const pts = [
     { atMm: [0, 0] as const, heightMm: 1 },
     { atMm: [1, 0] as const, heightMm: 2 },
@@ -162,22 +171,30 @@ describe("plane fit", () => {
 });
 
 describe("case alloy density", () => {
-  it("defaults to A356.0-T6 at 2.67 g/cm³ and stays in the range of die-casting alloys", () => {
+  it("a case with no density given weighs its removed aluminium at A356.0-T6's 2.67 g/cm³", () => {
     // MatWeb: A356.0-T6 2.67 g/cm³. NADCA table A-3-2: die-casting alloy 383 2.74 g/cm³.
-    expect(DEFAULT_CASE_DENSITY_G_PER_CM3).toBe(2.67);
-    expect(Math.abs(DEFAULT_CASE_DENSITY_G_PER_CM3 - 2.74)).toBeLessThan(0.1);
+    const r = removal([0, 0], 28, 25, { kind: "circle", diameterMm: 46 }, 26, DEFAULT_CASE_DENSITY_G_PER_CM3, 1e-9);
+    const volumeMm3 = Math.PI * (28 * 28 - 23 * 23) * 25;
+    expect(r.massG).toBeCloseTo((volumeMm3 / 1000) * 2.67, 6);
+    // Within 0.1 g/cm³ of the die-casting alloy, so the mass is within 4 % of the 383 figure.
+    expect(Math.abs(r.massG / ((volumeMm3 / 1000) * 2.74) - 1)).toBeLessThan(0.04);
   });
 });
 
 describe("limits with no published source", () => {
-  it("minimum radial clearance, depth clearance, sealing land and wall are shop defaults, filled in by the schema", () => {
+  it("minimum radial clearance, depth clearance, sealing land and wall are shop defaults of 0.5, 0.5, 2 and 2 mm", () => {
     // No published source gives a minimum radial clearance for a skirt in a case mouth or a minimum sealing
-    // land: these defaults are common practice, the shop's to set, and shown as defaults.
+    // land: these defaults are common practice, no published source, the shop's to set, and shown as defaults.
     const filled = LimitsSchema.parse({});
-    expect(filled.minRadialClearanceMm).toBe(DEFAULT_MIN_RADIAL_CLEARANCE_MM);
-    expect(filled.minDepthClearanceMm).toBe(DEFAULT_MIN_DEPTH_CLEARANCE_MM);
-    expect(filled.minSealingLandMm).toBe(DEFAULT_MIN_SEALING_LAND_MM);
-    expect(filled.minWallMm).toBe(DEFAULT_MIN_WALL_MM);
+    expect([filled.minRadialClearanceMm, filled.minDepthClearanceMm, filled.minSealingLandMm, filled.minWallMm]).toEqual([0.5, 0.5, 2, 2]);
     expect(LimitsSchema.parse({ minWallMm: 3 }).minWallMm).toBe(3);
+    // And a study that gives none is held to them: 28√2 − 3.75 − R of land round each stud of a 56 mm square.
+    const landAt = (landMm: number) => {
+      const diameterMm = 2 * (28 * Math.SQRT2 - 3.75 - landMm);
+      const k = evaluateStudy(parse({ ...roundStudyInput(), cut: { diameterMm, depthMm: 25.5 } })).kits[0];
+      return k.walls.filter((w) => w.kind === "stud").every((w) => w.ok);
+    };
+    expect(landAt(1.95)).toBe(false);
+    expect(landAt(2.05)).toBe(true);
   });
 });

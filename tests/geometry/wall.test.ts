@@ -3,6 +3,8 @@ import { featureReaches, maxCutDiameterMm, thinnestWall, wallsForCut } from "../
 import { parse, polygonStudyInput, roundStudyInput } from "./fixtures";
 
 const TOL = 1e-9;
+// The 2 mm sealing land and 2 mm wall are the shop's defaults (common practice, no published source); the
+// expected walls are plane geometry worked by hand from the fixtures. Unequal minimums: fit-cases.test.ts.
 const req = { minSealingLandMm: 2, minWallMm: 2 };
 
 describe("remaining wall", () => {
