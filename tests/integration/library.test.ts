@@ -146,7 +146,8 @@ describe("studies", () => {
     const { study, kits } = await newStudy(owner);
     const { result } = ok<{ result: { kits: { kitId: string; verdict: string }[] } }>(await owner.get(`/api/v1/studies/${study.id}/results`));
     expect(result.kits.map((k) => k.kitId)).toEqual(kits.map((k) => k.id));
-    for (const k of result.kits) expect(["fits-as-is", "fits-after-cut", "cannot-fit"]).toContain(k.verdict);
+    // The core on the same rows: the Ø53.92 skirt fits after a cut; the Ø57.4 skirt needs a cut thinner-walled than the case allows.
+    expect(result.kits.map((k) => k.verdict)).toEqual(["fits-after-cut", "cannot-fit"]);
   });
 
   it("answer results that follow every change to the study, its kits and the shop's limits", async () => {
