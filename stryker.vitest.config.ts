@@ -1,0 +1,11 @@
+import { defineConfig } from "vitest/config";
+
+// The tests Stryker runs against each mutant of geometry/ and model/job-status.ts: the pure unit tests of those
+// modules, in-process, no app server.
+export default defineConfig({
+  resolve: { tsconfigPaths: true },
+  test: {
+    include: ["tests/geometry/**/*.test.ts", "tests/unit/job-status.test.ts", "tests/unit/verification.test.ts"],
+    environment: "node",
+  },
+});
