@@ -21,6 +21,12 @@ const consoleLines: string[] = [];
 const example = parseStudy(JSON.parse(readFileSync("public/examples/study.json", "utf8")));
 
 /** Smallest cut diameter on the slider grid at which the core says the first kit's skirt clears by the minimum. */
+/** The fit state the core gives the example at cut diameter d: what the verdict must show for that cut. */
+function coreStateAt(d: number): string {
+  const r = evaluateStudy({ ...example, cut: { diameterMm: d } });
+  return fitState(r.kits[0], r);
+}
+
 function coreThresholdMm(from: number): number {
   for (let i = 0; i < 400; i++) {
     const d = Math.round((from + i * STEP) * 100) / 100;
@@ -114,12 +120,12 @@ describe("the fit studio on the example study", () => {
     await expect.poll(() => slider.inputValue()).toBe(String(below));
     // The verdict says which cut it is for, so each state is read for the cut just set.
     await expect.poll(() => verdict.getAttribute("data-cut")).toBe(below.toFixed(2));
-    expect(await verdict.getAttribute("data-state")).not.toBe("clear");
+    expect(await verdict.getAttribute("data-state")).toBe(coreStateAt(below));
     await slider.focus();
     for (let i = 0; i < 2; i++) await slider.press("ArrowRight");
     await expect.poll(() => slider.inputValue()).toBe(String(Math.round((threshold - STEP) * 100) / 100));
     await expect.poll(() => verdict.getAttribute("data-cut")).toBe((threshold - STEP).toFixed(2));
-    expect(await verdict.getAttribute("data-state")).not.toBe("clear");
+    expect(await verdict.getAttribute("data-state")).toBe(coreStateAt(Math.round((threshold - STEP) * 100) / 100));
     await slider.press("ArrowRight");
     expect(Number(await slider.inputValue())).toBeCloseTo(threshold, 6);
     await expect.poll(() => verdict.getAttribute("data-cut")).toBe(threshold.toFixed(2));
