@@ -12,7 +12,7 @@ export const VERDICT_TEXT: Record<Verdict, { words: string; tone: VerdictTone }>
 };
 
 /** The tones as printed colours (the drawings' light palette, so screen and paper agree). */
-export const TONE_HEX: Record<VerdictTone, string> = { clear: "#13776f", tight: "#b7791f", interfere: "#b3362c" };
+export const TONE_HEX: Record<VerdictTone, string> = { clear: "#0f6a63", tight: "#85560f", interfere: "#b3362c" };
 
 /** Why a kit got its verdict, in plain words. */
 export const REASON_TEXT: Partial<Record<ReasonCode, string>> = {
