@@ -107,8 +107,10 @@ describe("planning a kit the study calls cannot-fit", () => {
     expect(pages[0].text).toMatch(/Cannot fit safely — /);
     const html = (await owner.get(`/setup-card/${job.id}`)).text;
     expect(html).toMatch(/data-testid="card-verdict" data-verdict="cannot-fit"/);
-    // Page 1 and each drawing page carry the line, as the PDF's pages do.
-    expect(html.match(/data-testid="every-page"/g)?.length).toBe(pages.length);
+    // Page 1 and each drawing page of the printable card carry the line too.
+    const drawingPages = html.match(/data-testid="drawing-page"/g)?.length ?? 0;
+    expect(drawingPages).toBe(2);
+    expect(html.match(/data-testid="every-page"/g)?.length).toBe(1 + drawingPages);
   }, 60_000);
 });
 
