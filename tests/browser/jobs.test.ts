@@ -152,7 +152,7 @@ describe("a job in the browser, from the study to verified", () => {
     expect(pdf.fontsEmbedded).toBe(2);
     expect(pdf.text).toContain("44.80 mm");
     expect(pdf.text).toMatch(/Wear eye protection/);
-    expect(pdf.text).toMatch(/legal class;\s+local rules decide/);
+    expect(pdf.text).toMatch(/legal class;\s+local\s+rules\s+decide/);
     expect(pdf.text).toContain("Plan at the deck");
 
     // ── Closing the job: no moves are left, and the page says so in one line instead of an empty box.

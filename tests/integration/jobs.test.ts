@@ -332,7 +332,7 @@ describe("the setup card PDF", () => {
     expect(text).toMatch(/Wear eye protection/);
     expect(text).toMatch(/without crushing it/);
     expect(text).toMatch(/Remove every chip from the crankcase/);
-    expect(text).toMatch(/legal class;\s+local rules decide/);
+    expect(text).toMatch(/legal class;\s+local\s+rules\s+decide/);
     expect(text).toMatch(/qualified machinist/);
     // The drawings, by their titles and dimension labels (the example's first kit: cut 55.10 mm, mouth 46.00 mm, skirt 53.96 mm).
     expect(text).toContain("Plan at the deck — Example 47 mm five-port kit");
