@@ -87,10 +87,10 @@ function MirrorButtons({ store, shapeKey, label, copy }: { store: ShapeStore; sh
   return (
     <span className="flex items-center gap-2">
       <span className="text-ink-2">{copy ? "Add a mirrored copy" : "Mirror"}</span>
-      <button type="button" className="btn-quiet" aria-label={`${copy ? "Add a copy of" : "Mirror"} ${label} mirrored across the y axis`} onClick={() => act.mirror(shapeKey, "y", copy)}>
+      <button type="button" className="btn-quiet" aria-label={`${copy ? "Add a copy of" : "Mirror"} ${label} mirrored across the y axis, left ↔ right`} onClick={() => act.mirror(shapeKey, "y", copy)}>
         left ↔ right
       </button>
-      <button type="button" className="btn-quiet" aria-label={`${copy ? "Add a copy of" : "Mirror"} ${label} mirrored across the x axis`} onClick={() => act.mirror(shapeKey, "x", copy)}>
+      <button type="button" className="btn-quiet" aria-label={`${copy ? "Add a copy of" : "Mirror"} ${label} mirrored across the x axis, front ↕ rear`} onClick={() => act.mirror(shapeKey, "x", copy)}>
         front ↕ rear
       </button>
     </span>
