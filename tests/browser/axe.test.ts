@@ -1,0 +1,199 @@
+import AxeBuilder from "@axe-core/playwright";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
+import { me, insertExampleStudy, jobBody } from "../integration/jobs-support";
+import { DEMO, signIn, uniqueEmail } from "../support/http";
+
+// Every page each role can reach, walked mostly by clicking, checked by axe-core's rules
+// (WCAG 2.1 A and AA). Any serious or critical finding fails the walk, with what and where.
+
+let browser: Browser;
+/** The shop's planned job, shared with the demo customer, and the study it was planned from. */
+let planned: { id: string; reference: string };
+beforeAll(async () => {
+  browser = await launchBrowser();
+  const owner = await signIn(DEMO.owner.email, DEMO.owner.password);
+  const who = await me(owner);
+  const { studyId } = await insertExampleStudy(who.shopId, who.userId, "Accessibility walk study");
+  const made = await owner.post("/api/v1/jobs", jobBody({ studyId, title: "Accessibility walk job" }));
+  if (made.status !== 201) throw new Error(`job not opened: ${made.text}`);
+  planned = (made.json as { item: { id: string; reference: string } }).item;
+  const shared = await owner.post(`/api/v1/jobs/${planned.id}/share`);
+  if (shared.status !== 200) throw new Error(`plan not shared: ${shared.text}`);
+  // A job at intake, with no plan yet.
+  await owner.post("/api/v1/jobs", jobBody({ customerEmail: uniqueEmail("axe-walk-in") }));
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
+
+/** One person's walk: one context, one tab, the findings of every page it opens. */
+async function walker(role?: keyof typeof DEMO): Promise<{ page: Page; context: BrowserContext; check: (name: string) => Promise<void>; findings: Finding[] }> {
+  const context = await newPerson(browser);
+  const page = await context.newPage();
+  if (role) await signInThroughForm(page, DEMO[role].email, DEMO[role].password);
+  const findings: Finding[] = [];
+  const check = async (name: string) => {
+    await page.waitForLoadState("networkidle");
+    const result = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "best-practice"]).analyze();
+    for (const v of result.violations) {
+      if (v.impact !== "serious" && v.impact !== "critical") continue;
+      findings.push({ page: `${name} (${new URL(page.url()).pathname})`, rule: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.join(" ")) });
+    }
+  };
+  return { page, context, check, findings };
+}
+
+function report(findings: Finding[]): string {
+  return findings.map((f) => `${f.page}: ${f.impact} ${f.rule} — ${f.help}\n    ${f.targets.join("\n    ")}`).join("\n");
+}
+
+const nav = (page: Page, name: string) => page.getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true }).click();
+
+/** Opens the first link on the page whose address starts with the prefix (and is not a "new" form). */
+async function openFirst(page: Page, prefix: string) {
+  const link = page.locator(`main a[href^="${prefix}"]:not([href$="/new"])`).filter({ visible: true }).first();
+  await link.waitFor();
+  await link.click();
+  await page.waitForURL((url) => url.pathname.startsWith(prefix) && url.pathname.length > prefix.length);
+}
+
+/** Tabs forward until the element with the test id has the focus; the focus ring must show on it. */
+async function tabTo(page: Page, testId: string) {
+  for (let i = 0; i < 80; i++) {
+    await page.keyboard.press("Tab");
+    const here = await page.evaluate(() => document.activeElement?.getAttribute("data-testid") ?? null);
+    if (here === testId) {
+      const ring = await page.evaluate(() => {
+        const s = getComputedStyle(document.activeElement!);
+        return { style: s.outlineStyle, width: parseFloat(s.outlineWidth) };
+      });
+      expect(ring.style, `focus ring on ${testId}`).not.toBe("none");
+      expect(ring.width, `focus ring on ${testId}`).toBeGreaterThanOrEqual(2);
+      return;
+    }
+  }
+  throw new Error(`${testId} is not reachable with the Tab key`);
+}
+
+/** Tabs to a slider and moves it one step with an arrow key (back from its top end). */
+async function stepByKey(page: Page, testId: string) {
+  await tabTo(page, testId);
+  const range = page.getByTestId(testId);
+  const [value, max] = await range.evaluate((el: HTMLInputElement) => [el.value, el.max]);
+  await page.keyboard.press(Number(value) >= Number(max) ? "ArrowLeft" : "ArrowRight");
+  await expect.poll(() => range.inputValue()).not.toBe(value);
+}
+
+/** The studio's section plane and cut sliders, by keyboard alone. */
+async function keyboardThroughStudio(page: Page) {
+  const view = page.getByTestId("view");
+  await page.getByRole("heading", { level: 1 }).click();
+  await tabTo(page, "section-toggle");
+  const before = await view.getAttribute("data-section");
+  await page.keyboard.press("Space");
+  await expect.poll(() => view.getAttribute("data-section")).not.toBe(before);
+  if (before !== "off") {
+    await page.keyboard.press("Space");
+    await expect.poll(() => view.getAttribute("data-section")).toBe(before);
+  }
+  const angle = await view.getAttribute("data-section");
+  await stepByKey(page, "section-angle");
+  await expect.poll(() => view.getAttribute("data-section")).not.toBe(angle);
+  await stepByKey(page, "cut-diameter");
+  await stepByKey(page, "cut-depth");
+}
+
+describe("accessibility of every page, by role", () => {
+  it("a visitor: the front page, the example studio (its section plane and cut sliders by keyboard) and the account forms", async () => {
+    const { page, context, check, findings } = await walker();
+    await page.goto("/");
+    await check("front page");
+    await page.goto("/try");
+    await page.getByTestId("view").waitFor();
+    await check("example studio");
+    await keyboardThroughStudio(page);
+    await page.goto("/sign-in");
+    await check("sign in");
+    await page.getByRole("link", { name: "Forgot the password?" }).click();
+    await page.waitForURL("**/forgot-password");
+    await check("forgot password");
+    await page.goto("/sign-up");
+    await check("sign up");
+    await context.close();
+    expect(findings, report(findings)).toEqual([]);
+  });
+
+  // The longest walk: fifteen pages, each checked in full.
+  it("the owner: home, the library's shelves and forms, studies, a study, jobs, a new job, a job, settings and outbox", { timeout: 180_000 }, async () => {
+    const { page, context, check, findings } = await walker("owner");
+    await check("home");
+    await nav(page, "Library");
+    await page.waitForURL("**/library");
+    for (const [tab, kind] of [["Cylinder kits", "kits"], ["Boring rigs", "rigs"], ["Case profiles", "cases"]] as const) {
+      await page.getByRole("navigation", { name: "Library sections" }).getByRole("link", { name: tab }).click();
+      await page.waitForURL(`**/library?kind=${kind}`);
+      await check(`library: ${kind}`);
+      await openFirst(page, `/library/${kind}/`);
+      await check(`library: one of ${kind}`);
+      await page.goBack();
+      await page.locator(`main a[href="/library/${kind}/new"]`).first().click();
+      await page.waitForURL(`**/library/${kind}/new`);
+      await check(`library: new ${kind}`);
+      await page.goBack();
+    }
+    await nav(page, "Studies");
+    await page.waitForURL("**/studies");
+    await check("studies");
+    await openFirst(page, "/studies/");
+    await page.getByTestId("view").waitFor();
+    await check("a study");
+    await nav(page, "Jobs");
+    await page.waitForURL("**/jobs");
+    await check("jobs");
+    await page.getByRole("link", { name: "New job" }).click();
+    await page.waitForURL("**/jobs/new");
+    await check("new job");
+    await page.goBack();
+    await openFirst(page, "/jobs/");
+    await check("a job from the list");
+    await nav(page, "Shop settings");
+    await page.waitForURL("**/settings");
+    await check("shop settings");
+    await nav(page, "Outbox");
+    await page.waitForURL("**/outbox");
+    await check("outbox");
+    await context.close();
+    expect(findings, report(findings)).toEqual([]);
+  });
+
+  it("the builder: home, jobs, a job and its setup card", async () => {
+    const { page, context, check, findings } = await walker("builder");
+    await check("home");
+    await nav(page, "Jobs");
+    await page.waitForURL("**/jobs");
+    await check("jobs");
+    await page.goto(`/jobs/${planned.id}`);
+    await check("a planned job");
+    await page.getByRole("link", { name: "Setup card" }).click();
+    await page.waitForURL("**/setup-card/**");
+    await check("setup card");
+    await context.close();
+    expect(findings, report(findings)).toEqual([]);
+  });
+
+  it("the customer: the consult list and a consult page", async () => {
+    const { page, context, check, findings } = await walker("customer");
+    await check("landing");
+    await nav(page, "Consult");
+    await page.waitForURL("**/consult");
+    await check("consult list");
+    await openFirst(page, "/consult/");
+    await check("a consult");
+    await context.close();
+    expect(findings, report(findings)).toEqual([]);
+  });
+});
