@@ -17,6 +17,7 @@ const config = {
   ],
   ignorePatterns: ["data", "test-results", "bench-results", "reports", ".next*", "public/uploads"],
   concurrency: 1,
+  dryRunTimeoutMinutes: 30,
   timeoutMS: 60_000,
   timeoutFactor: 3,
   coverageAnalysis: "perTest",
