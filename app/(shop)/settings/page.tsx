@@ -26,7 +26,9 @@ export default async function SettingsPage() {
           Owners manage members, settings and money. Builders work on the library, studies and jobs. Customers see only what the shop shares with
           them.
         </p>
-        <table className="mt-4 w-full text-sm">
+        {/* On a phone the table scrolls inside its own box rather than widening the page. */}
+        <div className="mt-4 overflow-x-auto" tabIndex={0} role="region" aria-label="Members of the shop">
+        <table className="w-full text-sm">
           <thead className="text-left text-ink-2">
             <tr>
               <th className="py-2">Name</th>
@@ -40,7 +42,7 @@ export default async function SettingsPage() {
             {members.map((m) => (
               <tr key={m.id} className="border-t border-rule">
                 <td className="py-2">{m.name}</td>
-                <td>{m.email}</td>
+                <td className="break-all">{m.email}</td>
                 <td>{m.role}</td>
                 <td className="num">{date(m.joinedAt)}</td>
                 <td className="text-right">{m.userId !== caller.userId ? <MemberActions memberId={m.id} name={m.name} /> : <span className="text-ink-3">you</span>}</td>
@@ -48,6 +50,7 @@ export default async function SettingsPage() {
             ))}
           </tbody>
         </table>
+        </div>
       </section>
       <section className="card p-6" aria-labelledby="invite-h">
         <h2 id="invite-h" className="text-lg font-semibold">
