@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { axisAtDepthMm, depthVariationMm, fitPlane, lateralShiftMm, tiltDeg, tiltDirectionDeg, tryFitPlane } from "../../geometry/alignment";
+import Matrix, { solve } from "ml-matrix";
+import { axisAtDepthMm, depthVariationMm, fitPlane, lateralShiftMm, planeHeightMm, tiltDeg, tiltDirectionDeg, tryFitPlane } from "../../geometry/alignment";
 import { DegenerateGeometryError, evaluateStudy } from "../../geometry/index";
 import { parse, roundStudyInput, testRig } from "./fixtures";
 
@@ -84,5 +85,38 @@ describe("what tilt does to a study", () => {
     expect(shift).toBeGreaterThan(0);
     expect((withTilt.cut?.diameterMm ?? NaN) - (level.cut?.diameterMm ?? NaN)).toBeCloseTo(2 * shift, 2);
     expect(withTilt.effectiveRadialClearanceMm ?? NaN).toBeGreaterThanOrEqual(0.5 - 1e-9);
+  });
+});
+
+describe("plane fit on readings that are not symmetric about the centre", () => {
+  // Ordinary least squares, cross-checked against ml-matrix's QR solve of the same over-determined system.
+  const pts = [at(0, 0, 5.01), at(3, 1, 5.68), at(1, 4, 4.49), at(5, 5, 5.52), at(2, 7, 3.19)];
+
+  it("agrees with ml-matrix's least-squares solve, and its rock is the largest |residual|", () => {
+    const A = new Matrix(pts.map((p) => [p.atMm[0], p.atMm[1], 1]));
+    const x = solve(A, Matrix.columnVector(pts.map((p) => p.heightMm)), true);
+    const f = fitPlane(pts);
+    expect(f.a).toBeCloseTo(x.get(0, 0), 10);
+    expect(f.b).toBeCloseTo(x.get(1, 0), 10);
+    expect(f.cMm).toBeCloseTo(x.get(2, 0), 10);
+    const res = pts.map((p) => p.heightMm - (x.get(0, 0) * p.atMm[0] + x.get(1, 0) * p.atMm[1] + x.get(2, 0)));
+    f.residualsMm.forEach((r, i) => expect(r).toBeCloseTo(res[i], 10));
+    expect(f.rockMm).toBeCloseTo(Math.max(...res.map(Math.abs)), 10);
+  });
+
+  it("three readings not on one line fit exactly; two give no plane", () => {
+    const f = fitPlane([at(0, 0, 1), at(2, 0, 1.4), at(0, 4, 0.2)]);
+    expect([f.a, f.b, f.cMm, f.rockMm].map((v) => Number(v.toFixed(12)))).toEqual([0.2, -0.2, 1, 0]);
+    expect(tryFitPlane([at(0, 0, 1), at(2, 0, 1.4)])).toBeNull();
+    expect(() => fitPlane([at(0, 0, 1), at(2, 0, 1.4)])).toThrow(/at least 3 readings/);
+  });
+
+  it("readings all but on one diagonal line give no plane", () => {
+    expect(tryFitPlane([at(0, 0, 1), at(100, 100, 2), at(200, 200 + 1e-5, 3)])).toBeNull();
+    expect(tryFitPlane([at(0, 0, 1), at(100, 0, 2), at(200, 1e-5, 3)])).toBeNull();
+  });
+
+  it("the plane's height at (2, 3) with a = 0.1, b = 0.2, c = 1 is 1.8", () => {
+    expect(planeHeightMm({ a: 0.1, b: 0.2, cMm: 1 }, [2, 3])).toBeCloseTo(1.8, 12);
   });
 });

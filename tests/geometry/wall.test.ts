@@ -51,3 +51,28 @@ describe("remaining wall", () => {
     expect(walls.every((w) => w.ok)).toBe(true);
   });
 });
+
+describe("wall edges", () => {
+  const cs = parse(roundStudyInput()).case;
+  const pocket = (startDepthMm: number) => ({ ...cs, pockets: [{ label: "p", startDepthMm, outline: { kind: "polygon" as const, pointsMm: [[31, -4], [36, -4], [36, 4], [31, 4]] as [number, number][] } }] });
+
+  it("a pocket starting at the cut's depth, within the tolerance, is not reached", () => {
+    expect(featureReaches([0, 0], pocket(19.995), 20, req, 0.01).find((f) => f.kind === "pocket")?.reached).toBe(false);
+    expect(featureReaches([0, 0], pocket(19.98), 20, req, 0.01).find((f) => f.kind === "pocket")?.reached).toBe(true);
+  });
+
+  it("a wall exactly at its minimum is kept, and the thinnest wall is the first of equals", () => {
+    const walls = wallsForCut([0, 0], 29, featureReaches([0, 0], pocket(0), 20, req, 0), 0);
+    expect(walls.find((w) => w.kind === "pocket")?.minWallMm).toBe(2);
+    expect(walls.find((w) => w.kind === "pocket")?.ok).toBe(true);
+    const twin = wallsForCut([0, 0], 29, featureReaches([0, 0], cs, 20, req, 0), 0).filter((w) => w.kind === "stud");
+    expect(thinnestWall(twin)?.label).toBe("a");
+  });
+
+  it("the deck outline counts as a wall the cut reaches: it can be the thinnest", () => {
+    const small = { ...cs, deck: { kind: "circle" as const, diameterMm: 64 } };
+    const walls = wallsForCut([0, 0], 28, featureReaches([0, 0], small, 20, req, TOL), TOL);
+    expect(thinnestWall(walls)?.kind).toBe("outline");
+    expect(maxCutDiameterMm(featureReaches([0, 0], small, 20, req, TOL))).toBeCloseTo(2 * (32 - 2), 9);
+  });
+});
