@@ -42,13 +42,21 @@ async function photos(): Promise<{ id: string; state: string; widthPx: number | 
   return ok<{ items: { id: string; state: string; widthPx: number | null; heightPx: number | null }[] }>(await api.get(`/api/v1/cases/${caseId}/photos`)).items;
 }
 
-/** Clicks the photo where the camera put a deck point (mm). */
+/** The text of the first element found, or "(not shown)" while there is none: a short wait, so a poll asks again. */
+async function textOf(found: Locator): Promise<string> {
+  return found.first().innerText({ timeout: 1000 }).catch(() => "(not shown)");
+}
+
+/** Clicks the photo where the camera put a deck point (mm), once the surface takes clicks, and waits for the point to be placed. */
 async function clickAt(surface: Locator, p: Mm) {
-  await surface.evaluate((el) => el.scrollIntoView({ block: "center", inline: "center" }));
+  await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
+  const before = Number(await surface.getAttribute("data-points"));
   const box = await surface.boundingBox();
   if (!box) throw new Error("the photo is not shown");
   const [x, y] = project(CAMERA, p);
-  await page.mouse.click(box.x + (x / CAMERA.widthPx) * box.width, box.y + (y / CAMERA.heightPx) * box.height);
+  // A locator click: scrolled into view, and only once the surface stands still and is the one hit at that spot.
+  await surface.click({ position: { x: (x / CAMERA.widthPx) * box.width, y: (y / CAMERA.heightPx) * box.height } });
+  await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
 }
 
 /** The case profile's form with its photo panel open (the panel may sit in a section that opens on request). */
@@ -90,11 +98,11 @@ describe("trace a deck from a photo", () => {
 
     // Not an image: refused in words, and nothing kept.
     await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck.png", mimeType: "image/png", buffer: Buffer.from("these are notes, not a photo") });
-    await expect.poll(() => panel.getByRole("alert").first().innerText()).toMatch(/not a JPEG, PNG or WebP image.*Nothing was saved\./);
+    await expect.poll(() => textOf(panel.getByRole("alert"))).toMatch(/not a JPEG, PNG or WebP image.*Nothing was saved\./);
     expect(await photos()).toEqual([]);
 
     await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck.png", mimeType: "image/png", buffer: png });
-    await expect.poll(() => panel.getByRole("status").first().innerText()).toMatch(/Photo kept with the case profile/);
+    await expect.poll(() => textOf(panel.getByRole("status"))).toMatch(/Photo kept with the case profile/);
     const kept = await photos();
     expect(kept).toHaveLength(1);
     expect(kept[0]).toMatchObject({ state: "ready", widthPx: 1200, heightPx: 900 });
@@ -112,11 +120,11 @@ describe("trace a deck from a photo", () => {
     await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
     // The studs in an order of their own: the panel sorts them into the rectangle's corners.
     for (const s of [STUDS[2], STUDS[0], STUDS[1], STUDS[3]]) await clickAt(surface, s);
-    await expect.poll(() => panel.getByTestId("trace-fit").innerText()).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within 0\.\d+ mm\.$|^The four points fit a 2\.205 in × 2\.205 in rectangle within/);
+    await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within 0\.\d+ mm\.$|^The four points fit a 2\.205 in × 2\.205 in rectangle within/);
 
     await panel.getByRole("button", { name: "Deck", exact: true }).click();
     for (const corner of DECK) await clickAt(surface, corner);
-    await expect.poll(() => panel.getByTestId("trace-prompt").innerText()).toMatch(/Deck corners/);
+    await expect.poll(() => textOf(panel.getByTestId("trace-prompt"))).toMatch(/Deck corners/);
 
     const readout = panel.getByTestId("trace-readout");
     await expect.poll(async () => JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}").deck?.pointsMm?.length ?? 0).toBe(8);
@@ -130,7 +138,7 @@ describe("trace a deck from a photo", () => {
     expect(Math.max(...studErrors)).toBeLessThanOrEqual(0.2);
 
     await panel.getByRole("button", { name: "Put the traced shapes into the form" }).click();
-    await expect.poll(() => panel.getByText(/^Put into the form:/).innerText()).toBe("Put into the form: the deck, 4 studs.");
+    await expect.poll(() => textOf(panel.getByText(/^Put into the form:/))).toBe("Put into the form: the deck, 4 studs.");
     await screenshot(page, "photo-trace");
     expect(await axeViolations('[aria-label="Trace from a photo"]')).toEqual([]);
   });
@@ -148,7 +156,7 @@ describe("trace a deck from a photo", () => {
     await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
     await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
     for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickAt(surface, s);
-    await expect.poll(() => panel.getByRole("alert").first().innerText()).toMatch(/are on the same spot/);
+    await expect.poll(() => textOf(panel.getByRole("alert"))).toMatch(/are on the same spot/);
     await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
   });
 
@@ -161,7 +169,7 @@ describe("trace a deck from a photo", () => {
     await panel.waitFor();
 
     await panel.getByLabel(/^Drawing \(DXF or SVG/).setInputFiles({ name: "empty.dxf", mimeType: "application/dxf", buffer: Buffer.from("") });
-    await expect.poll(() => panel.getByRole("alert").first().innerText()).toBe("The file is empty. Nothing was put into the form.");
+    await expect.poll(() => textOf(panel.getByRole("alert"))).toBe("The file is empty. Nothing was put into the form.");
 
     await panel.getByLabel(/^Drawing \(DXF or SVG/).setInputFiles({ name: "eight-sided-case-deck.dxf", mimeType: "application/dxf", buffer: Buffer.from(demoCaseDxf()) });
     const rows = panel.getByRole("table", { name: "Which shape is which" }).locator("tbody tr");
@@ -169,7 +177,7 @@ describe("trace a deck from a photo", () => {
     await expect.poll(() => panel.getByLabel(/What shape 1 \(closed polyline on layer DECK/).inputValue()).toBe("deck");
     expect(await panel.getByLabel(/What shape 2 \(circle on layer MOUTH/).inputValue()).toBe("mouth");
     await panel.getByRole("button", { name: "Put the shapes into the form" }).click();
-    await expect.poll(() => panel.getByRole("status").first().innerText()).toBe("Put into the form: the deck, the mouth, 4 studs, 2 passages.");
+    await expect.poll(() => textOf(panel.getByRole("status"))).toBe("Put into the form: the deck, the mouth, 4 studs, 2 passages.");
     expect(await axeViolations('[aria-label="Import a drawing"]')).toEqual([]);
   });
 
@@ -186,10 +194,11 @@ describe("trace a deck from a photo", () => {
 
     const panel = await openPanel();
     await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "deck-turned.jpg", mimeType: "image/jpeg", buffer: turned });
-    await expect.poll(() => panel.getByRole("status").first().innerText()).toMatch(/Photo kept with the case profile/);
-    // Upright, the 1200 × 900 picture stored on its side is 900 wide and 1200 tall.
+    await expect.poll(() => textOf(panel.getByRole("status"))).toMatch(/Photo kept with the case profile/);
+    // Upright, the 1200 × 900 picture stored on its side is 900 wide and 1200 tall. The status speaks only once
+    // the new photo is on show, so the surface already shows it and takes clicks.
     const surface = panel.getByTestId("trace-surface");
-    expect([await surface.getAttribute("data-photo-width"), await surface.getAttribute("data-photo-height")]).toEqual(["900", "1200"]);
+    expect([await surface.getAttribute("data-photo-width"), await surface.getAttribute("data-photo-height"), await surface.getAttribute("data-ready")]).toEqual(["900", "1200", "true"]);
     expect((await photos())[0]).toMatchObject({ state: "ready", widthPx: 900, heightPx: 1200 });
   });
 });

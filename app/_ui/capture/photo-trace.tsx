@@ -40,6 +40,11 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
   const [photo, setPhoto] = useState<Photo | null>(null);
   const [photoNotice, setPhotoNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
+  // A chosen photo being decoded: the surface still shows the one before, and takes no clicks meanwhile.
+  const [decoding, setDecoding] = useState(false);
+  // Each photo asked for (the stored one on opening, or a chosen file) takes a turn; a late answer to an
+  // earlier turn never replaces the photo asked for after it.
+  const photoTurn = useRef(0);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const fileRef = useRef<HTMLInputElement>(null);
 
@@ -74,28 +79,32 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
     canvas.getContext("2d")?.drawImage(source, 0, 0, canvas.width, canvas.height);
   }, [photo]);
 
-  const showStored = useCallback((item: { id: string; url: string | null }) => {
+  const showStored = useCallback((item: { id: string; url: string | null }, turn: number) => {
     if (!item.url) return;
     const img = new Image();
     img.onload = () => {
+      if (turn !== photoTurn.current) return;
       picture.current = img;
       setPhoto({ src: item.url!, widthPx: img.naturalWidth, heightPx: img.naturalHeight, storedId: item.id });
     };
-    img.onerror = () => setPhotoNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
+    img.onerror = () => {
+      if (turn === photoTurn.current) setPhotoNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
+    };
     img.src = item.url;
   }, []);
 
   useEffect(() => {
     if (!caseId) return;
     let live = true;
+    const turn = photoTurn.current;
     void callApi<{ items: { id: string; state: string; url: string | null; widthPx: number | null; heightPx: number | null }[] }>(`/api/v1/cases/${caseId}/photos`).then((res) => {
-      if (!live) return;
+      if (!live || turn !== photoTurn.current) return;
       if (!res.ok) {
         if (res.status !== 404) setPhotoNotice({ tone: "error", text: res.error.message });
         return;
       }
       const latest = res.data.items.find((p) => p.state === "ready");
-      if (latest) showStored(latest);
+      if (latest) showStored(latest, turn);
     });
     return () => {
       live = false;
@@ -105,9 +114,13 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
   async function choose(file: File | undefined) {
     setPhotoNotice(null);
     if (!file) return;
+    const turn = ++photoTurn.current;
+    setDecoding(true);
     const head = new Uint8Array(await file.slice(0, 16).arrayBuffer());
     const problem = photoProblem(file.size, sniffPhotoType(head));
     if (problem) {
+      if (turn !== photoTurn.current) return;
+      setDecoding(false);
       setPhotoNotice({ tone: "error", text: `${problem} Nothing was saved.` });
       if (fileRef.current) fileRef.current.value = "";
       return;
@@ -117,9 +130,16 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
       // Turned upright by its EXIF orientation, as the camera meant it.
       bitmap = await createImageBitmap(file, { imageOrientation: "from-image" });
     } catch {
+      if (turn !== photoTurn.current) return;
+      setDecoding(false);
       setPhotoNotice({ tone: "error", text: "The file could not be read as an image (it may be damaged). Nothing was saved." });
       return;
     }
+    if (turn !== photoTurn.current) {
+      bitmap.close();
+      return;
+    }
+    setDecoding(false);
     const width = bitmap.width;
     const height = bitmap.height;
     if (picture.current instanceof ImageBitmap) picture.current.close();
@@ -133,6 +153,8 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
     setBusy(true);
     const stored = await store(caseId, file, sniffPhotoType(head)!, width, height);
     setBusy(false);
+    // A photo chosen meanwhile is the one on show now; this one's outcome is no longer news.
+    if (turn !== photoTurn.current) return;
     if (!stored.ok) setPhotoNotice({ tone: "error", text: `${stored.message} The photo is shown for tracing but was not kept.` });
     else {
       setPhoto((p) => (p ? { ...p, storedId: stored.id } : p));
@@ -201,7 +223,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
   }
 
   function onKey(e: KeyboardEvent<HTMLDivElement>) {
-    if (!photo) return;
+    if (!photo || decoding) return;
     const stepPx = (e.shiftKey ? 10 : 1) * Math.max(1, Math.max(photo.widthPx, photo.heightPx) / 400);
     const c = cursor ?? [photo.widthPx / 2, photo.heightPx / 2];
     const moves: Record<string, Point> = { ArrowLeft: [-stepPx, 0], ArrowRight: [stepPx, 0], ArrowUp: [0, -stepPx], ArrowDown: [0, stepPx] };
@@ -308,6 +330,8 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
       </g>
     ));
   const ok = "var(--color-accent)";
+  const ready = photo !== null && !decoding;
+  const placed = step === "reference" ? refPx : target === "studs" ? studs : target === "deck" ? deck : target === "mouth" ? mouth : (passages[Number(target.slice("passage-".length))] ?? []);
   const bad = "var(--color-interfere)";
 
   const targetWords: Record<string, string> = { studs: "Studs", deck: `${words.deck} corners`, mouth: mouthRound ? `${words.mouth} (three points on its edge)` : `${words.mouth} corners` };
@@ -342,7 +366,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
           aria-describedby={photoNotice ? "trace-photo-notice" : undefined}
           onChange={(e) => void choose(e.target.files?.[0])}
         />
-        {busy ? <p className="field-hint" role="status">Keeping the photo with the case profile…</p> : null}
+        {decoding ? <p className="field-hint" role="status">Reading the photo…</p> : busy ? <p className="field-hint" role="status">Keeping the photo with the case profile…</p> : null}
         {photoNotice ? (
           <div id="trace-photo-notice" className="mt-2">
             <FormNotice tone={photoNotice.tone}>{photoNotice.text}</FormNotice>
@@ -425,8 +449,11 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
             data-testid="trace-surface"
             data-photo-width={photo.widthPx}
             data-photo-height={photo.heightPx}
+            data-ready={ready}
+            data-points={placed.length}
+            aria-busy={!ready}
             onPointerDown={(e) => {
-              if (e.button !== 0) return;
+              if (e.button !== 0 || !ready) return;
               const p = toPhotoPx(e);
               if (p) place(p);
             }}
