@@ -114,6 +114,8 @@ describe("plane fit on readings that are not symmetric about the centre", () => 
   it("readings all but on one diagonal line give no plane", () => {
     expect(tryFitPlane([at(0, 0, 1), at(100, 100, 2), at(200, 200 + 1e-5, 3)])).toBeNull();
     expect(tryFitPlane([at(0, 0, 1), at(100, 0, 2), at(200, 1e-5, 3)])).toBeNull();
+    // Three readings at one point span nothing at all.
+    expect(tryFitPlane([at(1, 1, 1), at(1, 1, 2), at(1, 1, 3)])).toBeNull();
   });
 
   it("the plane's height at (2, 3) with a = 0.1, b = 0.2, c = 1 is 1.8", () => {
