@@ -65,7 +65,7 @@ describe("a job in the browser, from the study to verified", () => {
     const cautions = (await sofa.getByTestId("consult-cautions").textContent()) ?? "";
     expect(cautions).toMatch(/legal class/);
     expect(cautions).toMatch(/local rules decide/);
-    expect(await sofa.getByText("Fits once the case mouth is cut to size.").count()).toBeGreaterThan(0);
+    expect(await sofa.getByText("Fits after the cut — once the case mouth is cut to size.").count()).toBeGreaterThan(0);
     await sofa.waitForTimeout(1500); // let the 3D view draw
     await screenshot(sofa, "jobs-02-consult-fit");
     // The customer's studio is locked in customer mode: no way to the bench view and its cut controls.

@@ -1,12 +1,13 @@
 import type { ReasonCode, Verdict } from "@/geometry";
+import { VERDICT_TEXT as VERDICT } from "@/model/verdict";
 import type { FitState } from "@/scene/fit";
 
-// The studio's words for the core's codes.
+// The studio's words for the core's codes. The verdicts' words are the product's one set (model/verdict.ts).
 
 export const VERDICT_TEXT: Record<Verdict, string> = {
-  "fits-as-is": "Fits as it is",
-  "fits-after-cut": "Fits after the cut",
-  "cannot-fit": "Does not fit safely",
+  "fits-as-is": VERDICT["fits-as-is"].words,
+  "fits-after-cut": VERDICT["fits-after-cut"].words,
+  "cannot-fit": VERDICT["cannot-fit"].words,
 };
 
 export const STATE_TEXT: Record<FitState, string> = {

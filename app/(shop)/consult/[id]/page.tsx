@@ -6,6 +6,7 @@ import { jobDetail } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
 import { formatLength, type KitResult } from "@/geometry";
 import { CONSULT_CAUTIONS } from "@/model/cautions";
+import { VERDICT_TEXT } from "@/model/verdict";
 import { requirePage } from "../../../_ui/guard";
 import { Photos } from "../../jobs/[id]/_components/photos";
 import { PlanVsActual } from "../../jobs/[id]/_components/plan-vs-actual";
@@ -15,10 +16,11 @@ import { FitForCustomer } from "./_components/fit";
 
 export const metadata: Metadata = { title: "Your plan" };
 
+/** The product's one set of verdict words (model/verdict.ts), each with what it means for the customer. */
 const VERDICT_WORDS: Record<KitResult["verdict"], string> = {
-  "fits-as-is": "Fits as it is — no cutting needed.",
-  "fits-after-cut": "Fits once the case mouth is cut to size.",
-  "cannot-fit": "Cannot be fitted safely to this case.",
+  "fits-as-is": `${VERDICT_TEXT["fits-as-is"].words} — no cutting needed.`,
+  "fits-after-cut": `${VERDICT_TEXT["fits-after-cut"].words} — once the case mouth is cut to size.`,
+  "cannot-fit": `${VERDICT_TEXT["cannot-fit"].words} — not on this case.`,
 };
 
 /** The consult page: what the customer sees of the shop — the fit, the choices in plain words, the plan, the cautions, approve, ask, pay. */

@@ -1,11 +1,12 @@
 import type { Verdict } from "@/geometry";
+import { VERDICT_TEXT } from "@/model/verdict";
 
-// The study page's words and colours for a verdict.
+// The study page's words and colours for a verdict: the product's one set (model/verdict.ts), with a short form.
 
 export const VERDICT: Record<Verdict, { words: string; tone: "clear" | "tight" | "interfere"; short: string }> = {
-  "fits-as-is": { words: "Fits as it is", tone: "clear", short: "clear" },
-  "fits-after-cut": { words: "Fits after the cut", tone: "tight", short: "needs a cut" },
-  "cannot-fit": { words: "Cannot fit safely", tone: "interfere", short: "cannot fit" },
+  "fits-as-is": { ...VERDICT_TEXT["fits-as-is"], short: "clear" },
+  "fits-after-cut": { ...VERDICT_TEXT["fits-after-cut"], short: "needs a cut" },
+  "cannot-fit": { ...VERDICT_TEXT["cannot-fit"], short: "cannot fit" },
 };
 
 export const TONE_CLASS = {
