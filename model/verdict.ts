@@ -15,7 +15,7 @@ export const VERDICT_TEXT: Record<Verdict, { words: string; tone: VerdictTone }>
 export const TONE_HEX: Record<VerdictTone, string> = { clear: "#0f6a63", tight: "#85560f", interfere: "#b3362c" };
 
 /** Why a kit got its verdict, in plain words. */
-export const REASON_TEXT: Partial<Record<ReasonCode, string>> = {
+export const REASON_TEXT: Record<ReasonCode, string> = {
   "clears-existing-mouth": "the skirt clears the existing mouth",
   "skirt-does-not-enter": "the skirt does not reach into the case",
   "needs-cut": "the mouth must be cut first",
@@ -29,6 +29,7 @@ export const REASON_TEXT: Partial<Record<ReasonCode, string>> = {
   "cut-breaks-into-pocket": "the cut would break into a pocket or transfer passage",
   "cut-breaks-through-deck": "the cut would break through the outside of the case",
   "cut-larger-than-case-allows": "the cut needed is larger than the case can take",
+  "crank-clearance-below-minimum": "the skirt's lower edge comes too close to the crank webs",
 };
 
 const NOT_A_BLOCK: readonly ReasonCode[] = ["clears-existing-mouth", "needs-cut", "skirt-does-not-enter"];
@@ -36,5 +37,5 @@ const NOT_A_BLOCK: readonly ReasonCode[] = ["clears-existing-mouth", "needs-cut"
 /** What stops a kit that cannot fit, in plain words, most important first (empty for a kit that fits). */
 export function blockingReasons(kit: { verdict: Verdict; reasons: readonly ReasonCode[] }): string[] {
   if (kit.verdict !== "cannot-fit") return [];
-  return kit.reasons.filter((r) => !NOT_A_BLOCK.includes(r)).map((r) => REASON_TEXT[r] ?? r.replace(/-/g, " "));
+  return kit.reasons.filter((r) => !NOT_A_BLOCK.includes(r)).map((r) => REASON_TEXT[r]);
 }

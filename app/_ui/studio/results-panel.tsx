@@ -4,6 +4,7 @@ import { memo } from "react";
 import type { KitResult, StudyResult } from "@/geometry";
 import { fitState, governingClearanceMm } from "@/scene/fit";
 import { diameterLabel, fixedText, lengthLabel, messageInUnits, signedLengthLabel, volumeLabel } from "@/model/units";
+import { blockingReasons } from "@/model/verdict";
 import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
 interface Props {
@@ -47,13 +48,23 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, mouth
   }
   if (k.alignment) rows.push(["Holder tilt", `${k.alignment.tiltDeg.toFixed(3)}° toward ${k.alignment.directionDeg.toFixed(0)}°`, `axis shift at the bottom ${f(k.alignment.lateralShiftMm)}`]);
   const problems = k.reasons.filter((r) => r !== "needs-cut" && r !== "clears-existing-mouth");
+  // A kit that cannot fit leads with the reason that decides it, never with a clearance figure beside the "no".
+  const deciding = blockingReasons(k)[0];
 
   return (
     <section aria-label="Fit results" aria-live="polite" className={`card flex flex-col gap-3 p-4 ${large ? "text-lg" : "text-sm"}`} data-testid="results">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 className={`${large ? "text-3xl" : "text-xl"} font-semibold`}>{k.name}</h2>
-        <p className={`font-semibold ${TEXT_COLOR[state]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict} data-cut={k.cut ? k.cut.diameterMm.toFixed(2) : "none"}>
-          {VERDICT_TEXT[k.verdict]} · {STATE_TEXT[state]} <span className="num">{signedLengthLabel(c, units)}</span>
+        <p className={`font-semibold ${k.verdict === "cannot-fit" ? TEXT_COLOR.interfere : TEXT_COLOR[state]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict} data-cut={k.cut ? k.cut.diameterMm.toFixed(2) : "none"}>
+          {k.verdict === "cannot-fit" && deciding ? (
+            <>
+              {VERDICT_TEXT[k.verdict]}: {deciding}
+            </>
+          ) : (
+            <>
+              {VERDICT_TEXT[k.verdict]} · {STATE_TEXT[state]} <span className="num">{signedLengthLabel(c, units)}</span>
+            </>
+          )}
         </p>
       </div>
       {problems.length > 0 && (
