@@ -12,10 +12,10 @@ export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
   const items = cases.data?.items ?? [];
   if (items.length === 0) return null;
   return (
-    <label className="flex items-center gap-2 text-sm">
+    <label className="flex min-w-0 max-w-full flex-wrap items-center gap-2 text-sm">
       <span className="text-ink-2">Copy from a case</span>
       <select
-        className="rounded-md border border-rule bg-card px-2 py-1.5"
+        className="min-w-0 max-w-full rounded-md border border-rule bg-card px-2 py-1.5"
         value=""
         aria-label="Copy studs from a case profile"
         onChange={(e) => {

@@ -5,7 +5,7 @@ export function FormSection({ title, children }: { title: string; children: Reac
   return (
     <section className="card p-5" aria-label={title}>
       <h2 className="mb-4 text-base font-semibold text-ink">{title}</h2>
-      <div className="grid gap-4 md:grid-cols-2">{children}</div>
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-2 [&>*]:min-w-0">{children}</div>
     </section>
   );
 }
