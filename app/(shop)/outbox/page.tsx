@@ -31,11 +31,11 @@ export default async function OutboxPage() {
             <li key={m.id} className="card p-4" data-testid="outbox-message">
               <div className="flex flex-wrap justify-between gap-2 text-sm">
                 <span className="font-semibold">{m.subject}</span>
-                <span className="text-ink-2">
+                <span className="break-all text-ink-2">
                   to {m.to.join(", ")} · <span className="num">{m.receivedAt.replace("T", " ").slice(0, 19)}</span>
                 </span>
               </div>
-              <pre className="mt-2 whitespace-pre-wrap font-sans text-sm text-ink-2">{m.text}</pre>
+              <pre className="mt-2 whitespace-pre-wrap break-all font-sans text-sm text-ink-2">{m.text}</pre>
               {m.links.length ? (
                 <div className="mt-2 flex flex-wrap gap-2">
                   {m.links.map((l) => (
