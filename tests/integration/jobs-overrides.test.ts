@@ -46,12 +46,12 @@ beforeAll(async () => {
 
 describe("planning a kit the study calls cannot-fit", () => {
   it("an owner without a reason is refused and nothing is written; with a reason the job is planned and the override kept", async () => {
-    const before = await countRows("job");
+    const before = await countRows("job", { study_id: cannotFitStudy });
     const refused = await owner.post("/api/v1/jobs", jobBody({ studyId: cannotFitStudy }));
     expect(refused.status).toBe(400);
     expect((refused.json as Err).error.code).toBe("reason_required");
     expect((refused.json as Err).error.fields?.planOverrideReason).toMatch(/cannot fit safely/);
-    expect(await countRows("job")).toBe(before);
+    expect(await countRows("job", { study_id: cannotFitStudy })).toBe(before);
 
     const res = await owner.post("/api/v1/jobs", jobBody({ studyId: cannotFitStudy, planOverrideReason: "passages to be welded and re-cut first" }));
     expect(res.status, res.text).toBe(201);

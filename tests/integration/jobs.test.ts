@@ -116,11 +116,12 @@ describe("the job status machine through the API", () => {
   });
 
   it("a bad job body is a 400 naming the fields, and nothing is written", async () => {
-    const before = await countRows("job");
-    const res = await builder.post("/api/v1/jobs", { ...jobBody(), customerEmail: "nope", depositAmount: 12.5 });
+    const title = `Refused job ${Date.now()}`;
+    const before = await countRows("job", { title });
+    const res = await builder.post("/api/v1/jobs", { ...jobBody({ title }), customerEmail: "nope", depositAmount: 12.5 });
     expect(res.status).toBe(400);
     expect((res.json as Err).error.fields).toMatchObject({ customerEmail: expect.any(String), depositAmount: expect.stringMatching(/whole number of cents/) });
-    expect(await countRows("job")).toBe(before);
+    expect(await countRows("job", { title })).toBe(before);
   });
 });
 

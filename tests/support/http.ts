@@ -107,11 +107,18 @@ export function testDb() {
   return createClient({ url: inject("databaseURL"), timeout: 10_000 });
 }
 
-/** Counts the rows of a table, for checks that nothing was half-written. */
-export async function countRows(table: string): Promise<number> {
+/**
+ * Counts the rows of a table that match `where` (column = value), for checks that nothing was half-written.
+ * Test files run side by side against one database, so a check counts only rows its own call could have
+ * written (its unique title, address or shop), never the whole table.
+ */
+export async function countRows(table: string, where: Record<string, string>): Promise<number> {
+  const columns = Object.keys(where);
+  if (columns.length === 0) throw new Error("countRows needs a filter: other test files write to the same tables");
   const db = testDb();
   try {
-    const r = await db.execute(`select count(*) as n from "${table}"`);
+    const sql = `select count(*) as n from "${table}" where ${columns.map((c) => `"${c}" = ?`).join(" and ")}`;
+    const r = await db.execute({ sql, args: columns.map((c) => where[c]) });
     return Number(r.rows[0]?.n ?? 0);
   } finally {
     db.close();
