@@ -350,6 +350,8 @@ export const casePhoto = sqliteTable(
     heightPx: integer("height_px"),
     state: text("state").notNull().default("pending"),
     refusedReason: text("refused_reason"),
+    /** The reference points the photo was scaled or squared up by (model/schemas/case-photos.ts), JSON; null until set. */
+    referenceJson: text("reference_json"),
     createdAt: createdAt(),
     createdBy: createdByRef(),
   },

@@ -1,0 +1,1 @@
+ALTER TABLE `case_photo` ADD `reference_json` text;
