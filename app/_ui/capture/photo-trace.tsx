@@ -3,10 +3,10 @@
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { OutlineSchema, type Outline } from "@/geometry/schema";
 import { orderAsRectangle, pxToMm, rectangleFit, ReferencePointsError, twoPointScale, type PhotoToMm, type Point } from "@/geometry/homography";
-import { lengthLabel, parseLengthText, type LengthUnits } from "@/model/units";
+import { lengthFieldText, lengthLabel, parseLengthText, type LengthUnits } from "@/model/units";
 import { callApi } from "../api-client";
 import { FormNotice } from "../field";
-import type { CapturedShapes } from "./captured-shapes";
+import type { CapturedShapes, PhotoReference } from "./captured-shapes";
 import { circleThrough, photoProblem, sniffPhotoType, MAX_PHOTO_MB } from "./photo-file";
 
 // Trace a case's deck over a photo of it. First the reference: four clicked studs of the measured pattern
@@ -28,6 +28,10 @@ type Props = {
   units?: LengthUnits;
   /** A case's deck (deck, mouth, passages) or a kit's base gasket (outline, bore, port windows). */
   shapesFor?: "case" | "gasket";
+  /** Reference points kept with the photo before: restored, so the trace goes on without clicking them again. */
+  initialReference?: PhotoReference;
+  /** Told each time the reference becomes usable (its points and measured lengths) or is cleared (null). */
+  onReferenceChange?: (ref: PhotoReference | null) => void;
 };
 
 const WORDS = {
@@ -35,7 +39,7 @@ const WORDS = {
   gasket: { deck: "Gasket outline", mouth: "Bore", passage: "Port", passages: "ports" },
 } as const;
 
-export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "case" }: Props) {
+export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "case", initialReference, onReferenceChange }: Props) {
   const words = WORDS[shapesFor];
   const [photo, setPhoto] = useState<Photo | null>(null);
   const [photoNotice, setPhotoNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
@@ -177,9 +181,13 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
   const across = parseLengthText(acrossText, units);
   const along = parseLengthText(alongText, units);
   const distance = parseLengthText(distanceText, units);
-  const acrossMm = across.ok ? across.value : undefined;
-  const alongMm = along.ok ? along.value : undefined;
-  const distanceMm = distance.ok ? distance.value : undefined;
+  // A kept length stays exact while its field still shows it as restored (inch text rounds to 0.001 in).
+  const [kept, setKept] = useState<{ across?: number; along?: number; distance?: number }>({});
+  const exact = (text: string, parsed: typeof across, keptMm: number | undefined) =>
+    keptMm !== undefined && text === lengthFieldText(keptMm, units) ? keptMm : parsed.ok ? parsed.value : undefined;
+  const acrossMm = exact(acrossText, across, kept.across);
+  const alongMm = exact(alongText, along, kept.along);
+  const distanceMm = exact(distanceText, distance, kept.distance);
   const need = mode === "rectangle" ? 4 : 2;
 
   const reference = useMemo((): { map: PhotoToMm; summary: string; fits: boolean } | { error: string } | null => {
@@ -198,6 +206,47 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
     }
   }, [photo, refPx, need, mode, acrossMm, alongMm, distanceMm, units]);
   const map = reference && "map" in reference ? reference.map : null;
+
+  // The reference as kept with the photo: restored from what was kept (when that changes), reported when it changes.
+  const restoredKey = JSON.stringify(initialReference ?? null);
+  const [restored, setRestored] = useState("null");
+  const reported = useRef(restoredKey);
+  const restoredSeen = useRef(restoredKey);
+  if (restored !== restoredKey) {
+    setRestored(restoredKey);
+    if (initialReference) restore(initialReference);
+  }
+  function restore(ref: PhotoReference) {
+    setKept(ref.kind === "rectangle" ? { across: ref.widthMm, along: ref.heightMm } : { distance: ref.distanceMm });
+    if (ref.kind === "rectangle") {
+      setMode("rectangle");
+      setAcrossText(lengthFieldText(ref.widthMm, units));
+      setAlongText(lengthFieldText(ref.heightMm, units));
+    } else {
+      setMode("two-point");
+      setDistanceText(lengthFieldText(ref.distanceMm, units));
+    }
+    setRefPx(ref.points);
+    setStep("trace");
+  }
+  const current = useMemo((): PhotoReference | null => {
+    if (!map) return null;
+    const pts = refPx.map((p): [number, number] => [p[0], p[1]]);
+    if (mode === "rectangle" && pts.length === 4 && acrossMm !== undefined && alongMm !== undefined)
+      return { kind: "rectangle", points: [pts[0], pts[1], pts[2], pts[3]], widthMm: acrossMm, heightMm: alongMm };
+    if (mode === "two-point" && pts.length === 2 && distanceMm !== undefined) return { kind: "scale", points: [pts[0], pts[1]], distanceMm };
+    return null;
+  }, [map, refPx, mode, acrossMm, alongMm, distanceMm]);
+  useEffect(() => {
+    const key = JSON.stringify(current);
+    // What was just restored came from the keeper: no news to it.
+    if (restoredSeen.current !== restoredKey) reported.current = restoredSeen.current = restoredKey;
+    if (key === reported.current) return;
+    // A photo still being shown has not lost its reference yet: nothing to report until it is on screen.
+    if (!current && !photo) return;
+    reported.current = key;
+    onReferenceChange?.(current);
+  }, [current, photo, onReferenceChange, restoredKey]);
 
   // ——— clicks ———
 
