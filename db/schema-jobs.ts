@@ -57,6 +57,10 @@ export const job = sqliteTable(
     verifyOverrideById: text("verify_override_by_id"),
     verifyOverrideByName: text("verify_override_by_name"),
     verifyOverrideAt: integer("verify_override_at", { mode: "timestamp_ms" }),
+    /** The shop's quote for the job (model/quote.ts StoredQuote as JSON): lines, the rates it was priced at, the deposit. */
+    quoteJson: text("quote_json"),
+    /** The quote as the customer (or the owner for them) approved it together with the plan; cleared when the plan goes back to planned. */
+    approvedQuoteJson: text("approved_quote_json"),
     /** Tolerance for after-cut verification, mm. */
     verifyToleranceMm: real("verify_tolerance_mm").notNull().default(0.05),
     notes: text("notes").notNull().default(""),

@@ -1,5 +1,5 @@
 import { relations, sql } from "drizzle-orm";
-import { index, integer, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 
 // Timestamps are stored as Unix milliseconds; the auth adapter reads and writes them as Dates.
 const createdAt = () =>
@@ -137,6 +137,11 @@ export const shopSettings = sqliteTable("shop_settings", {
     .references(() => organization.id, { onDelete: "cascade" }),
   units: text("units").notNull().default("mm"),
   limitsJson: text("limits_json").notNull().default("{}"),
+  /** The shop's prices: ISO 4217 code, labour rate per hour in minor units (null: not set), tax and deposit shares in percent. */
+  currency: text("currency").notNull().default("EUR"),
+  labourRateMinor: integer("labour_rate_minor"),
+  taxPercent: real("tax_percent").notNull().default(0),
+  depositPercent: real("deposit_percent").notNull().default(30),
   version: integer("version").notNull().default(1),
   updatedAt: updatedAt(),
 });
