@@ -5,7 +5,10 @@ import { defineConfig } from "vitest/config";
 export default defineConfig({
   resolve: { tsconfigPaths: true },
   test: {
-    include: ["tests/geometry/**/*.test.ts", "tests/unit/job-status.test.ts", "tests/unit/verification.test.ts"],
+    include: ["tests/geometry/**/*.test.ts", "tests/unit/job-status.test.ts", "tests/model/job-status*.test.ts", "tests/unit/verification.test.ts"],
     environment: "node",
+    // Instrumented code on a shared 2-core machine runs several times slower than plain: the heaviest depth-stop
+    // search needs more than vitest's default 5 s there.
+    testTimeout: 60_000,
   },
 });
