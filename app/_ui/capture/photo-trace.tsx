@@ -7,7 +7,7 @@ import { lengthFieldText, lengthLabel, parseLengthText, type LengthUnits } from 
 import { callApi } from "../api-client";
 import { FormNotice } from "../field";
 import type { CapturedShapes, PhotoReference } from "./captured-shapes";
-import { circleThrough, photoProblem, sniffPhotoType, MAX_PHOTO_MB } from "./photo-file";
+import { circleThrough, photoProblem, sniffPhotoType, MAX_PHOTO_MB, type PhotoType } from "./photo-file";
 
 // Trace a case's deck over a photo of it. First the reference: four clicked studs of the measured pattern
 // (the photo is squared up by a perspective solve) or two clicked points and the distance between them.
@@ -32,14 +32,19 @@ type Props = {
   initialReference?: PhotoReference;
   /** Told each time the reference becomes usable (its points and measured lengths) or is cleared (null). */
   onReferenceChange?: (ref: PhotoReference | null) => void;
+  /** Without a case to keep it with yet: told of each photo chosen, so the form can keep it at the case's first save. */
+  onPhotoChosen?: (photo: ChosenPhoto) => void;
 };
+
+/** A photo chosen before its case profile is saved: the file as chosen, its checked type and its upright size. */
+export type ChosenPhoto = { file: File; contentType: PhotoType; widthPx: number; heightPx: number };
 
 const WORDS = {
   case: { deck: "Deck", mouth: "Mouth", passage: "Passage", passages: "passages" },
   gasket: { deck: "Gasket outline", mouth: "Bore", passage: "Port", passages: "ports" },
 } as const;
 
-export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "case", initialReference, onReferenceChange }: Props) {
+export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "case", initialReference, onReferenceChange, onPhotoChosen }: Props) {
   const words = WORDS[shapesFor];
   const [photo, setPhoto] = useState<Photo | null>(null);
   const [photoNotice, setPhotoNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
@@ -151,7 +156,9 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
     setPhoto({ src: "", widthPx: width, heightPx: height, storedId: null });
     resetTrace();
     if (!caseId) {
-      setPhotoNotice({ tone: "ok", text: "Photo shown for tracing. Save the case profile to keep a photo with it." });
+      onPhotoChosen?.({ file, contentType: sniffPhotoType(head)!, widthPx: width, heightPx: height });
+      const keep = onPhotoChosen ? "It is kept with the case profile when you save it." : "Save the case profile to keep a photo with it.";
+      setPhotoNotice({ tone: "ok", text: `Photo shown for tracing. ${keep}` });
       return;
     }
     setBusy(true);
