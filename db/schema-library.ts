@@ -1,0 +1,153 @@
+import { relations } from "drizzle-orm";
+import { index, integer, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { user } from "./schema-auth";
+import { archivedAt, createdByRef, shopRef, version } from "./schema-refs";
+import { createdAt, updatedAt } from "./schema-time";
+
+// ── The shop's library and its studies ─────────────────────────────────────────────────────────
+// Every row belongs to one shop, says who made it, and carries a version that each update must name
+// (a stale version is refused, so no edit is silently overwritten). Shapes the core checks — a case
+// profile, a kit, a rig, a cut plan — are kept as JSON validated by the core's zod schemas on the way in.
+
+/** A case profile: deck, mouth, studs, pockets (JSON, without its name), and the mouth readings taken on it. */
+export const caseProfile = sqliteTable(
+  "case_profile",
+  {
+    id: text("id").primaryKey(),
+    organizationId: shopRef(),
+    name: text("name").notNull(),
+    notes: text("notes").notNull().default(""),
+    dataJson: text("data_json").notNull(),
+    /** Mouth diameter readings: [{ valueMm, takenById, takenByName, takenAt }]. */
+    mouthReadingsJson: text("mouth_readings_json").notNull().default("[]"),
+    version: version(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdByRef(),
+    archivedAt: archivedAt(),
+  },
+  (t) => [index("case_profile_shop_idx").on(t.organizationId, t.archivedAt)],
+);
+
+/** A cylinder kit: bore, skirt readings, studs, gaskets, price (JSON, without id and name), with who took each skirt reading. */
+export const cylinderKit = sqliteTable(
+  "cylinder_kit",
+  {
+    id: text("id").primaryKey(),
+    organizationId: shopRef(),
+    name: text("name").notNull(),
+    notes: text("notes").notNull().default(""),
+    dataJson: text("data_json").notNull(),
+    /** { skirtDiameter: Reading[], skirtLength: Reading[] }, one per value in the data's reading lists. */
+    readingsJson: text("readings_json").notNull().default('{"skirtDiameter":[],"skirtLength":[]}'),
+    version: version(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdByRef(),
+    archivedAt: archivedAt(),
+  },
+  (t) => [index("cylinder_kit_shop_idx").on(t.organizationId, t.archivedAt)],
+);
+
+/** A boring rig: head, bit and its calibrated reach, grooves, shims, drill (JSON, without its name). */
+export const boringRig = sqliteTable(
+  "boring_rig",
+  {
+    id: text("id").primaryKey(),
+    organizationId: shopRef(),
+    name: text("name").notNull(),
+    notes: text("notes").notNull().default(""),
+    dataJson: text("data_json").notNull(),
+    version: version(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdByRef(),
+    archivedAt: archivedAt(),
+  },
+  (t) => [index("boring_rig_shop_idx").on(t.organizationId, t.archivedAt)],
+);
+
+/** A study: one case, its candidate kits (study_kit), a rig, the cut plan, the holder readings and the study's own limits. */
+export const study = sqliteTable(
+  "study",
+  {
+    id: text("id").primaryKey(),
+    organizationId: shopRef(),
+    name: text("name").notNull(),
+    notes: text("notes").notNull().default(""),
+    caseId: text("case_id")
+      .notNull()
+      .references(() => caseProfile.id, { onDelete: "restrict" }),
+    rigId: text("rig_id").references(() => boringRig.id, { onDelete: "restrict" }),
+    cutJson: text("cut_json"),
+    readingsJson: text("readings_json"),
+    limitsJson: text("limits_json"),
+    chosenKitId: text("chosen_kit_id"),
+    /** A random token set by each update, so the statements of one update can tell they follow their own write. */
+    writeId: text("write_id").notNull().default(""),
+    version: version(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    createdBy: createdByRef(),
+    archivedAt: archivedAt(),
+  },
+  (t) => [
+    index("study_shop_idx").on(t.organizationId, t.archivedAt),
+    index("study_case_idx").on(t.caseId),
+    index("study_rig_idx").on(t.rigId),
+  ],
+);
+
+/** The kits of a study, in the order the study lists them. */
+export const studyKit = sqliteTable(
+  "study_kit",
+  {
+    studyId: text("study_id")
+      .notNull()
+      .references(() => study.id, { onDelete: "cascade" }),
+    kitId: text("kit_id")
+      .notNull()
+      .references(() => cylinderKit.id, { onDelete: "restrict" }),
+    position: integer("position").notNull(),
+  },
+  (t) => [uniqueIndex("study_kit_unique").on(t.studyId, t.kitId), index("study_kit_kit_idx").on(t.kitId)],
+);
+
+/** A study's history: who changed what, and when. */
+export const studyEvent = sqliteTable(
+  "study_event",
+  {
+    id: text("id").primaryKey(),
+    studyId: text("study_id")
+      .notNull()
+      .references(() => study.id, { onDelete: "cascade" }),
+    at: integer("at", { mode: "timestamp_ms" }).notNull(),
+    byId: text("by_id")
+      .notNull()
+      .references(() => user.id),
+    byName: text("by_name").notNull(),
+    summary: text("summary").notNull(),
+  },
+  (t) => [index("study_event_study_idx").on(t.studyId, t.at)],
+);
+
+export const studyRelations = relations(study, ({ one, many }) => ({
+  case: one(caseProfile, { fields: [study.caseId], references: [caseProfile.id] }),
+  rig: one(boringRig, { fields: [study.rigId], references: [boringRig.id] }),
+  kits: many(studyKit),
+  events: many(studyEvent),
+}));
+export const studyKitRelations = relations(studyKit, ({ one }) => ({
+  study: one(study, { fields: [studyKit.studyId], references: [study.id] }),
+  kit: one(cylinderKit, { fields: [studyKit.kitId], references: [cylinderKit.id] }),
+}));
+export const studyEventRelations = relations(studyEvent, ({ one }) => ({
+  study: one(study, { fields: [studyEvent.studyId], references: [study.id] }),
+}));
+
+export type CaseProfileRow = typeof caseProfile.$inferSelect;
+export type CylinderKitRow = typeof cylinderKit.$inferSelect;
+export type BoringRigRow = typeof boringRig.$inferSelect;
+export type StudyRow = typeof study.$inferSelect;
+export type StudyKitRow = typeof studyKit.$inferSelect;
+export type StudyEventRow = typeof studyEvent.$inferSelect;
