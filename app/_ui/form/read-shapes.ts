@@ -1,6 +1,6 @@
 import type { LengthUnits } from "@/geometry";
 import type { FormReader, Path } from "./form-reader";
-import { lengthText } from "./number-text";
+import { lengthFieldText } from "@/model/units";
 import type { OutlineText, PairText, StudText } from "./text-values";
 import { emptyOutline } from "./text-values";
 
@@ -32,11 +32,11 @@ type OutlineData = { kind: "circle"; diameterMm: number; centerMm?: readonly [nu
 /** An outline as texts in the given units. */
 export function outlineText(o: OutlineData | undefined, units: LengthUnits): OutlineText {
   if (!o) return emptyOutline();
-  const pair = (v: readonly [number, number]): PairText => [lengthText(v[0], units), lengthText(v[1], units)];
+  const pair = (v: readonly [number, number]): PairText => [lengthFieldText(v[0], units), lengthFieldText(v[1], units)];
   if (o.kind === "polygon") return { ...emptyOutline("polygon"), pointsMm: o.pointsMm.map(pair) };
-  return { ...emptyOutline("circle"), diameterMm: lengthText(o.diameterMm, units), centerMm: o.centerMm ? pair(o.centerMm) : ["", ""] };
+  return { ...emptyOutline("circle"), diameterMm: lengthFieldText(o.diameterMm, units), centerMm: o.centerMm ? pair(o.centerMm) : ["", ""] };
 }
 
 export function studsText(studs: readonly { label: string; positionMm: readonly [number, number] }[] | undefined, units: LengthUnits): StudText[] {
-  return (studs ?? []).map((s) => ({ label: s.label, positionMm: [lengthText(s.positionMm[0], units), lengthText(s.positionMm[1], units)] }));
+  return (studs ?? []).map((s) => ({ label: s.label, positionMm: [lengthFieldText(s.positionMm[0], units), lengthFieldText(s.positionMm[1], units)] }));
 }

@@ -5,7 +5,7 @@ import { useController, useFormContext, type FieldValues, type Path } from "reac
 import { dateText } from "@/model/dates";
 import { useShopTimeZone } from "../query/settings/use-shop-settings";
 import { errorAt } from "./field-error";
-import { parseLengthText } from "./number-text";
+import { parseLengthText } from "@/model/units";
 
 export type ReadingStamp = { takenBy: string; takenAt: string } | undefined;
 

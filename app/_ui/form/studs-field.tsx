@@ -4,7 +4,7 @@ import type { LengthUnits } from "@/geometry";
 import { useState } from "react";
 import { useFieldArray, useFormContext, type ArrayPath, type FieldValues } from "react-hook-form";
 import { errorAt } from "./field-error";
-import { lengthText, parseLengthText } from "./number-text";
+import { lengthFieldText, parseLengthText } from "@/model/units";
 import { PairInputs } from "./pair-inputs";
 import type { StudText } from "./text-values";
 
@@ -23,8 +23,8 @@ export function StudsField<FV extends FieldValues>({ units, copyFrom }: { units:
   const sideMm = parseLengthText(side, units);
   const fillSquare = () => {
     if (!sideMm.ok || !sideMm.value) return;
-    const h = lengthText(sideMm.value / 2, units);
-    const neg = lengthText(-sideMm.value / 2, units);
+    const h = lengthFieldText(sideMm.value / 2, units);
+    const neg = lengthFieldText(-sideMm.value / 2, units);
     replace(SQUARE.map(([label, sx, sy]) => ({ label, positionMm: [sx < 0 ? neg : h, sy < 0 ? neg : h] }) satisfies StudText) as never);
   };
   const listError = errorAt(formState.errors, "studs");

@@ -1,5 +1,5 @@
 import type { LengthUnits } from "@/geometry";
-import { lengthText, parseLengthText } from "./number-text";
+import { lengthFieldText, parseLengthText } from "@/model/units";
 
 /** Whether a form path holds a length: it or one of its parents ends in "Mm" (as the core names lengths). */
 export function isLengthPath(path: readonly (string | number)[]): boolean {
@@ -25,7 +25,7 @@ export function convertLengthTexts<T>(values: T, from: LengthUnits, to: LengthUn
       const key = path.join(".");
       const last = memory?.get(key);
       const r = parseLengthText(v, from);
-      const next = last && last.wrote === v ? last.was : r.ok && r.value !== undefined ? lengthText(r.value, to) : v;
+      const next = last && last.wrote === v ? last.was : r.ok && r.value !== undefined ? lengthFieldText(r.value, to) : v;
       if (memory) {
         if (next === v) memory.delete(key);
         else memory.set(key, { wrote: next, was: v });

@@ -8,7 +8,7 @@ import { FormNotice } from "../../../_ui/field";
 import type { CaseRow } from "../../../_ui/query/types";
 import { caseDefaults, caseDoc, caseFieldDefaults, caseToCore, mergeCase, type CaseFormValues } from "./case-values";
 import { errorAt } from "@/app/_ui/form/field-error";
-import { lengthText, parseLengthText } from "@/app/_ui/form/number-text";
+import { lengthFieldText as lengthText, parseLengthText } from "@/model/units";
 import { ReadingsField } from "@/app/_ui/form/readings-field";
 import { SaveBar } from "@/app/_ui/form/save-bar";
 import { TextField } from "@/app/_ui/form/text-field";

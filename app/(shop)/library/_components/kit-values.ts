@@ -2,7 +2,7 @@ import { CylinderKitSchema, type LengthUnits } from "@/geometry";
 import type { Capture } from "@/geometry/shapes";
 import type { KitRow } from "../../../_ui/query/types";
 import type { FormReader } from "@/app/_ui/form/form-reader";
-import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import { lengthFieldText as lengthText, numberFieldText as numberText } from "@/model/units";
 import { outlineText, readOutline, readStuds, studsText } from "@/app/_ui/form/read-shapes";
 import { emptyOutline, type OutlineText } from "@/app/_ui/form/text-values";
 import type { PocketText, ShapeDoc } from "./shapes/shape-store";

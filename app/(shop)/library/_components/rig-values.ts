@@ -1,7 +1,7 @@
 import type { LengthUnits } from "@/geometry";
 import type { RigRow } from "../../../_ui/query/types";
 import type { FormReader } from "@/app/_ui/form/form-reader";
-import { lengthText, numberText } from "@/app/_ui/form/number-text";
+import { lengthFieldText, numberFieldText } from "@/model/units";
 
 export type RigFormValues = {
   name: string;
@@ -19,7 +19,7 @@ export type RigFormValues = {
 
 export function rigDefaults(row: RigRow | null, units: LengthUnits): RigFormValues {
   const d = row?.data;
-  const L = (v: number | undefined) => lengthText(v, units);
+  const L = (v: number | undefined) => lengthFieldText(v, units);
   return {
     name: row?.name ?? "",
     notes: row?.notes ?? "",
@@ -28,8 +28,8 @@ export function rigDefaults(row: RigRow | null, units: LengthUnits): RigFormValu
     calibration: { bitLengthMm: L(d?.calibration.bitLengthMm), minCutDiameterMm: L(d?.calibration.minCutDiameterMm), maxCutDiameterMm: L(d?.calibration.maxCutDiameterMm) },
     hardwareRadiusMm: L(d?.hardwareRadiusMm),
     grooves: d?.grooves.map((g) => ({ label: g.label, travelMm: L(g.travelMm) })) ?? [{ label: "groove 1", travelMm: "" }],
-    shims: d?.shims?.map((s) => ({ thicknessMm: L(s.thicknessMm), count: numberText(s.count) })) ?? [],
-    drillTopRpm: numberText(d?.drillTopRpm),
+    shims: d?.shims?.map((s) => ({ thicknessMm: L(s.thicknessMm), count: numberFieldText(s.count) })) ?? [],
+    drillTopRpm: numberFieldText(d?.drillTopRpm),
     settingResolutionMm: L(d?.settingResolutionMm),
     studThread: d?.studThread ?? "",
   };

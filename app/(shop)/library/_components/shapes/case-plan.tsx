@@ -3,7 +3,7 @@
 import type { LengthUnits } from "@/geometry";
 import { useMemo, useState, type RefObject } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
-import { parseLengthText } from "@/app/_ui/form/number-text";
+import { parseLengthText } from "@/model/units";
 import { CaptureSources } from "./capture-sources";
 import { CaseTrial } from "./case-trial";
 import { HistoryBar } from "./history-bar";

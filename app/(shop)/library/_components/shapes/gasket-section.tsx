@@ -3,7 +3,7 @@
 import type { LengthUnits } from "@/geometry";
 import { useMemo, type RefObject } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
-import { parseLengthText } from "@/app/_ui/form/number-text";
+import { parseLengthText } from "@/model/units";
 import type { StudText } from "@/app/_ui/form/text-values";
 import { studsText } from "@/app/_ui/form/read-shapes";
 import { CaptureSources } from "./capture-sources";

@@ -3,7 +3,7 @@
 import type { LengthUnits } from "@/geometry";
 import { ShapeParamsSchema, type ShapeParams } from "@/geometry/shapes";
 import { useState } from "react";
-import { lengthText, parseLengthText, parseNumberText } from "@/app/_ui/form/number-text";
+import { lengthFieldText as lengthText, parseLengthText, parseNumberText } from "@/model/units";
 
 type Field = { name: string; label: string; length?: boolean };
 export type MeasureSpec = { kind: ShapeParams["kind"]; label: string; fields: Field[] };

@@ -1,7 +1,7 @@
 import type { LengthUnits } from "@/geometry";
 import { shapeIssues, type ShapeIssue } from "@/geometry/shapes";
 import type { EditShapes } from "@/scene/drawing/plan-edit";
-import { parseLengthText } from "@/app/_ui/form/number-text";
+import { parseLengthText } from "@/model/units";
 import type { StudText } from "@/app/_ui/form/text-values";
 import { readOutlineText, type ShapeDoc } from "./shape-store";
 

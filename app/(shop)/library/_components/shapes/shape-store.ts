@@ -3,7 +3,7 @@ import { mirrorOutline, type Capture, type ShapeOutline, type ShapeParams } from
 import { temporal } from "zundo";
 import { createStore } from "zustand/vanilla";
 import type { CapturedShapes } from "@/app/_ui/capture/captured-shapes";
-import { lengthText, parseLengthText } from "@/app/_ui/form/number-text";
+import { lengthFieldText as lengthText, parseLengthText } from "@/model/units";
 import { emptyOutline, type OutlineText, type PairText, type StudText } from "@/app/_ui/form/text-values";
 import { convertLengthTexts } from "@/app/_ui/form/units-text";
 

@@ -2,7 +2,7 @@
 
 import { studsFromParams, type ShapeParams } from "@/geometry/shapes";
 import { memo, useState } from "react";
-import { parseLengthText } from "@/app/_ui/form/number-text";
+import { parseLengthText } from "@/model/units";
 import { useFormContext } from "react-hook-form";
 import { useStore } from "zustand";
 import { errorAt } from "@/app/_ui/form/field-error";
