@@ -1,12 +1,14 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq, ne } from "drizzle-orm";
+import { pointsOutsidePhoto, PhotoReferenceSchema, type PhotoReference } from "@/model/schemas/case-photos";
 import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
 import { AccessError, type Caller } from "./access";
-import { getDb } from "./client";
+import { getDb, type Db } from "./client";
 import { DataError } from "./errors";
 import { sniffImageType } from "./photos";
 import { SHOP_STAFF } from "./roles";
+import { readColumn } from "./rows";
 import * as schema from "./schema";
 import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNotConfigured } from "./storage";
 
@@ -24,6 +26,8 @@ export type CasePhotoView = {
   sizeBytes: number;
   widthPx: number | null;
   heightPx: number | null;
+  /** The reference points the trace was scaled or squared up by, in the photo's pixels; null until set. */
+  reference: PhotoReference | null;
   createdAt: string;
   url: string | null;
 };
@@ -32,9 +36,11 @@ function assertStaff(caller: Caller) {
   if (!SHOP_STAFF.includes(caller.role)) throw new AccessError("forbidden", "Only the shop's owner and builders see a case profile's photos.");
 }
 
+/** An object store that is not set up or did not answer: the caller is told to try later (503); the cause is logged for the shop's admin. */
 function storageError(error: unknown): never {
   if (error instanceof StorageNotConfigured) throw new DataError("storage_unavailable", error.message);
-  throw error;
+  console.error("case photos: the object store failed:", describe(error));
+  throw new DataError("storage_unavailable", "The photo store did not answer; nothing was changed. Try again in a moment.");
 }
 
 async function caseOr404(caller: Caller, caseId: string) {
@@ -69,6 +75,7 @@ async function view(p: schema.CasePhotoRow): Promise<CasePhotoView> {
     sizeBytes: p.sizeBytes,
     widthPx: p.widthPx,
     heightPx: p.heightPx,
+    reference: readColumn(PhotoReferenceSchema.nullable(), p.referenceJson, null, "case photo reference"),
     createdAt: p.createdAt.toISOString(),
     url: p.state === "ready" ? await presignDownload(p.objectKey).catch(storageError) : null,
   };
@@ -90,7 +97,7 @@ export async function listCasePhotos(caller: Caller, caseId: string): Promise<Ca
 export async function requestCasePhotoUpload(
   caller: Caller,
   caseId: string,
-  body: { contentType: PhotoType; sizeBytes: number; widthPx?: number; heightPx?: number },
+  body: { contentType: PhotoType; sizeBytes: number; widthPx?: number; heightPx?: number; reference?: PhotoReference },
 ) {
   await caseOr404(caller, caseId);
   const id = randomUUID();
@@ -107,6 +114,7 @@ export async function requestCasePhotoUpload(
     sizeBytes: body.sizeBytes,
     widthPx: body.widthPx ?? null,
     heightPx: body.heightPx ?? null,
+    referenceJson: body.reference ? JSON.stringify(body.reference) : null,
     state: "pending",
     createdBy: caller.userId,
   });
@@ -126,7 +134,11 @@ export async function completeCasePhotoUpload(caller: Caller, caseId: string, ph
   else if (sniffed !== p.contentType) reason = `The file is a ${sniffed.slice(6).toUpperCase()} image but was declared as ${p.contentType.slice(6).toUpperCase()}; choose the file again.`;
   const db = await getDb();
   if (reason) {
-    await deleteObject(p.objectKey).catch(() => undefined);
+    await deleteObject(p.objectKey).catch((error: unknown) => {
+      // The refusal stands either way: a refused row is never presigned for download again, so the file
+      // left behind is unreachable; it costs only storage until the store's own clean-up.
+      console.warn(`case photo ${p.id} refused: its file could not be deleted from the object store; the refusal stands.`, describe(error));
+    });
     await db.update(schema.casePhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(schema.casePhoto.id, p.id));
     throw new DataError("photo_refused", reason);
   }
@@ -141,10 +153,63 @@ export async function casePhotoDownload(caller: Caller, caseId: string, photoId:
   return presignDownload(p.objectKey).catch(storageError);
 }
 
-/** Removes a photo: its row and its file. */
+/** Sets or clears the reference points of a photo; every point must lie on the photo. */
+export async function setCasePhotoReference(caller: Caller, caseId: string, photoId: string, reference: PhotoReference | null): Promise<CasePhotoView> {
+  const p = await photoOr404(caller, caseId, photoId);
+  if (p.state === "refused") throw new DataError("photo_refused", p.refusedReason ?? "This photo was refused; choose the file again.");
+  if (reference) {
+    if (p.widthPx === null || p.heightPx === null) {
+      throw new DataError("invalid_input", "This photo's size in pixels is not known, so its reference points cannot be checked; upload it again.", { reference: "The photo's size is not known." });
+    }
+    const outside = pointsOutsidePhoto(reference, p.widthPx, p.heightPx);
+    if (outside) {
+      throw new DataError("invalid_input", "Some fields are not valid.", Object.fromEntries(Object.entries(outside).map(([path, message]) => [`reference.${path}`, message])));
+    }
+  }
+  const referenceJson = reference ? JSON.stringify(reference) : null;
+  const db = await getDb();
+  await db.update(schema.casePhoto).set({ referenceJson }).where(eq(schema.casePhoto.id, p.id));
+  return view({ ...p, referenceJson });
+}
+
+/** An error's words for a log line, without its stack. */
+function describe(error: unknown): string {
+  return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+}
+
+/**
+ * Removes stored photo files whose rows are already gone. A file that cannot be removed is logged and
+ * left: with its row deleted nothing links to it or presigns it any more, so it is unreachable and costs
+ * only storage; the deletion the caller asked for has happened and stands.
+ */
+export async function removeCasePhotoFiles(objectKeys: readonly string[]): Promise<void> {
+  for (const key of objectKeys) {
+    await deleteObject(key).catch((error: unknown) => {
+      console.warn(`case photo file ${key}: its row is deleted but the file could not be removed from the object store; it is unreachable and is left.`, describe(error));
+    });
+  }
+}
+
+/**
+ * Deletes a case profile and its photos' rows in one write batch (all or nothing); answers the deleted
+ * photos' object keys, whose files the caller removes after the commit, so a file never goes while its row
+ * could stay.
+ */
+export async function deleteCaseProfileRows(db: Db, shopId: string, caseId: string): Promise<string[]> {
+  const [photos] = await db.batch([
+    db
+      .delete(schema.casePhoto)
+      .where(and(eq(schema.casePhoto.caseId, caseId), eq(schema.casePhoto.organizationId, shopId)))
+      .returning({ objectKey: schema.casePhoto.objectKey }),
+    db.delete(schema.caseProfile).where(and(eq(schema.caseProfile.id, caseId), eq(schema.caseProfile.organizationId, shopId))),
+  ]);
+  return photos.map((p) => p.objectKey);
+}
+
+/** Removes a photo: its row, then its file. */
 export async function deleteCasePhoto(caller: Caller, caseId: string, photoId: string): Promise<void> {
   const p = await photoOr404(caller, caseId, photoId);
   const db = await getDb();
   await db.delete(schema.casePhoto).where(eq(schema.casePhoto.id, p.id));
-  await deleteObject(p.objectKey).catch(() => undefined);
+  await removeCasePhotoFiles([p.objectKey]);
 }

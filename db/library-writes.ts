@@ -19,6 +19,7 @@ import {
 } from "./library";
 import { assertStaff, isConstraintError, newId, notFound, parseStoredReadings, stampReadings } from "./rows";
 import * as schema from "./schema";
+import { deleteCaseProfileRows, removeCasePhotoFiles } from "./case-photos";
 
 // Writing the shop's library: new rows (one at a time, or as statements for an import's batch), changes
 // under the version the caller read, archiving, and deleting a row no study uses.
@@ -178,11 +179,15 @@ export async function deleteLibraryItem(caller: Caller, kind: LibraryKind, id: s
   if (users.length > 0) throw new DataError("in_use", inUseMessage(WHAT[kind], users));
   const db = await getDb();
   const t = libraryTable(kind);
+  // A case profile's photos: their rows go in the case's transaction, their files only after it committed.
+  let photoFiles: string[] = [];
   try {
-    await db.delete(t).where(and(eq(t.id, id), eq(t.organizationId, caller.shopId)));
+    if (kind === "cases") photoFiles = await deleteCaseProfileRows(db, caller.shopId, id);
+    else await db.delete(t).where(and(eq(t.id, id), eq(t.organizationId, caller.shopId)));
   } catch (error) {
     // A study took the row up between the check and the delete: the foreign key refused it.
     if (isConstraintError(error)) throw new DataError("in_use", inUseMessage(WHAT[kind], await studiesUsing(kind, caller.shopId, id)));
     throw error;
   }
+  await removeCasePhotoFiles(photoFiles);
 }

@@ -24,7 +24,7 @@ type Shop = { http: Http; caseId: string; kitId: string };
 type Ctx = { actor: Actor; shop: Shop; http: Http; params: Record<string, string> };
 type Expected = Record<Actor, number>;
 type RouteCase = {
-  method: "GET" | "POST" | "PATCH" | "DELETE";
+  method: "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
   path: string;
   /** A row the path's {id} names: the actor's own shop's and another shop's are both tried. */
   entity?: Entity;
@@ -249,6 +249,9 @@ const JOBS: RouteCase[] = [
   { method: "POST", path: "/api/v1/jobs/{id}/move", row: jobRow({ shared: true }), as: `${SHARED}, to approved`, mutates: true, body: () => ({ to: "approved", reason: "approved by phone" }), own: approval(200), other: notFound },
   { method: "POST", path: "/api/v1/jobs/{id}/move", row: jobRow({}), as: `${HIDDEN}, to approved`, mutates: true, body: () => ({ to: "approved", reason: "approved by phone" }), own: approval(404), other: notFound },
   { method: "POST", path: "/api/v1/jobs/{id}/readings", row: machinedJob, as: "machined", body: () => PASSING_READINGS, own: staff(201), other: staffOther },
+  { method: "GET", path: "/api/v1/jobs/{id}/quote", row: hiddenJob, as: HIDDEN, own: jobMember(200, 404), other: notFound },
+  { method: "GET", path: "/api/v1/jobs/{id}/quote", row: sharedJob, as: SHARED, own: member(200), other: notFound },
+  { method: "PUT", path: "/api/v1/jobs/{id}/quote", row: jobRow({}), mutates: true, body: () => ({ version: 1, kit: null, parts: [{ label: "Base gasket", quantity: 2, unitMinor: 1250 }] }), own: staff(200), other: staffOther },
   { method: "POST", path: "/api/v1/jobs/{id}/share", row: once("to share", jobRow({})), own: staff(200), other: staffOther },
   { method: "POST", path: "/api/v1/jobs/{id}/questions", row: hiddenJob, as: HIDDEN, body: () => ({ text: "Will the kit clear the transfer ports?" }), own: jobMember(201, 404), other: notFound },
   { method: "POST", path: "/api/v1/jobs/{id}/questions", row: sharedJob, as: SHARED, body: () => ({ text: "Will the kit clear the transfer ports?" }), own: member(201), other: notFound },
@@ -293,6 +296,7 @@ const MATRIX: RouteCase[] = [
   { method: "POST", path: "/api/v1/cases/{id}/photos", entity: "cases", body: () => ({ contentType: "image/png", sizeBytes: PNG.length }), own: staff(201), other: staffOther },
   { method: "GET", path: "/api/v1/cases/{id}/photos/{photoId}", row: casePhoto, own: staff(303), other: staffOther },
   { method: "POST", path: "/api/v1/cases/{id}/photos/{photoId}/complete", row: casePhoto, own: staff(200), other: staffOther },
+  { method: "PATCH", path: "/api/v1/cases/{id}/photos/{photoId}", row: casePhoto, body: () => ({ reference: null }), own: staff(200), other: staffOther },
   { method: "DELETE", path: "/api/v1/cases/{id}/photos/{photoId}", row: newCasePhoto, mutates: true, own: staff(204), other: staffOther },
   ...library("kits"),
   ...library("rigs"),

@@ -36,10 +36,11 @@ import {
   QuestionSchema,
   ReadingsBodySchema,
 } from "@/model/schemas";
-import { CasePhotoRequestSchema } from "../cases/[id]/photos/schema";
+import { QuotePutSchema } from "@/model/quote";
+import { CasePhotoPatchSchema, CasePhotoRequestSchema } from "../cases/[id]/photos/schema";
 import { CheckoutSchema, MePatchSchema, MeSchema, NewShopSchema, ShopsSchema } from "./account-schemas";
 
-type Method = "get" | "post" | "patch" | "delete";
+type Method = "get" | "post" | "put" | "patch" | "delete";
 export type Operation = {
   method: Method;
   path: string;
@@ -116,6 +117,7 @@ function casePhotoOperations(): Operation[] {
     { method: "get", path: photos, summary: "The case profile's deck photos with short-lived download addresses, newest first", roles: "staff", ok: { status: 200, schema: anyObject, description: "The photos" }, errors: [401, 403, 404] },
     { method: "post", path: photos, summary: "Asks for an upload address for a new deck photo", roles: "staff", body: CasePhotoRequestSchema, ok: { status: 201, schema: anyObject, description: "Where to upload" }, errors: [400, 401, 403, 404, 415, 503] },
     { method: "get", path: `${photos}/{photoId}`, summary: "Redirects to a short-lived address of the photo", roles: "staff", ok: { status: 303, description: "To the photo" }, errors: [401, 403, 404] },
+    { method: "patch", path: `${photos}/{photoId}`, summary: "Sets or clears the photo's reference points (two points and a distance, or a measured rectangle)", roles: "staff", body: CasePhotoPatchSchema, ok: { status: 200, schema: anyObject, description: "The photo" }, errors: [400, 401, 403, 404, 422] },
     { method: "delete", path: `${photos}/{photoId}`, summary: "Removes the photo and its file", roles: "staff", ok: { status: 204, description: "Removed" }, errors: [401, 403, 404] },
     { method: "post", path: `${photos}/{photoId}/complete`, summary: "Checks the uploaded file (its type by its bytes, its size) and keeps it", roles: "staff", ok: { status: 200, schema: anyObject, description: "Kept" }, errors: [401, 403, 404, 409, 415] },
   ];
@@ -142,6 +144,8 @@ function jobOperations(): Operation[] {
     { method: "patch", path: job, summary: "Changes a job; the body names the version it was read at", roles: "staff", body: JobPatchSchema, ok: ok(200, "Changed"), errors: [400, 401, 403, 404, 409, 413, 415] },
     { method: "post", path: `${job}/move`, summary: "Moves a job to another status (the customer only approves a shared plan)", roles: "job", body: JobMoveSchema, ok: ok(200, "Moved"), errors: [400, 401, 403, 404, 409, 415] },
     { method: "post", path: `${job}/readings`, summary: "Records the readings after the cut and checks them against the plan", roles: "staff", body: ReadingsBodySchema, ok: ok(201, "Recorded"), errors: [400, 401, 403, 404, 409, 415] },
+    { method: "get", path: `${job}/quote`, summary: "The job's quote with its figures (staff also get the shop's rates and the library's kit price)", roles: "job", ok: ok(200, "The quote"), errors: [401, 404] },
+    { method: "put", path: `${job}/quote`, summary: "Writes the job's quote; fixed once approved with the plan", roles: "staff", body: QuotePutSchema, ok: ok(200, "Written"), errors: [400, 401, 403, 404, 409, 413, 415] },
     { method: "post", path: `${job}/share`, summary: "Shares the plan with the customer (inviting them into the shop when needed)", roles: "staff", ok: ok(200, "Shared"), errors: [401, 403, 404, 409, 415, 502] },
     { method: "post", path: `${job}/questions`, summary: "Asks the shop a question about the job", roles: "job", body: QuestionSchema, ok: ok(201, "Asked"), errors: [400, 401, 404, 415] },
     { method: "get", path: `${job}/photos`, summary: "The job's photos the caller may see", roles: "job", ok: ok(200, "The photos"), errors: [401, 404] },

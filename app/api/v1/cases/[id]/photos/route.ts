@@ -3,7 +3,7 @@ import { handle, parseWith, readJson } from "@/app/api/_lib/respond";
 import { requireCaller } from "@/db/access";
 import { listCasePhotos, requestCasePhotoUpload } from "@/db/case-photos";
 import { SHOP_STAFF } from "@/db/roles";
-import { CasePhotoRequestSchema } from "./schema";
+import { CasePhotoRequestSchema } from "@/model/schemas/case-photos";
 
 type Ctx = { params: Promise<{ id: string }> };
 
