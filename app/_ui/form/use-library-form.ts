@@ -35,11 +35,17 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   fieldPath?: (serverPath: string) => string;
   /** Fields kept outside react-hook-form (the shapes in their own store): merged into the values that are validated and saved. */
   outside?: OutsideValues<FV>;
+  /**
+   * Runs after each successful save, before the form moves on (e.g. keeps a photo chosen before the first
+   * save). It never throws: it answers where a new row's form goes instead of the list, or the notice to show.
+   */
+  afterSave?: (row: { id: string; name: string }, created: boolean) => Promise<{ goTo?: string; notice?: Notice } | void>;
 }) {
   const router = useRouter();
   const [units, setUnitsState] = useState<LengthUnits>(opts.initialUnits);
   const [notice, setNotice] = useState<Notice>(null);
   const [version, setVersion] = useState(opts.version);
+  const [finishing, setFinishing] = useState(false);
   const save = useSaveLibraryRow(opts.kind, opts.id);
   const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, (v, read) => opts.toCore(opts.outside ? opts.outside.merge(v) : v, read)));
   const all = () => (opts.outside ? opts.outside.merge(form.getValues()) : form.getValues());
@@ -80,8 +86,10 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
         setVersion(row.version);
         form.reset(form.getValues());
         opts.outside?.saved();
-        if (!opts.id) router.push(`/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
-        else setNotice({ tone: "ok", text: `Saved “${row.name}”.` });
+        setFinishing(Boolean(opts.afterSave));
+        const after = opts.afterSave ? await opts.afterSave(row, !opts.id).finally(() => setFinishing(false)) : undefined;
+        if (!opts.id) router.push(after?.goTo ?? `/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
+        else setNotice(after?.notice ?? { tone: "ok", text: `Saved “${row.name}”.` });
       } catch (error) {
         if (error instanceof ApiFailure) {
           for (const [path, message] of Object.entries(error.fields ?? {})) {
@@ -96,5 +104,5 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
     () => setNotice({ tone: "error", text: "Some fields need attention (marked in red); nothing was saved and nothing was lost." }),
   );
 
-  return { form, units, setUnits, notice, onSubmit, busy: save.isPending };
+  return { form, units, setUnits, notice, onSubmit, busy: save.isPending || finishing };
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import { CaseProfileSchema, type LengthUnits } from "@/geometry";
-import { useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider } from "react-hook-form";
 import { useStore } from "zustand";
 import { FormNotice } from "../../../_ui/field";
@@ -15,6 +15,9 @@ import { TextField } from "@/app/_ui/form/text-field";
 import { UnitToggle } from "@/app/_ui/form/unit-toggle";
 import { convertLengthTexts } from "@/app/_ui/form/units-text";
 import { useLibraryForm, type OutsideValues } from "@/app/_ui/form/use-library-form";
+import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
+import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
+import { CasePhotoContext, keepCasePhoto, keepReference, latestCasePhoto, leaveNoticeFor, takeNoticeFor, type CasePhotoLink } from "./case-photo";
 import { FormSection } from "./form-section";
 import { CasePlan } from "./shapes/case-plan";
 import { MEASURES } from "./shapes/measure-panel";
@@ -36,6 +39,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
     () => ({ merge: (v) => mergeCase(v, store.getState().doc), switchUnits: (to) => switchUnits(store, to), saved: () => void (saved.current = store.getState().doc) }),
     [store],
   );
+  const photo = useCasePhoto(row);
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "cases",
     id: row?.id ?? null,
@@ -54,6 +58,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
     },
     fieldPath: (p) => p.replace(/^data\./, ""),
     outside,
+    afterSave: photo.afterSave,
   });
   const shapesDirty = useStore(store, (s) => s.doc !== saved.current);
   const scope = useRef<HTMLFormElement>(null);
@@ -72,6 +77,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
           <UnitToggle units={units} onChange={setUnits} />
         </div>
         {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+        {photo.notice && !notice ? <FormNotice tone="error">{photo.notice}</FormNotice> : null}
         <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
           <div className="flex min-w-0 flex-col gap-6">
             <FormSection title="Name">
@@ -125,13 +131,86 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
               <TextField<CaseFormValues> name="cylinders" label="Cylinders" numeric />
               <TextField<CaseFormValues> name="densityGPerCm3" label="Case alloy density" unit="g/cm³" numeric hint="Blank: 2.67 g/cm³, a common cast aluminium." />
             </FormSection>
+            <FormSection title="Crank chamber (optional)">
+              <p className="text-sm text-ink-2 md:col-span-2">
+                With all three lengths the study checks how close the skirt comes to the crank webs; leave all three empty to skip that check.
+              </p>
+              <TextField<CaseFormValues> name="crank.deckToAxisMm" label="Deck to crank axis" unit={units} numeric hint="From the deck face down to the crankshaft's centre line." />
+              <TextField<CaseFormValues> name="crank.webRadiusMm" label="Crank web radius" unit={units} numeric hint="Outer radius of the webs about the crank axis." />
+              <TextField<CaseFormValues> name="crank.webSpanMm" label="Crank web span" unit={units} numeric hint="Across both webs along the crank axis, outer face to outer face." />
+            </FormSection>
           </div>
           <div className="min-w-0">
-            <CasePlan store={store} units={units} scope={scope} onCommit={validate} caseId={row?.id ?? null} />
+            <CasePhotoContext.Provider value={photo.link}>
+              <CasePlan store={store} units={units} scope={scope} onCommit={validate} caseId={row?.id ?? null} />
+            </CasePhotoContext.Provider>
           </div>
         </div>
-        <SaveBar busy={busy} isNew={!row} backHref="/library?kind=cases" dirty={form.formState.isDirty || shapesDirty} />
+        <SaveBar busy={busy} isNew={!row} backHref="/library?kind=cases" dirty={form.formState.isDirty || shapesDirty || photo.dirty} />
       </form>
     </FormProvider>
   );
+}
+
+/**
+ * The deck photo's part of the case form: a photo chosen before the first save is kept right after it;
+ * the reference points are restored from the kept photo and saved with it at each save. When keeping
+ * fails the case stays saved and the form says what was not kept and why.
+ */
+function useCasePhoto(row: CaseRow | null) {
+  const caseId = row?.id ?? null;
+  const chosen = useRef<ChosenPhoto | null>(null);
+  const reference = useRef<PhotoReference | null>(null);
+  const keptKey = useRef("null");
+  const [dirty, setDirty] = useState(false);
+  const [initialReference, setInitialReference] = useState<PhotoReference | undefined>(undefined);
+  const [notice, setNotice] = useState<string | null>(null);
+
+  useEffect(() => {
+    if (!caseId) return;
+    let live = true;
+    // A note the first save left (the photo it could not keep) is shown once, with what the store says now.
+    const left = takeNoticeFor(caseId);
+    void latestCasePhoto(caseId).then((r) => {
+      if (!live) return;
+      if (left) setNotice(left);
+      if (!r.ok) setNotice(`The kept photo's reference points could not be read: ${r.message}`);
+      else if (r.photo?.reference) {
+        keptKey.current = JSON.stringify(r.photo.reference);
+        reference.current = r.photo.reference;
+        setInitialReference(r.photo.reference);
+      }
+    });
+    return () => {
+      live = false;
+    };
+  }, [caseId]);
+
+  const onReferenceChange = useCallback((ref: PhotoReference | null) => {
+    reference.current = ref;
+    setDirty(JSON.stringify(ref) !== keptKey.current);
+  }, []);
+  const onPhotoChosen = useCallback((p: ChosenPhoto) => {
+    chosen.current = p;
+    setDirty(true);
+  }, []);
+  const link = useMemo<CasePhotoLink>(() => ({ initialReference, onReferenceChange, onPhotoChosen }), [initialReference, onReferenceChange, onPhotoChosen]);
+
+  const afterSave = async (saved: { id: string; name: string }, created: boolean) => {
+    if (created) {
+      const photo = chosen.current;
+      if (!photo) return;
+      const kept = await keepCasePhoto(saved.id, photo, reference.current);
+      if (kept.ok) return;
+      leaveNoticeFor(saved.id, `Saved “${saved.name}”, but the photo was not kept: ${kept.message} Choose it again below to keep it with the case profile.`);
+      return { goTo: `/library/cases/${saved.id}` };
+    }
+    if (JSON.stringify(reference.current) === keptKey.current) return;
+    const kept = await keepReference(saved.id, reference.current);
+    if (!kept.ok) return { notice: { tone: "error" as const, text: `Saved “${saved.name}”, but the photo's reference points were not kept: ${kept.message}` } };
+    keptKey.current = JSON.stringify(reference.current);
+    setDirty(false);
+  };
+
+  return { link, afterSave, dirty, notice };
 }

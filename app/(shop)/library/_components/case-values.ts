@@ -22,6 +22,8 @@ export type CaseFormValues = {
   strokeMm: string;
   cylinders: string;
   densityGPerCm3: string;
+  /** The crank chamber, optional: all three lengths or none. */
+  crank: { deckToAxisMm: string; webRadiusMm: string; webSpanMm: string };
   /** The measurements the shapes were drawn from (kept in the shape store, saved with the data). */
   capture?: Capture;
 };
@@ -64,7 +66,25 @@ export function caseDefaults(row: CaseRow | null, units: LengthUnits): CaseFormV
     strokeMm: lengthText(d?.strokeMm, units),
     cylinders: numberText(d?.cylinders ?? 1),
     densityGPerCm3: numberText(d?.densityGPerCm3),
+    crank: {
+      deckToAxisMm: lengthText(d?.crank?.deckToAxisMm, units),
+      webRadiusMm: lengthText(d?.crank?.webRadiusMm, units),
+      webSpanMm: lengthText(d?.crank?.webSpanMm, units),
+    },
   };
+}
+
+const CRANK_KEYS = ["deckToAxisMm", "webRadiusMm", "webSpanMm"] as const;
+
+/** The crank chamber as the core reads it: all three lengths, or none (then the crank check is left out). */
+function readCrank(crank: CaseFormValues["crank"] | undefined, read: FormReader): { deckToAxisMm?: number; webRadiusMm?: number; webSpanMm?: number } | undefined {
+  const texts = crank ?? { deckToAxisMm: "", webRadiusMm: "", webSpanMm: "" };
+  const filled = CRANK_KEYS.filter((k) => (texts[k] ?? "").trim() !== "");
+  if (filled.length === 0) return undefined;
+  for (const k of CRANK_KEYS) {
+    if (!filled.includes(k)) read.issues.push({ path: ["crank", k], message: "fill in all three crank chamber lengths, or leave all three empty" });
+  }
+  return Object.fromEntries(CRANK_KEYS.map((k) => [k, read.length(texts[k], ["crank", k])]));
 }
 
 /** The round mouth's diameter: the smallest of the readings that can be read (the worst case for the skirt). */
@@ -94,6 +114,7 @@ export function caseToCore(v: CaseFormValues, read: FormReader): unknown {
     strokeMm: read.length(v.strokeMm, ["strokeMm"]),
     cylinders: read.number(v.cylinders, ["cylinders"]) ?? 1,
     densityGPerCm3: read.number(v.densityGPerCm3, ["densityGPerCm3"]),
+    crank: readCrank(v.crank, read),
     ...(v.capture && Object.keys(v.capture).length ? { capture: v.capture } : {}),
   };
 }

@@ -1,0 +1,87 @@
+"use client";
+
+import { createContext, useContext } from "react";
+import { callApi } from "@/app/_ui/api-client";
+import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
+import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
+
+// The case form's side of a deck photo: the photo chosen before the case's first save (kept at that save),
+// and the reference points, restored from the kept photo and saved with it when the case is saved.
+
+/** What the case form hands the photo trace (through CaptureSources, which the plan mounts). */
+export type CasePhotoLink = {
+  initialReference?: PhotoReference;
+  onReferenceChange: (ref: PhotoReference | null) => void;
+  onPhotoChosen: (photo: ChosenPhoto) => void;
+};
+
+export const CasePhotoContext = createContext<CasePhotoLink | null>(null);
+
+/** The case form's photo link, or null outside a case form (a kit's gasket). */
+export function useCasePhotoLink(): CasePhotoLink | null {
+  return useContext(CasePhotoContext);
+}
+
+type StoredPhoto = { id: string; state: string; reference: PhotoReference | null };
+
+/** The case profile's latest kept photo (the one the trace shows), null when none, or why it could not be read. */
+export async function latestCasePhoto(caseId: string): Promise<{ ok: true; photo: StoredPhoto | null } | { ok: false; message: string }> {
+  const res = await callApi<{ items: StoredPhoto[] }>(`/api/v1/cases/${caseId}/photos`);
+  if (!res.ok) return { ok: false, message: res.error.message };
+  return { ok: true, photo: res.data.items.find((p) => p.state === "ready") ?? null };
+}
+
+/** The first message of a refusal: a field's reason when there is one, else the refusal's own words. */
+function reason(error: { message: string; fields?: Record<string, string> }): string {
+  const first = error.fields ? Object.values(error.fields)[0] : undefined;
+  return first ?? error.message;
+}
+
+/** Keeps a chosen photo with a saved case profile: asks for an upload address, sends the file, has it checked. */
+export async function keepCasePhoto(caseId: string, photo: ChosenPhoto, reference: PhotoReference | null): Promise<{ ok: true; id: string } | { ok: false; message: string }> {
+  const start = await callApi<{ id: string; uploadUrl: string; headers: Record<string, string> }>(`/api/v1/cases/${caseId}/photos`, {
+    body: { contentType: photo.contentType, sizeBytes: photo.file.size, widthPx: photo.widthPx, heightPx: photo.heightPx, ...(reference ? { reference } : {}) },
+  });
+  if (!start.ok) return { ok: false, message: reason(start.error) };
+  let put: Response;
+  try {
+    put = await fetch(start.data.uploadUrl, { method: "PUT", headers: start.data.headers, body: photo.file });
+  } catch {
+    return { ok: false, message: "The photo store could not be reached." };
+  }
+  if (!put.ok) return { ok: false, message: `The photo store refused the upload (${put.status}).` };
+  const done = await callApi(`/api/v1/cases/${caseId}/photos/${start.data.id}/complete`, { body: {} });
+  if (!done.ok) return { ok: false, message: done.error.message };
+  return { ok: true, id: start.data.id };
+}
+
+/** Saves the reference points with the case profile's latest kept photo; nothing to do without one. */
+export async function keepReference(caseId: string, reference: PhotoReference | null): Promise<{ ok: true } | { ok: false; message: string }> {
+  const latest = await latestCasePhoto(caseId);
+  if (!latest.ok) return latest;
+  if (!latest.photo) return { ok: true };
+  const res = await callApi(`/api/v1/cases/${caseId}/photos/${latest.photo.id}`, { method: "PATCH", body: { reference } });
+  return res.ok ? { ok: true } : { ok: false, message: reason(res.error) };
+}
+
+/** A message for the case's edit form after the first save moved there (the new form is gone by then). */
+export function leaveNoticeFor(caseId: string, text: string) {
+  try {
+    sessionStorage.setItem(`case-form-notice:${caseId}`, text);
+  } catch {
+    // Storage refused (private mode, full): the case is saved either way; its form then opens without the note.
+  }
+}
+
+/** Takes the message left for this case's form, once. */
+export function takeNoticeFor(caseId: string): string | null {
+  try {
+    const key = `case-form-notice:${caseId}`;
+    const text = sessionStorage.getItem(key);
+    sessionStorage.removeItem(key);
+    return text;
+  } catch {
+    // Storage unreadable: there is no note to show.
+    return null;
+  }
+}
