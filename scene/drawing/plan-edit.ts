@@ -2,7 +2,7 @@ import type { LengthUnits, Vec2 } from "@/geometry";
 import type { ShapeIssue, ShapeOutline } from "@/geometry/shapes";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { bounds, outlineRing } from "../outline";
-import { deckLayer, flip, mouthLayer, pocketLayer, studHoleLayer } from "./plan";
+import { deckLayer, flip, mouthLayer, path, pocketLayer, studHoleLayer } from "./plan";
 import { INK, el, hdim, n, sheet, text, vdim, type Drawing } from "./svg";
 
 // The plan at the deck of a profile being entered: the same layers as the study's plan, with a handle
@@ -168,4 +168,56 @@ export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: F
   body.push(el("circle", { cx: 0, cy: 0, r: hr * 0.6, fill: INK.ink2 }));
   const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, w, h, body.join("") + edges.join("") + handles.join("") + notes.join(""), "group");
   return { ...d, frame: f };
+}
+
+/** A change of one element of the drawn plan: the handle of a point, the shape it belongs to, or a stud hole's centre cross. */
+export type DragPatch = { key: string; part: "handle" | "shape" | "cross"; attrs: Record<string, string> };
+
+/**
+ * What changes in the drawing while the point `key` is dragged to `atMm` (already snapped): only the
+ * dragged handle and the outline (or stud hole) it belongs to, so a drag redraws two elements rather than
+ * the whole plan. The labels and dimensions follow when the drag is released and the plan is drawn again.
+ */
+export function dragPatch(s: EditShapes, key: string, atMm: Vec2, units: LengthUnits, words = WORDS): DragPatch[] {
+  const [hx, hy] = flip(atMm);
+  const handle = (label: string, at: Vec2): DragPatch => ({
+    key,
+    part: "handle",
+    attrs: { cx: n(flip(at)[0]), cy: n(flip(at)[1]), "aria-label": `${label}: x ${lengthLabel(at[0], units)}, y ${lengthLabel(at[1], units)}` },
+  });
+  const stud = /^studs\.(\d+)$/.exec(key);
+  if (stud) {
+    const st = s.studs[Number(stud[1])];
+    if (!st) return [];
+    const r = (s.studHoleDiameterMm ?? 0) / 2;
+    const out: DragPatch[] = [
+      handle(`stud ${st.label || Number(stud[1]) + 1}`, atMm),
+      { key, part: "shape", attrs: { cx: n(hx), cy: n(hy) } },
+    ];
+    if (r > 0) out.push({ key, part: "cross", attrs: { d: `M${hx - r - 1} ${hy}H${hx + r + 1}M${hx} ${hy - r - 1}V${hy + r + 1}` } });
+    return out;
+  }
+  const m = /^(deck|mouth|pockets\.(\d+)):(\d+|edge)$/.exec(key);
+  if (!m) return [];
+  const shape = m[1];
+  const pocket = m[2] === undefined ? null : Number(m[2]);
+  const outline = shape === "deck" ? s.deck : shape === "mouth" ? s.mouth : (s.pockets[pocket ?? -1]?.outline ?? null);
+  if (!outline) return [];
+  const word = shape === "deck" ? words.deck : shape === "mouth" ? words.mouth : `${words.pocket} ${(pocket ?? 0) + 1}`;
+  if (m[3] === "edge") {
+    if (outline.kind !== "circle") return [];
+    const c = outline.centerMm ?? [0, 0];
+    const d = 2 * Math.hypot(atMm[0] - c[0], atMm[1] - c[1]);
+    if (!(d > 0)) return [];
+    const moved = { ...outline, diameterMm: d };
+    return [
+      handle(`${word} edge (diameter ${diameterLabel(d, units)})`, [c[0] + d / 2, c[1]]),
+      { key: shape, part: "shape", attrs: { d: path(outlineRing(moved)) } },
+    ];
+  }
+  if (outline.kind !== "polygon") return [];
+  const i = Number(m[3]);
+  if (i >= outline.pointsMm.length) return [];
+  const moved = { ...outline, pointsMm: outline.pointsMm.map((p, j): Vec2 => (j === i ? [atMm[0], atMm[1]] : p)) };
+  return [handle(`${word} corner ${i + 1}`, atMm), { key: shape, part: "shape", attrs: { d: path(outlineRing(moved)) } }];
 }

@@ -1,23 +1,30 @@
 "use client";
 
-import { useDrag } from "@use-gesture/react";
 import { useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
-import { flushSync } from "react-dom";
 import { useStore } from "zustand";
+import { MM_PER_INCH } from "@/geometry/units";
 import { editDrawing, type Frame } from "@/scene/drawing/plan-edit";
+import { useZoom, ZoomBar } from "@/app/_ui/capture/use-zoom";
+import { windowOf, type View } from "@/app/_ui/capture/zoom";
+import { usePlanDrag } from "./plan-drag";
 import { docIssues, docShapes, type DocExtras } from "./read-doc";
-import { gesture, SNAP, type ShapeStore } from "./shape-store";
+import { SNAP, type ShapeStore } from "./shape-store";
 
 export type ShapeWords = { deck: string; mouth: string; pocket: string };
 
-type Grip = { key: string; kind: string; offset: [number, number]; end?: () => void } | null;
-
 const ARROWS: Record<string, [number, number]> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, 1], ArrowDown: [0, -1] };
+
+/** The part of the frame a view shows, as an SVG viewBox. */
+const viewBoxOf = (f: Frame, v: View) => {
+  const w = windowOf(v), fw = f.maxX - f.minX, fh = f.maxY - f.minY;
+  return `${f.minX + w.left * fw} ${f.minY + w.top * fh} ${fw * w.size} ${fh * w.size}`;
+};
 
 /**
  * The plan at the deck of the shapes being entered, drawn by the study's plan code, with every corner,
  * stud and circle edge draggable (snapped to the grid; Alt for free movement), an edge clicked to add a
  * corner, and the arrow keys nudging the focused point (Shift: ten steps; Delete removes a corner).
+ * The wheel, a pinch, the buttons and the +, − and 0 keys zoom it; a drag on the empty drawing pans it.
  */
 export function PlanEditor({
   store,
@@ -53,11 +60,14 @@ export function PlanEditor({
   );
   const host = useRef<HTMLDivElement>(null);
   const focusKey = useRef<string | null>(null);
-  // What the pointer went down on: the gesture itself starts a few pixels later, perhaps over something else.
   const downOn = useRef<Element | null>(null);
   const html = useMemo(() => ({ __html: drawing.svg }), [drawing.svg]);
+  const zoom = useZoom(host);
 
-  // The markup is replaced on every change; a point that had the focus gets it back.
+  // The markup is replaced on every change: the view is set on it again, and a point that had the focus gets it back.
+  useLayoutEffect(() => {
+    host.current?.querySelector("svg")?.setAttribute("viewBox", viewBoxOf(drawing.frame, zoom.view));
+  }, [drawing.svg, drawing.frame, zoom.view]);
   useLayoutEffect(() => {
     const key = focusKey.current;
     const active = document.activeElement;
@@ -66,65 +76,19 @@ export function PlanEditor({
     if (el && el !== active) el.focus({ preventScroll: true });
   }, [drawing.svg]);
 
-  const toMm = (clientX: number, clientY: number): [number, number] | null => {
-    const svg = host.current?.querySelector("svg");
-    const m = svg?.getScreenCTM();
-    if (!m) return null;
-    const p = new DOMPoint(clientX, clientY).matrixTransform(m.inverse());
-    return [p.x, -p.y];
-  };
-  // The drawing's y runs down: a handle at (cx, cy) stands for the point (cx, −cy) in mm.
+  const bind = usePlanDrag({ store, host, downOn, shapes, units, words, frame: drawing.frame, onGrab: (key) => void (focusKey.current = key), setFrame, onCommit, pan: zoom.pan });
   const pointOf = (el: Element): [number, number] => [Number(el.getAttribute("cx")), -Number(el.getAttribute("cy"))];
 
-  const bind = useDrag<PointerEvent>(
-    ({ first, last, tap, xy: [cx, cy], initial: [ix, iy], event, memo, altKey }) => {
-      let grip = memo as Grip;
-      if (first) {
-        const el = (downOn.current ?? (event.target as Element | null))?.closest?.("[data-kind]");
-        const key = el?.getAttribute("data-key");
-        const kind = el?.getAttribute("data-kind");
-        // The gesture starts once the pointer has moved past the tap threshold: measure from where it went down.
-        const at = toMm(ix, iy);
-        if (!el || !key || !kind || !at) return null;
-        if (kind === "edge") grip = { key, kind, offset: [0, 0] };
-        else {
-          const p = pointOf(el);
-          grip = { key, kind, offset: [p[0] - at[0], p[1] - at[1]], end: gesture(store).end };
-          focusKey.current = key;
-          setFrame(drawing.frame);
-          store.setState({ selected: key, hover: key });
-        }
-      }
-      if (!grip) return null;
-      if (grip.kind === "edge") {
-        if (last && tap) {
-          const [shape, after] = grip.key.split("~");
-          const at = toMm(cx, cy);
-          if (at) store.getState().act.insertCorner(shape, Number(after), at, !altKey);
-          onCommit();
-        }
-        return grip;
-      }
-      const at = toMm(cx, cy);
-      const g = grip;
-      // Rendered before the event returns, so the frame that follows the pointer shows the point where it is.
-      if (!tap && at && (!first || Math.hypot(cx - ix, cy - iy) > 0)) flushSync(() => store.getState().act.movePoint(g.key, [at[0] + g.offset[0], at[1] + g.offset[1]], !altKey));
-      if (last) {
-        grip.end?.();
-        setFrame(null);
-        onCommit();
-      }
-      return grip;
-    },
-    { pointer: { capture: false, keys: false }, filterTaps: true },
-  );
-
   const onKeyDown = (e: KeyboardEvent<HTMLDivElement>) => {
+    if (!e.ctrlKey && !e.metaKey && !e.altKey && zoom.onKey(e.key)) {
+      e.preventDefault();
+      return;
+    }
     const el = (e.target as Element).closest?.("[data-kind]");
     const key = el?.getAttribute("data-key");
     const kind = el?.getAttribute("data-kind");
     if (!el || !key || !kind || kind === "edge") return;
-    const step = SNAP[units] * (units === "in" ? 25.4 : 1) * (e.shiftKey ? 10 : 1);
+    const step = SNAP[units] * (units === "in" ? MM_PER_INCH : 1) * (e.shiftKey ? 10 : 1);
     const dir = ARROWS[e.key];
     const act = store.getState().act;
     if (dir) {
@@ -145,6 +109,7 @@ export function PlanEditor({
 
   return (
     <div className="flex flex-col gap-2">
+      <ZoomBar view={zoom.view} setView={zoom.setView} what="plan" />
       <div
         ref={host}
         {...bind()}
@@ -166,10 +131,10 @@ export function PlanEditor({
           if (!frame && store.getState().hover !== key) store.setState({ hover: key });
         }}
         onPointerLeave={() => !frame && store.setState({ hover: null })}
-        className="rounded-md border border-rule bg-white [&_[data-kind]]:touch-none [&_[data-kind=edge]]:cursor-copy [&_circle[data-kind]]:cursor-grab [&_svg]:h-auto [&_svg]:max-h-[70vh] [&_svg]:w-full [&_[data-kind]:focus-visible]:outline-2"
+        className="cursor-move overflow-hidden rounded-md border border-rule bg-white [&_[data-kind]]:touch-none [&_[data-kind=edge]]:cursor-copy [&_circle[data-kind]]:cursor-grab [&_svg]:h-auto [&_svg]:max-h-[70vh] [&_svg]:w-full [&_[data-kind]:focus-visible]:outline-2"
         dangerouslySetInnerHTML={html}
       />
-      <p className="text-xs text-ink-3">Drag a point (it snaps to {units === "in" ? "0.005 in" : "0.1 mm"}; hold Alt to place it freely), click an edge to add a corner; Tab to a point and use the arrow keys to nudge it (Shift: ten steps), Delete to remove a corner.</p>
+      <p className="text-xs text-ink-3">Drag a point (it snaps to {units === "in" ? "0.005 in" : "0.1 mm"}; hold Alt to place it freely), click an edge to add a corner; Tab to a point and use the arrow keys to nudge it (Shift: ten steps), Delete to remove a corner. The wheel, a pinch or +, − and 0 zoom; drag the empty drawing to move it.</p>
       {issues.length ? (
         <ul className="flex flex-col gap-1" aria-label="Problems with the shapes" data-testid="shape-issues">
           {issues.map((i) => (
