@@ -10,5 +10,7 @@ export default defineConfig({
     // Instrumented code on a shared 2-core machine runs several times slower than plain: the heaviest depth-stop
     // search needs more than vitest's default 5 s there.
     testTimeout: 60_000,
+    // The heaviest properties run at most 20 times per mutant (tests/geometry/runs.ts); the rest of the suite as is.
+    env: { MUTATION_PROPERTY_RUNS: "20" },
   },
 });

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { crankClearance, evaluateStudy } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
+import { propertyRuns } from "./runs";
 
 // Plain solid geometry, worked by hand here (no published source): the skirt's lower edge (radius r, depth p)
 // lies on a sphere of radius L = √(r² + h²) about the crank centre, h = d − p; the webs' rim corner lies at
@@ -59,7 +60,7 @@ describe("clearance between the skirt's lower edge and the swept crank webs", ()
         expect(least - got.clearanceMm).toBeLessThan(1e-3);
         expect(toWebs(got.atMm[0], got.atMm[1], p, c)).toBeCloseTo(got.clearanceMm, 6);
       }),
-      { numRuns: 200 },
+      { numRuns: propertyRuns(200) },
     );
   });
 

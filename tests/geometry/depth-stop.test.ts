@@ -4,6 +4,7 @@ import { type DepthStop, chooseDepthStop, depthStopWorkBound, searchDepthStop } 
 import { evaluateStudy } from "../../geometry/evaluate";
 import { BoringRigSchema, MAX_GROOVES, MAX_SHIMS_PER_SIZE, MAX_SHIM_SIZES, StudySchema } from "../../geometry/schema";
 import { roundStudyInput, testRig } from "./fixtures";
+import { propertyRuns } from "./runs";
 
 const TOL = 1e-9;
 
@@ -93,7 +94,7 @@ describe("depth stop search", () => {
         expect(got.travelMm).toBeCloseTo(want.travelMm, 9);
         if (got.reached) expectConsistent(got, wantedMm, rig);
       }),
-      { numRuns: 400 },
+      { numRuns: propertyRuns(400) },
     );
   });
 

@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { StudySchema, evaluateStudy, type Study } from "../../geometry/index";
 import { studyArb } from "./arbitraries";
 import { parse, roundStudyInput, testRig } from "./fixtures";
+import { propertyRuns } from "./runs";
 
 /** The study with the diameter and depth left out (the centring offset kept), so the core proposes each kit's cut. */
 const unplanned = (s: Study): Study => ({ ...s, cut: s.cut?.centerOffsetMm ? { centerOffsetMm: s.cut.centerOffsetMm } : undefined });
@@ -45,7 +46,7 @@ describe("each kit's least cut", () => {
           expect(proposed.kits[i].leastCut).toEqual(k.leastCut);
         });
       }),
-      { numRuns: 60 },
+      { numRuns: propertyRuns(60) },
     );
   });
 });

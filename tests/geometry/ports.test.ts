@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { type StudyInput, evaluateStudy, lineSpans, portSteps } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
+import { propertyRuns } from "./runs";
 
 // Hand-computed plane geometry (no published source). The passage is an arc slot about the bore axis: radii
 // 30 and 36 mm over ±15° about +x, its arcs flattened with a vertex every 7.5° (one on the x axis). The port
@@ -91,7 +92,7 @@ describe("the matched passage in the study result", () => {
         // The port's inner edge lies at x = inner on the x axis: the matched wall is at most inner − R.
         expect(k.ports[0].matchedWallMm!).toBeLessThanOrEqual(inner - cutD / 2 + 1e-9);
       }),
-      { numRuns: 60 },
+      { numRuns: propertyRuns(60) },
     );
   });
 

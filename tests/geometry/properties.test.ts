@@ -2,9 +2,10 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { DEFAULT_LIMITS, type StudyInput, StudyResultSchema, StudySchema, evaluateStudy } from "../../geometry/index";
 import { studyArb } from "./arbitraries";
+import { propertyRuns } from "./runs";
 
 // 200 runs per property; on a failure fast-check throws with the seed and path to replay it (`{ seed, path }`).
-const RUNS = 200;
+const RUNS = propertyRuns(200);
 const DEFAULT_LENGTH_LIMITS = {
   minRadialClearanceMm: DEFAULT_LIMITS.minRadialClearanceMm,
   minDepthClearanceMm: DEFAULT_LIMITS.minDepthClearanceMm,
