@@ -3,6 +3,7 @@ import { fitState, interferenceRegions } from "../fit";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { bounds, outlineRing } from "../outline";
 import { portsLayer } from "./ports";
+import { dashOf, FIT, patternId } from "@/model/palette";
 import { INK, type Attrs, type Drawing, el, hdim, vdim, leader, ringPath, sheet, text, textWidth } from "./svg";
 
 // Plan view at the deck, to scale (1 unit = 1 mm, y up as in the core's frame), drawn from the core's result.
@@ -22,9 +23,9 @@ export function deckLayer(ring: readonly Vec2[], a: Attrs = {}): string {
   return el("path", { d: path(ring), fill: INK.paper2, stroke: INK.ink, "stroke-width": 0.4, ...a });
 }
 
-/** A pocket or passage; dashed when it starts below the deck. */
+/** A pocket or passage in the palette's passage colour, its outline dotted; dashed longer when it starts below the deck. */
 export function pocketLayer(ring: readonly Vec2[], startDepthMm: number, a: Attrs = {}): string {
-  return el("path", { d: path(ring), fill: INK.paper, stroke: INK.ink2, "stroke-width": 0.25, "stroke-dasharray": startDepthMm > 0 ? "1.2 0.8" : undefined, ...a });
+  return el("path", { d: path(ring), fill: INK.passageSoft, stroke: INK.passage, "stroke-width": 0.3, "stroke-dasharray": startDepthMm > 0 ? "1.2 0.8" : dashOf(FIT.passage.shape), "data-layer": "passage", ...a });
 }
 
 /** The mouth opening. */
@@ -70,13 +71,20 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
   body.push(mouthLayer(outlineRing(cs.mouth.outline)));
   for (const s of cs.studs) body.push(studHoleLayer(s.positionMm, cs.studHoleDiameterMm / 2));
   const band = interferenceRegions(study, k)[0];
-  if (band && band.z0 === 0) for (const r of band.regions) body.push(el("path", { d: path(r.outer) + r.holes.map(path).join(""), fill: INK.interfere, "fill-opacity": 0.55, "fill-rule": "evenodd" }));
+  // Interference: solid red, cross-hatched over it so it reads in black and white.
+  if (band && band.z0 === 0) {
+    for (const r of band.regions) {
+      const d = path(r.outer) + r.holes.map(path).join("");
+      body.push(el("path", { d, fill: INK.interfere, "fill-opacity": 0.45, "fill-rule": "evenodd", "data-layer": "interference" }));
+      body.push(el("path", { d, fill: `url(#${patternId(FIT.interfere)})`, "fill-rule": "evenodd" }));
+    }
+  }
 
   const sc = flip(k.skirt.centerMm);
   const sr = k.skirt.diameterMm / 2;
   if (k.cut) {
     const cc = flip(k.cut.centerAtDeckMm);
-    body.push(el("circle", { cx: cc[0], cy: cc[1], r: k.cut.diameterMm / 2, fill: INK.accent, "fill-opacity": 0.08, stroke: INK.accent, "stroke-width": 0.35, "stroke-dasharray": "2 1" }));
+    body.push(el("circle", { cx: cc[0], cy: cc[1], r: k.cut.diameterMm / 2, fill: INK.counterbore, "fill-opacity": 0.08, stroke: INK.counterbore, "stroke-width": 0.35, "stroke-dasharray": dashOf(FIT.counterbore.shape), "data-layer": "counterbore" }));
   }
   body.push(el("circle", { cx: sc[0], cy: sc[1], r: sr, fill: "none", stroke: color, "stroke-width": 0.5 }));
   body.push(el("path", { d: `M${sc[0] - 4} ${sc[1]}H${sc[0] + 4}M${sc[0]} ${sc[1] - 4}V${sc[1] + 4}`, stroke: INK.ink2, "stroke-width": 0.15 }));
@@ -89,7 +97,7 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
     const y = (up ? -b.maxY + fs * 1.6 * row : -b.minY - fs * 1.6 * row);
     body.push(leader(from, [outerX(right), y], label, fs, col));
   };
-  if (k.cut) lead(k.cut.diameterMm / 2, 68, `cut ${diameterLabel(k.cut.diameterMm, units)}`, INK.accent, 1);
+  if (k.cut) lead(k.cut.diameterMm / 2, 68, `cut ${diameterLabel(k.cut.diameterMm, units)}`, INK.counterbore, 1);
   lead(sr, 112, `skirt ${diameterLabel(k.skirt.diameterMm, units)}`, color, 1);
   if (cs.mouth.outline.kind === "circle") lead(cs.mouth.outline.diameterMm / 2, 250, `mouth ${diameterLabel(cs.mouth.outline.diameterMm, units)}`, INK.ink, 1);
   else lead(0, 250, "mouth (outline as profiled)", INK.ink, 1);
@@ -97,8 +105,9 @@ export function planDrawing(study: Study, result: StudyResult, kitIndex: number,
   const w = k.thinnestWall;
   if (w && k.cut) {
     const p = flip(w.cutPointMm), q = flip(w.atMm);
-    const wc = w.ok ? INK.ink : INK.interfere;
-    body.push(el("line", { x1: p[0], y1: p[1], x2: q[0], y2: q[1], stroke: wc, "stroke-width": 0.6 }));
+    // A wall below the minimum: the palette's colour and a thick dashed mark.
+    const wc = w.ok ? INK.ink : INK.wallLow;
+    body.push(el("line", { x1: p[0], y1: p[1], x2: q[0], y2: q[1], stroke: wc, "stroke-width": w.ok ? 0.6 : 1.1, "stroke-dasharray": w.ok ? undefined : dashOf(FIT.wallLow.shape), "data-layer": w.ok ? "wall" : "wall-low" }));
     const right = q[0] >= sc[0];
     const to: [number, number] = [outerX(right), -b.minY + fs * 2.2];
     body.push(leader(q, to, `thinnest wall ${lengthLabel(w.minWallMm, units)}`, fs, wc));

@@ -1,6 +1,7 @@
 import type { KitResult, LengthUnits, Study } from "@/geometry";
 import { lengthLabel } from "@/model/units";
 import { outlineRing } from "../outline";
+import { dashOf, FIT } from "@/model/palette";
 import { INK, el, ringPath, text } from "./svg";
 
 // The port overlay on the plan at the deck: the kit's base-gasket port windows drawn over the case's passages,
@@ -23,7 +24,8 @@ export function portCaption(p: KitResult["ports"][number], units: LengthUnits): 
 
 /**
  * The SVG markup of the kit's port windows in the plan's frame (y flipped to the drawing's, 1 unit = 1 mm):
- * each window outlined dashed, in the warning colour where the matched passage would leave too little wall,
+ * each window outlined dash-dotted in the palette's port colour, or in its wall-below-minimum colour where the
+ * matched passage would leave too little wall,
  * with its label at its centroid. Empty when the kit has no base gasket.
  */
 export function portsLayer(study: Study, kitIndex: number, result: KitResult, fontMm: number): string {
@@ -31,9 +33,9 @@ export function portsLayer(study: Study, kitIndex: number, result: KitResult, fo
   const out: string[] = [];
   for (const w of windows) {
     const r = result.ports.find((p) => p.portLabel === w.label);
-    const color = r?.ok === false ? INK.interfere : INK.accent;
+    const color = r?.ok === false ? INK.wallLow : INK.port;
     const ring = outlineRing(w.outline).map(([x, y]) => [x, -y] as const);
-    out.push(el("path", { d: ringPath(ring), fill: color, "fill-opacity": 0.12, stroke: color, "stroke-width": 0.3, "stroke-dasharray": "0.8 0.5", "data-port": w.label }));
+    out.push(el("path", { d: ringPath(ring), fill: color, "fill-opacity": 0.12, stroke: color, "stroke-width": 0.35, "stroke-dasharray": dashOf(FIT.port.shape), "data-port": w.label }));
     if (r) out.push(text(r.centroidMm[0], -r.centroidMm[1] + fontMm * 0.3, w.label, fontMm * 0.7, { "text-anchor": "middle", fill: color }));
   }
   return out.length ? el("g", { "aria-label": "port windows of the base gasket" }, out.join("")) : "";

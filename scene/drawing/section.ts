@@ -3,10 +3,12 @@ import { FLANGE_DRAWN_MM, fitState, flangeRadiusMm, interferenceRegions } from "
 import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { circleRing, intersectIntervals, lineIntervals, outlineRing, subtractIntervals } from "../outline";
 import { STATE_COLOR } from "./plan";
-import { INK, type Drawing, el, hdim, vdim, textWidth, sheet, text } from "./svg";
+import { dashOf, FIT, patternId } from "@/model/palette";
+import { INK, type Attrs, type Drawing, el, hdim, vdim, textWidth, sheet, text } from "./svg";
 
 // Section through the cylinder axis along x (the plane y = skirt centre), to scale: x to the right,
-// depth below the deck downward. Case material hatched, the planned cut tinted, skirt and flange above.
+// depth below the deck downward. Case material hatched, the material the planned cut removes dotted inside the
+// counterbore's dashed outline, skirt and flange above.
 
 type Iv = [number, number][];
 
@@ -29,7 +31,7 @@ export function sectionDrawing(study: Study, result: StudyResult, kitIndex: numb
   const x0 = Math.min(...deckIv.map((i) => i[0])), x1 = Math.max(...deckIv.map((i) => i[1]));
   const fs = options.compact ? Math.max(3.4, (x1 - x0) / 20) : Math.max(2.6, (x1 - x0) / 34);
   const body: string[] = [];
-  const rect = (a: number, b: number, z0: number, z1: number, attrs: Record<string, string | number>) =>
+  const rect = (a: number, b: number, z0: number, z1: number, attrs: Attrs) =>
     el("rect", { x: a, y: z0, width: b - a, height: z1 - z0, ...attrs });
 
   const levels = [...new Set([0, ...cs.pockets.map((p) => p.startDepthMm).filter((z) => z > 0 && z < M), M])].sort((a, b) => a - b);
@@ -38,20 +40,32 @@ export function sectionDrawing(study: Study, result: StudyResult, kitIndex: numb
     ...cs.studs.flatMap((s) => lineIntervals(circleRing(s.positionMm, cs.studHoleDiameterMm / 2, 64), y0)),
     ...cs.pockets.filter((p) => p.startDepthMm <= z + 1e-9).flatMap((p) => lineIntervals(outlineRing(p.outline), y0)),
   ];
+  const cutIv: Iv = k.cut ? lineIntervals(circleRing(k.cut.centerAtDeckMm, k.cut.diameterMm / 2), y0) : [];
   for (let i = 0; i + 1 < levels.length; i++) {
-    for (const [a, b] of subtractIntervals(deckIv, voidsAt(levels[i]))) {
+    const material = subtractIntervals(deckIv, voidsAt(levels[i]));
+    for (const [a, b] of material) {
       body.push(rect(a, b, levels[i], levels[i + 1], { fill: "url(#hatch)", stroke: INK.ink, "stroke-width": 0.3 }));
+    }
+    // The material the counterbore takes away: dotted, in the palette's removed-material colour.
+    const z1 = Math.min(levels[i + 1], k.cut?.depthMm ?? 0);
+    if (z1 > levels[i]) {
+      for (const [a, b] of intersectIntervals(material, cutIv)) {
+        body.push(rect(a, b, levels[i], z1, { fill: INK.removed, "fill-opacity": 0.18, "data-layer": "removed" }));
+        body.push(rect(a, b, levels[i], z1, { fill: `url(#${patternId(FIT.removed)})` }));
+      }
     }
   }
   body.push(el("line", { x1: x0 - 4, y1: M, x2: x1 + 4, y2: M, stroke: INK.ink3, "stroke-width": 0.15, "stroke-dasharray": "1 1" }));
 
   if (k.cut) {
-    const ci = lineIntervals(circleRing(k.cut.centerAtDeckMm, k.cut.diameterMm / 2), y0);
-    for (const [a, b] of ci) body.push(rect(a, b, 0, k.cut.depthMm, { fill: INK.accent, "fill-opacity": 0.12, stroke: INK.accent, "stroke-width": 0.35, "stroke-dasharray": "2 1" }));
+    for (const [a, b] of cutIv) body.push(rect(a, b, 0, k.cut.depthMm, { fill: "none", stroke: INK.counterbore, "stroke-width": 0.35, "stroke-dasharray": dashOf(FIT.counterbore.shape), "data-layer": "counterbore" }));
   }
   for (const band of interferenceRegions(study, k)) {
     const iv: Iv = band.regions.flatMap((r) => subtractIntervals(lineIntervals(r.outer, y0), r.holes.flatMap((h) => lineIntervals(h, y0))));
-    for (const [a, b] of intersectIntervals(iv, [[x0, x1]])) body.push(rect(a, b, band.z0, band.z1, { fill: INK.interfere, "fill-opacity": 0.75 }));
+    for (const [a, b] of intersectIntervals(iv, [[x0, x1]])) {
+      body.push(rect(a, b, band.z0, band.z1, { fill: INK.interfere, "fill-opacity": 0.6, "data-layer": "interference" }));
+      body.push(rect(a, b, band.z0, band.z1, { fill: `url(#${patternId(FIT.interfere)})` }));
+    }
   }
 
   const r = k.skirt.diameterMm / 2;
@@ -62,7 +76,7 @@ export function sectionDrawing(study: Study, result: StudyResult, kitIndex: numb
   const top = -g - FLANGE_DRAWN_MM;
   if (P > 0) for (const [a, b] of [[cx - r, cx - inner], [cx + inner, cx + r]]) body.push(rect(a, b, 0, P, { fill: color, "fill-opacity": 0.22, stroke: color, "stroke-width": 0.4 }));
   for (const [a, b] of [[cx - Rf, cx - inner], [cx + inner, cx + Rf]]) body.push(rect(a, b, top, -g, { fill: INK.rule, stroke: INK.ink2, "stroke-width": 0.3 }));
-  if (g > 0) for (const [a, b] of [[cx - Rf, cx - r], [cx + r, cx + Rf]]) body.push(rect(a, b, -g, 0, { fill: INK.tight, "fill-opacity": 0.5 }));
+  if (g > 0) for (const [a, b] of [[cx - Rf, cx - r], [cx + r, cx + Rf]]) body.push(rect(a, b, -g, 0, { fill: INK.gasket, "fill-opacity": 0.6 }));
   body.push(el("line", { x1: cx, y1: top - 4, x2: cx, y2: M + 4, stroke: INK.ink3, "stroke-width": 0.18, "stroke-dasharray": "4 1 1 1" }));
 
   const side = options.compact ? fs * 2 : Math.max(textWidth(`cut depth ${lengthLabel(M, units)}`, fs), textWidth(`skirt ${lengthLabel(M, units)} below deck`, fs)) + fs * 4;
@@ -71,8 +85,8 @@ export function sectionDrawing(study: Study, result: StudyResult, kitIndex: numb
   if (!options.compact) {
     if (k.cut) {
       const R = k.cut.diameterMm / 2;
-      body.push(vdim(x1 + fs * 2, 0, k.cut.depthMm, cx + R, `cut depth ${lengthLabel(k.cut.depthMm, units)}`, fs, INK.accent));
-      body.push(hdim(cx - R, cx + R, M + fs * 2.5, k.cut.depthMm, k.cut.depthMm, `cut ${diameterLabel(k.cut.diameterMm, units)}`, fs, INK.accent));
+      body.push(vdim(x1 + fs * 2, 0, k.cut.depthMm, cx + R, `cut depth ${lengthLabel(k.cut.depthMm, units)}`, fs, INK.counterbore));
+      body.push(hdim(cx - R, cx + R, M + fs * 2.5, k.cut.depthMm, k.cut.depthMm, `cut ${diameterLabel(k.cut.diameterMm, units)}`, fs, INK.counterbore));
     }
     if (cs.mouth.outline.kind === "circle") {
       const R = cs.mouth.outline.diameterMm / 2;

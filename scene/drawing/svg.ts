@@ -1,19 +1,29 @@
 import type { Vec2 } from "@/geometry";
+import { FIT, patternDefs, printed, SCENE, SURFACE } from "@/model/palette";
 
 // Small helpers that write SVG markup. Every number is rounded to 0.001 mm; every text is escaped.
 
-/** Colours of the drawings (the light palette, so a printout reads the same). */
+/** Colours of the drawings: the palette's light theme (model/palette.ts), so a printout reads the same. */
 export const INK = {
-  ink: "#2b2f33",
-  ink2: "#5b6167",
+  ink: SURFACE.ink.light,
+  ink2: SURFACE["ink-2"].light,
+  /** Thin construction lines (centre lines, extension lines): lighter than any text. */
   ink3: "#8a8f93",
-  rule: "#d9d3c6",
-  paper: "#fbfaf6",
-  paper2: "#eeeae0",
-  accent: "#0f5e5c",
-  clear: "#13776f",
-  tight: "#b7791f",
-  interfere: "#b3362c",
+  rule: SURFACE.rule.light,
+  paper: SURFACE.card.light,
+  paper2: SURFACE["paper-2"].light,
+  accent: SURFACE.accent.light,
+  clear: printed(FIT.clear),
+  tight: printed(FIT.tight),
+  interfere: printed(FIT.interfere),
+  counterbore: printed(FIT.counterbore),
+  removed: printed(FIT.removed),
+  wallLow: printed(FIT.wallLow),
+  port: printed(FIT.port),
+  passage: printed(FIT.passage),
+  passageSoft: FIT.passage.soft.light,
+  sheet: SCENE.sheet,
+  gasket: SCENE.gasket,
 } as const;
 
 /** A finished drawing: its size in mm (1 unit = 1 mm, so it prints to scale) and its markup. */
@@ -61,7 +71,7 @@ export const DEFS = `<defs>${el("marker", { id: "arw", viewBox: "0 0 6 6", refX:
   "pattern",
   { id: "hatch", width: 2.2, height: 2.2, patternUnits: "userSpaceOnUse", patternTransform: "rotate(45)" },
   el("rect", { width: 2.2, height: 2.2, fill: INK.paper2 }) + el("line", { x1: 0, y1: 0, x2: 0, y2: 2.2, stroke: INK.ink3, "stroke-width": 0.3 }),
-)}</defs>`;
+)}${patternDefs()}</defs>`;
 
 /** A horizontal dimension from xa to xb drawn at height y, extension lines from the feature heights fa and fb; the text above the line. */
 export function hdim(xa: number, xb: number, y: number, fa: number, fb: number, label: string, size: number, color: string = INK.ink): string {
@@ -102,6 +112,6 @@ export function leader(from: Vec2, to: Vec2, label: string, size: number, color:
 export function sheet(title: string, minX: number, minY: number, w: number, h: number, body: string, role: "img" | "group" = "img"): Drawing {
   const svg =
     `<svg xmlns="http://www.w3.org/2000/svg" width="${n(w)}mm" height="${n(h)}mm" viewBox="${n(minX)} ${n(minY)} ${n(w)} ${n(h)}" role="${role}" aria-label="${esc(title)}">` +
-    `<title>${esc(title)}</title>${DEFS}${el("rect", { x: minX, y: minY, width: w, height: h, fill: "#ffffff" })}${body}</svg>`;
+    `<title>${esc(title)}</title>${DEFS}${el("rect", { x: minX, y: minY, width: w, height: h, fill: INK.sheet })}${body}</svg>`;
   return { title, widthMm: w, heightMm: h, svg };
 }

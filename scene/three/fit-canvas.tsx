@@ -2,6 +2,7 @@
 
 import { OrbitControls } from "@react-three/drei";
 import { Canvas } from "@react-three/fiber";
+import { SCENE } from "@/model/palette";
 import type { FitStore } from "../store";
 import { quietClockDeprecation } from "./console";
 import { CameraRig, FrameRenderer, type FitCanvasApi } from "./frame";
@@ -32,8 +33,8 @@ export default function FitCanvas({ store, view, onReady }: FitCanvasProps) {
       }}
       data-testid="fit-canvas"
     >
-      <color attach="background" args={["#f1eee6"]} />
-      <hemisphereLight args={["#fffdf7", "#8a8577", 1.6]} />
+      <color attach="background" args={[SCENE.background]} />
+      <hemisphereLight args={[SCENE.skyLight, SCENE.groundLight, 1.6]} />
       <directionalLight position={[90, 160, 120]} intensity={1.6} />
       <directionalLight position={[-140, 40, -90]} intensity={0.5} />
       <FitScene store={store} view={view} />

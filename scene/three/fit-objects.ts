@@ -1,12 +1,16 @@
-import { BufferGeometry, DoubleSide, Float32BufferAttribute, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
+import { BufferGeometry, DoubleSide, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
+import { FIT, printed, SCENE, SURFACE } from "@/model/palette";
 import { cutGeometry, FLANGE_DRAWN_MM, fitState, flangeRadiusMm, governingClearanceMm, interferenceGeometry } from "../fit-model";
 import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { toWorld } from "../solids";
 import type { FitSnapshot } from "../store";
 import { Label } from "./label";
+import { disposeOverlay, portOverlay, PortOverlayMaterials } from "./port-overlay";
 import { sectionNormal, type ViewState } from "./view";
 
-export const STATE_3D = { interfere: "#c0392b", tight: "#c8861f", clear: "#13776f" } as const;
+/** The skirt's colour by clearance band: the palette's (light theme, as the scene is a lit workshop in both themes). */
+export const STATE_3D = { interfere: printed(FIT.interfere), tight: printed(FIT.tight), clear: printed(FIT.clear) } as const;
+const INK = SURFACE.ink.light;
 const LABEL_MM = 4.2;
 const LABEL_CUSTOMER_MM = 7.5;
 
@@ -22,19 +26,24 @@ export class FitObjects {
   readonly wallLine: Line;
   readonly cut: Mesh;
   readonly hit: Mesh;
+  /** The kit's port windows over the case's passages at the deck (empty for a kit without them). */
+  readonly ports = new Group();
+  readonly portMaterials: PortOverlayMaterials;
   private applied: { snap: FitSnapshot | null; view: ViewState | null; kit: unknown } = { snap: null, view: null, kit: null };
   private view: ViewState | null = null;
 
   constructor() {
     const clip = [this.plane];
     this.materials = {
-      case: new MeshLambertMaterial({ color: "#bdb7aa", side: DoubleSide, clippingPlanes: clip }),
-      cut: new MeshLambertMaterial({ color: "#2a8f88", transparent: true, opacity: 0.28, depthWrite: false, side: DoubleSide, clippingPlanes: clip }),
-      flange: new MeshLambertMaterial({ color: "#8f969b", side: DoubleSide, clippingPlanes: clip }),
-      gasket: new MeshLambertMaterial({ color: "#d8b262", side: DoubleSide, clippingPlanes: clip }),
-      interference: new MeshLambertMaterial({ color: "#e0301e", emissive: "#5a0a04", side: DoubleSide, clippingPlanes: clip }),
-      wall: new LineBasicMaterial({ color: "#2b2f33", depthTest: false }),
+      case: new MeshLambertMaterial({ color: SCENE.caseMetal, side: DoubleSide, clippingPlanes: clip }),
+      cut: new MeshLambertMaterial({ color: printed(FIT.counterbore), transparent: true, opacity: 0.28, depthWrite: false, side: DoubleSide, clippingPlanes: clip }),
+      flange: new MeshLambertMaterial({ color: SCENE.flange, side: DoubleSide, clippingPlanes: clip }),
+      gasket: new MeshLambertMaterial({ color: SCENE.gasket, side: DoubleSide, clippingPlanes: clip }),
+      interference: new MeshLambertMaterial({ color: printed(FIT.interfere), emissive: SCENE.interferenceGlow, side: DoubleSide, clippingPlanes: clip }),
+      wall: new LineBasicMaterial({ color: INK, depthTest: false }),
     };
+    this.portMaterials = new PortOverlayMaterials(clip);
+    this.ports.name = "port-overlay";
     const g = new BufferGeometry();
     g.setAttribute("position", new Float32BufferAttribute(new Float32Array(6), 3));
     this.wallLine = new Line(g, this.materials.wall);
@@ -63,6 +72,7 @@ export class FitObjects {
       this.plane.normal.set(0, 1, 0);
       this.plane.constant = 1e6;
     }
+    this.ports.visible = view.ports !== false;
   }
 
   /** Brings the fast-changing parts up to the snapshot; does nothing when neither it nor the view changed. */
@@ -81,6 +91,9 @@ export class FitObjects {
     this.hit.geometry.dispose();
     const hitGeom = interferenceGeometry(study, k);
     this.hit.geometry = hitGeom ?? new BufferGeometry();
+    for (const g of this.ports.children) disposeOverlay(g as Group);
+    this.ports.clear();
+    this.ports.add(portOverlay(study, snap.kitIndex, k, this.portMaterials));
 
     const size = v.customer ? LABEL_CUSTOMER_MM : LABEL_MM;
     const L = this.labels;
@@ -88,12 +101,12 @@ export class FitObjects {
     const state = fitState(k, result);
     const Rf = flangeRadiusMm(study.kits[snap.kitIndex], k, study.case.studHoleDiameterMm);
     const c = governingClearanceMm(k);
-    L.skirt.set(`skirt ${diameterLabel(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthLabel(c, v.units)}`, STATE_3D[state]);
+    L.skirt.set(`${FIT[state].icon} skirt ${diameterLabel(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthLabel(c, v.units)}`, STATE_3D[state]);
     L.skirt.sprite.position.set(...toWorld(-Rf, Rf * 0.6, -k.skirt.gasketMm - FLANGE_DRAWN_MM - size * 1.2));
     L.skirt.resize();
     L.cut.sprite.visible = k.cut !== null;
     if (k.cut) {
-      L.cut.set(`cut ${diameterLabel(k.cut.diameterMm, v.units)} × ${lengthLabel(k.cut.depthMm, v.units)} deep`, "#0f5e5c");
+      L.cut.set(`${FIT.counterbore.icon} cut ${diameterLabel(k.cut.diameterMm, v.units)} × ${lengthLabel(k.cut.depthMm, v.units)} deep`, printed(FIT.counterbore));
       L.cut.sprite.center.set(1, 0.5);
       L.cut.sprite.position.set(...toWorld(k.cut.diameterMm / 2 + 4, -k.cut.diameterMm * 0.45, k.cut.depthMm + size));
       L.cut.resize();
@@ -101,8 +114,8 @@ export class FitObjects {
     const w = k.thinnestWall;
     L.wall.sprite.visible = this.wallLine.visible = w !== null && k.cut !== null;
     if (w && k.cut) {
-      const color = w.ok ? "#2b2f33" : STATE_3D.interfere;
-      L.wall.set(`thinnest wall ${lengthLabel(w.minWallMm, v.units)} · ${w.label}`, color);
+      const color = w.ok ? INK : printed(FIT.wallLow);
+      L.wall.set(`${w.ok ? "" : `${FIT.wallLow.icon} `}thinnest wall ${lengthLabel(w.minWallMm, v.units)} · ${w.label}`, color);
       L.wall.sprite.position.set(...toWorld(w.atMm[0], w.atMm[1], -size * 0.9));
       L.wall.resize();
       const a = this.wallLine.geometry.getAttribute("position") as Float32BufferAttribute;
@@ -116,7 +129,7 @@ export class FitObjects {
     L.hit.sprite.visible = hitGeom !== null;
     if (hitGeom) {
       const at = worst?.atMm ?? [k.skirt.diameterMm / 2, 0];
-      L.hit.set(worst ? `interference ${lengthLabel(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
+      L.hit.set(worst ? `${FIT.interfere.icon} interference ${lengthLabel(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
       L.hit.sprite.position.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
       L.hit.resize();
     }
@@ -139,5 +152,7 @@ export class FitObjects {
     this.wallLine.geometry.dispose();
     this.cut.geometry.dispose();
     this.hit.geometry.dispose();
+    for (const g of this.ports.children) disposeOverlay(g as Group);
+    this.portMaterials.dispose();
   }
 }

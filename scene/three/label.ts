@@ -1,3 +1,4 @@
+import { SCENE } from "@/model/palette";
 import { CanvasTexture, LinearFilter, SRGBColorSpace, Sprite, SpriteMaterial } from "three";
 
 // Text labels drawn into a canvas texture with the page's own font (nothing fetched), shown as sprites
@@ -43,12 +44,15 @@ export class Label {
       this.canvas.height = px + 24;
     }
     ctx.font = font;
-    ctx.fillStyle = "rgba(251,250,246,0.92)";
+    ctx.clearRect(0, 0, this.canvas.width, this.canvas.height);
+    ctx.globalAlpha = 0.92;
+    ctx.fillStyle = SCENE.labelGround;
     ctx.strokeStyle = color;
     ctx.lineWidth = 3;
     ctx.beginPath();
     ctx.roundRect(1.5, 1.5, w - 3, px + 21, 10);
     ctx.fill();
+    ctx.globalAlpha = 1;
     ctx.stroke();
     ctx.fillStyle = color;
     ctx.textBaseline = "middle";

@@ -19,6 +19,8 @@ export interface ViewState {
   /** Large labels for showing a customer. */
   readonly customer: boolean;
   readonly units: "mm" | "in";
+  /** Show the kit's base-gasket port windows over the case's passages (shown unless false). */
+  readonly ports?: boolean;
 }
 
 export const TARGET = new Vector3(0, -9, 0);

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { evaluateStudy, parseStudy } from "@/geometry";
 import { planDrawing } from "@/scene/drawing/plan";
 import { portCaption, portsLayer } from "@/scene/drawing/ports";
+import { FIT } from "@/model/palette";
 import { exampleInput } from "./fixtures";
 
 // The example study (invented): its short-skirt kit carries two port windows over the case's two passages.
@@ -18,14 +19,16 @@ describe("the port overlay on the plan", () => {
     expect(svg).toContain("right transfer</text>");
   });
 
-  it("draws a window in the warning colour when the matched passage would leave too little wall", () => {
+  it("draws a window in the port colour, or in the wall-below-minimum colour when the matched passage would leave too little wall", () => {
     const input = exampleInput();
     input.cut = { diameterMm: 58.6 };
     const s = parseStudy(input);
     const r = evaluateStudy(s);
     expect(r.kits[0].ports.every((p) => p.ok === false)).toBe(true);
-    expect(portsLayer(s, 0, r.kits[0], 3)).toContain('stroke="#b3362c"');
-    expect(portsLayer(study, 0, result.kits[0], 3)).not.toContain('stroke="#b3362c"');
+    expect(portsLayer(s, 0, r.kits[0], 3)).toContain(`stroke="${FIT.wallLow.color.light}"`);
+    expect(portsLayer(s, 0, r.kits[0], 3)).not.toContain(`stroke="${FIT.port.color.light}"`);
+    expect(portsLayer(study, 0, result.kits[0], 3)).not.toContain(`stroke="${FIT.wallLow.color.light}"`);
+    expect(portsLayer(study, 0, result.kits[0], 3)).toContain(`stroke="${FIT.port.color.light}"`);
   });
 
   it("is empty for a kit with no base gasket, and the plan drawing carries the windows of the kit shown", () => {
