@@ -65,7 +65,9 @@ export async function readOutbox(caller: Pick<Caller, "email" | "shopId">): Prom
     const res = await fetch(`${sink}/messages`, { cache: "no-store" });
     if (!res.ok) return null;
     messages = ((await res.json()) as { messages: CaughtMail[] }).messages;
-  } catch {
+  } catch (error) {
+    // The sink is a local development aid: when it is down the Outbox says so, and nothing else depends on it.
+    console.warn(`mail sink at ${sink} did not answer:`, error instanceof Error ? error.message : error);
     return null;
   }
   const db = await getDb();
@@ -82,6 +84,7 @@ export async function readOutbox(caller: Pick<Caller, "email" | "shopId">): Prom
     try {
       return new URL(link).pathname;
     } catch {
+      // A link that is not a URL acts on no account and opens no invitation: no path matches it.
       return "";
     }
   };

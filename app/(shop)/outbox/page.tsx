@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { readOutbox } from "@/db/mail";
+import { shopTimeZone } from "@/db/settings";
+import { dateTimeText } from "@/model/dates";
 import { EmptyState } from "../../_ui/empty-state";
 import { outboxEnabled, requirePage } from "../../_ui/guard";
 
@@ -11,6 +13,7 @@ export default async function OutboxPage() {
   const caller = await requirePage("/outbox", ["owner"]);
   if (!outboxEnabled()) notFound();
   const messages = await readOutbox(caller);
+  const zone = shopTimeZone();
   return (
     <div className="flex flex-col gap-6">
       <div>
@@ -32,7 +35,7 @@ export default async function OutboxPage() {
               <div className="flex flex-wrap justify-between gap-2 text-sm">
                 <span className="font-semibold">{m.subject}</span>
                 <span className="break-all text-ink-2">
-                  to {m.to.join(", ")} · <span className="num">{m.receivedAt.replace("T", " ").slice(0, 19)}</span>
+                  to {m.to.join(", ")} · <span className="num">{dateTimeText(m.receivedAt, zone)}</span>
                 </span>
               </div>
               <pre className="mt-2 whitespace-pre-wrap break-all font-sans text-sm text-ink-2">{m.text}</pre>

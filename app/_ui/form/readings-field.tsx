@@ -1,11 +1,11 @@
 "use client";
 
-import { formatLength, type LengthUnits } from "@/geometry";
+import type { LengthUnits } from "@/geometry";
 import { useController, useFormContext, type FieldValues, type Path } from "react-hook-form";
 import { dateText } from "@/model/dates";
 import { useShopTimeZone } from "../query/settings/use-shop-settings";
 import { errorAt } from "./field-error";
-import { parseLengthText } from "@/model/units";
+import { lengthLabel, parseLengthText } from "@/model/units";
 
 export type ReadingStamp = { takenBy: string; takenAt: string } | undefined;
 
@@ -103,12 +103,12 @@ export function ReadingsField<FV extends FieldValues>({
         <p id={`${baseId}-summary`} className="text-sm text-ink-2" data-testid={`${baseId}-summary`}>
           {worst ? (
             <>
-              The {counts} counts: <span className="num text-ink">{formatLength(worst[0], units, { digits: units === "mm" ? 2 : 4 })}</span>
+              The {counts} counts: <span className="num text-ink">{lengthLabel(worst[0], units)}</span>
               {good.length > 1 ? <> ({itemLabel.toLowerCase()} {worst[1] + 1})</> : null}
               {spread !== null ? (
                 <>
                   {" "}
-                  · spread <span className="num">{formatLength(spread, units, { digits: units === "mm" ? 2 : 4 })}</span>
+                  · spread <span className="num">{lengthLabel(spread, units)}</span>
                 </>
               ) : null}
             </>
