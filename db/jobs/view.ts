@@ -1,13 +1,15 @@
 import "server-only";
 import { and, desc, eq, inArray } from "drizzle-orm";
-import type { Study, StudyResult, Verdict } from "@/geometry";
+import { z } from "zod";
+import { StudyResultSchema, StudySchema, type Verdict } from "@/geometry";
+import { AfterCutReadingsSchema } from "@/model/schemas/jobs";
 import { decideMove, isJobStatus, movesFrom, moveNeedsReason, STATUS_LABEL, type JobStatus, type MoveFacts } from "@/model/job-status";
 import { AccessError, type Caller } from "../access";
 import { getDb } from "../client";
 import { SHOP_STAFF } from "../roles";
 import * as schema from "../schema";
 import * as jobs from "../schema-jobs";
-import type { AfterCutReadings, Verification } from "../verification";
+import type { AfterCutReadings, CheckKey, Verification } from "../verification";
 
 // A job as the pages and the API see it, and the one way a job is loaded for a caller: staff of its shop,
 // or its own customer once it is shared. Another shop's job, or a job not shared with this customer, is a
@@ -16,15 +18,36 @@ import type { AfterCutReadings, Verification } from "../verification";
 export const j = jobs.job;
 
 /** The plan as it was when the job was planned: the assembled Study and the core's result for it. */
-export type PlanSnapshot = {
-  studyId: string;
-  studyName: string;
-  kitId: string;
-  kitName: string;
-  study: Study;
-  result: StudyResult;
-  takenAt: string;
-};
+const PlanSnapshotSchema = z.object({
+  studyId: z.string(),
+  studyName: z.string(),
+  kitId: z.string(),
+  kitName: z.string(),
+  study: StudySchema,
+  result: StudyResultSchema,
+  takenAt: z.string(),
+});
+export type PlanSnapshot = z.infer<typeof PlanSnapshotSchema>;
+
+const CHECK_KEYS = ["cut-diameter", "cut-depth", "radial-clearance", "depth-clearance", "sealing-land", "chips", "trial-fit"] as const satisfies readonly CheckKey[];
+/** A stored comparison of plan and actual, as db/verification.ts words it. */
+const VerificationSchema: z.ZodType<Verification> = z.object({
+  verdict: z.enum(["pass", "fail", "incomplete"]),
+  toleranceMm: z.number(),
+  checks: z.array(
+    z.object({
+      key: z.enum(CHECK_KEYS),
+      label: z.string(),
+      planned: z.string(),
+      actual: z.string(),
+      plannedMm: z.number().nullable(),
+      actualMm: z.number().nullable(),
+      state: z.enum(["ok", "fail", "missing"]),
+      byMm: z.number().nullable(),
+      message: z.string(),
+    }),
+  ),
+});
 
 export type Person = { id: string; name: string };
 
@@ -83,9 +106,9 @@ export function isJobCustomer(caller: Caller, r: jobs.JobRecord): boolean {
 export function parsePlan(r: jobs.JobRecord): PlanSnapshot | null {
   if (!r.planJson) return null;
   try {
-    return JSON.parse(r.planJson) as PlanSnapshot;
+    return PlanSnapshotSchema.parse(JSON.parse(r.planJson));
   } catch (error) {
-    // A plan that no longer parses is shown as no plan; the job can be planned again.
+    // A plan that no longer parses or no longer matches the plan schema is shown as no plan; the job can be planned again.
     console.warn(`job ${r.id}: its stored plan does not parse; the job shows as not planned.`, error);
     return null;
   }
@@ -110,8 +133,8 @@ export async function latestReadings(jobIds: string[]): Promise<Map<string, Late
     out.set(r.jobId, {
       verdict: r.verdict,
       takenAt: r.takenAt,
-      readings: JSON.parse(r.readingsJson) as AfterCutReadings,
-      verification: JSON.parse(r.verificationJson) as Verification,
+      readings: AfterCutReadingsSchema.parse(JSON.parse(r.readingsJson)),
+      verification: VerificationSchema.parse(JSON.parse(r.verificationJson)),
     });
   }
   return out;
