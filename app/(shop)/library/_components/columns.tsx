@@ -1,12 +1,11 @@
 "use client";
 
-import { formatLength, type LengthUnits } from "@/geometry";
+import type { LengthUnits } from "@/geometry";
 import { dateText } from "@/model/dates";
+import { diameterLabel, lengthLabel } from "@/model/units";
 import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
 import Link from "next/link";
 import type { CaseRow, KitRow, LibraryKind, RigRow, RowBase } from "../../../_ui/query/types";
-
-const L = (mm: number | undefined, units: LengthUnits) => (mm === undefined ? "—" : formatLength(mm, units, { digits: units === "mm" ? 2 : 3 }));
 
 function common<T extends RowBase>(kind: LibraryKind, zone: string) {
   const h = createColumnHelper<T>();
@@ -47,12 +46,12 @@ export function caseColumns(units: LengthUnits, zone: string): ColumnDef<CaseRow
       header: "Mouth",
       cell: ({ row }) => {
         const o = row.original.data.mouth.outline;
-        return o.kind === "circle" ? num(`⌀ ${L(o.diameterMm, units)}`) : <span>polygon, {o.pointsMm.length} corners</span>;
+        return o.kind === "circle" ? num(diameterLabel(o.diameterMm, units)) : <span>polygon, {o.pointsMm.length} corners</span>;
       },
     }),
     h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
-    h.accessor((r) => r.data.stockBoreMm, { id: "stockBoreMm", header: "Stock bore", cell: (c) => num(L(c.getValue(), units)) }),
-    h.accessor((r) => r.data.strokeMm, { id: "strokeMm", header: "Stroke", cell: (c) => num(L(c.getValue(), units)) }),
+    h.accessor((r) => r.data.stockBoreMm, { id: "stockBoreMm", header: "Stock bore", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
+    h.accessor((r) => r.data.strokeMm, { id: "strokeMm", header: "Stroke", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
     h.display({ id: "pockets", header: "Pockets", cell: ({ row }) => num(String(row.original.data.pockets?.length ?? 0)) }),
     c.updated,
   ] as ColumnDef<CaseRow, unknown>[];
@@ -63,7 +62,7 @@ export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, 
   const c = common<KitRow>("kits", zone);
   return [
     c.name,
-    h.accessor((r) => r.data.boreMm, { id: "boreMm", header: "Bore", cell: (c) => num(L(c.getValue(), units)) }),
+    h.accessor((r) => r.data.boreMm, { id: "boreMm", header: "Bore", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
     h.display({
       id: "skirt",
       header: "Skirt ⌀ (largest)",
@@ -71,7 +70,7 @@ export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, 
         const r = row.original.data.skirtDiameterReadingsMm;
         return (
           <span className="num">
-            {L(Math.max(...r), units)} <span className="text-ink-3">({r.length} reading{r.length === 1 ? "" : "s"})</span>
+            {lengthLabel(Math.max(...r), units)} <span className="text-ink-3">({r.length} reading{r.length === 1 ? "" : "s"})</span>
           </span>
         );
       },
@@ -87,11 +86,11 @@ export function rigColumns(units: LengthUnits, zone: string): ColumnDef<RigRow, 
   const c = common<RigRow>("rigs", zone);
   return [
     c.name,
-    h.accessor((r) => r.data.headDiameterMm, { id: "headDiameterMm", header: "Head ⌀", cell: (c) => num(L(c.getValue(), units)) }),
+    h.accessor((r) => r.data.headDiameterMm, { id: "headDiameterMm", header: "Head ⌀", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
     h.display({
       id: "reach",
       header: "Calibrated reach",
-      cell: ({ row }) => num(`${L(row.original.data.calibration.minCutDiameterMm, units)} – ${L(row.original.data.calibration.maxCutDiameterMm, units)}`),
+      cell: ({ row }) => num(`${lengthLabel(row.original.data.calibration.minCutDiameterMm, units)} – ${lengthLabel(row.original.data.calibration.maxCutDiameterMm, units)}`),
     }),
     h.display({ id: "grooves", header: "Grooves", cell: ({ row }) => num(String(row.original.data.grooves.length)) }),
     h.display({ id: "rpm", header: "Drill top speed", cell: ({ row }) => num(`${row.original.data.drillTopRpm} rpm`) }),
