@@ -3,7 +3,7 @@
 // plan waiting for approval. Idempotent: each row has a fixed id and is written only when missing.
 import { eq, inArray } from "drizzle-orm";
 import type { drizzle } from "drizzle-orm/libsql";
-import { StudySchema, evaluateStudy, type Study } from "../geometry";
+import { StudySchema, evaluateStudy, type Study, type StudyResult } from "../geometry";
 import type { PlanSnapshot } from "./jobs";
 import * as schema from "./schema";
 import * as jobs from "./schema-jobs";
@@ -39,6 +39,36 @@ export function demoStudy(studyId = DEMO_STUDIES[0].id): { study: Study; name: s
   return { study, name: s.name, chosenKitId: s.chosenKitId ?? s.kitIds[0] };
 }
 
+/**
+ * The demo's after-cut readings for the planned kit: one set on size that verifies, one cut 0.25 mm small that
+ * fails. Each set could be read off one real cut (lands follow the cut's size).
+ */
+export function demoAfterCutReadings(study: Study, result: StudyResult, kitId: string) {
+  const vplan = planFromResult(result, kitId);
+  const thinnestGasket = Math.min(...(study.kits.find((k) => k.id === kitId)?.baseGasketsMm ?? [0]));
+  const r2 = (v: number) => Math.round(v * 100) / 100;
+  // Readings that can happen together: the land at a stud is what the cut's radius leaves, so a cut that came
+  // out larger leaves thinner lands and one that came out smaller leaves thicker ones (the widest reading counts).
+  const readingsFor = (cutDiameterMm: number[], trialFit: AfterCutReadings["trialFit"]): AfterCutReadings => {
+    const overMm = (Math.max(...cutDiameterMm) - vplan.cutDiameterMm) / 2;
+    return {
+      cutDiameterMm,
+      cutDepthMm: [vplan.cutDepthMm + 0.01, vplan.cutDepthMm + 0.02].map(r2),
+      sealingLandMm: vplan.studs.map((s) => ({ stud: s.label, valueMm: r2(s.plannedMm - overMm) })),
+      gasketStackMm: thinnestGasket,
+      chipsCleaned: true,
+      trialFit,
+    };
+  };
+  const onSize = [vplan.cutDiameterMm, vplan.cutDiameterMm + 0.02, vplan.cutDiameterMm - 0.01].map(r2);
+  const passing = readingsFor(onSize, "goes-home");
+  // A cut that came out 0.25 mm small: the skirt binds, and the lands are thicker than planned.
+  const failing = readingsFor(onSize.map((v) => r2(v - 0.25)), "binds");
+  const pass = verifyCut(vplan, passing);
+  const fail = verifyCut(vplan, failing);
+  return { vplan, passing, failing, pass, fail };
+}
+
 const STATUSES = ["intake", "planned", "approved", "machined", "verified", "closed"] as const;
 
 /** Inserts the demo jobs where missing; returns how many jobs it wrote. Needs the demo library in place. */
@@ -48,19 +78,7 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
   const kit = result.kits.find((k) => k.kitId === chosenKitId)!;
   const at = (day: number, hour = 9) => new Date(Date.UTC(2026, 1, day, hour, 0));
   const plan: PlanSnapshot = { studyId: DEMO_STUDIES[0].id, studyName, kitId: kit.kitId, kitName: kit.name, study, result, takenAt: at(2).toISOString() };
-  const vplan = planFromResult(result, kit.kitId);
-  const thinnestGasket = Math.min(...(study.kits.find((k) => k.id === kit.kitId)?.baseGasketsMm ?? [0]));
-  const passing: AfterCutReadings = {
-    cutDiameterMm: [vplan.cutDiameterMm, vplan.cutDiameterMm + 0.02, vplan.cutDiameterMm - 0.01].map((v) => Math.round(v * 100) / 100),
-    cutDepthMm: [vplan.cutDepthMm + 0.01, vplan.cutDepthMm + 0.02].map((v) => Math.round(v * 100) / 100),
-    sealingLandMm: vplan.studs.map((s) => ({ stud: s.label, valueMm: Math.round((s.plannedMm - 0.05) * 100) / 100 })),
-    gasketStackMm: thinnestGasket,
-    chipsCleaned: true,
-    trialFit: "goes-home",
-  };
-  const failing: AfterCutReadings = { ...passing, cutDiameterMm: passing.cutDiameterMm.map((v) => Math.round((v - 0.25) * 100) / 100), trialFit: "binds" };
-  const pass = verifyCut(vplan, passing);
-  const fail = verifyCut(vplan, failing);
+  const { passing, failing, pass, fail } = demoAfterCutReadings(study, result, kit.kitId);
   if (pass.verdict !== "pass" || fail.verdict !== "fail") throw new Error(`demo readings did not verify as meant (${pass.verdict}, ${fail.verdict})`);
 
   const contacts = [
@@ -137,7 +155,7 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
         events.push(event(4, "payment", "deposit paid: 50.00 EUR", null));
       }
       if (i >= 3) events.push(event(5, "status", "moved the job from approved to machined", people.builder, ["approved", "machined"]));
-      if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the skirt, trial fit)", people.builder));
+      if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the cut, trial fit)", people.builder));
       if (i >= 4) {
         events.push(event(6, "readings", "recorded after-cut readings: within the plan", people.builder));
         events.push(event(7, "status", "moved the job from machined to verified", people.builder, ["machined", "verified"]));

@@ -3,6 +3,8 @@
 import { formatLength, type LengthUnits, type Verdict } from "@/geometry";
 import { SETUP_CARD_CAUTIONS, TRIAL_CUT_READING, TRIAL_CUT_STEP } from "@/model/cautions";
 import { dateText, dateTimeText } from "@/model/dates";
+import { depthStopSentence, shimBreakdown } from "@/model/depth-stop-words";
+import { TERM } from "@/model/glossary";
 import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
@@ -87,27 +89,26 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
   ];
   const planLines: CardLine[] = cut
     ? [
-        { label: "Cut diameter", value: L(cut.diameterMm) },
-        { label: "Cut depth (below the deck)", value: L(cut.depthMm) },
-        { label: "Skirt diameter (largest reading)", value: L(k.skirt.diameterMm) },
-        { label: "Skirt protrusion", value: L(k.skirt.protrusionMm) },
-        { label: "Radial clearance to the cut", value: k.radialClearanceMm.vsCut === null ? "—" : L(k.radialClearanceMm.vsCut) },
-        { label: "Depth clearance", value: k.depthClearanceMm === null ? (cut.throughMouth ? "no step (cut opens into the crankcase)" : "—") : L(k.depthClearanceMm) },
+        { label: TERM.cutDiameter.label, value: L(cut.diameterMm) },
+        { label: TERM.cutDepth.label, value: L(cut.depthMm) },
+        { label: TERM.skirtDiameter.label, value: L(k.skirt.diameterMm) },
+        { label: TERM.skirtProtrusion.label, value: L(k.skirt.protrusionMm) },
+        { label: TERM.clearanceToCut.label, value: k.radialClearanceMm.vsCut === null ? "—" : L(k.radialClearanceMm.vsCut) },
+        { label: TERM.depthClearance.label, value: k.depthClearanceMm === null ? (cut.throughMouth ? "no step (cut opens into the crankcase)" : "—") : L(k.depthClearanceMm) },
         {
-          label: "Thinnest wall",
+          label: TERM.thinnestWall.label,
           value: k.thinnestWall ? `${L(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}` : "—",
           warn: k.thinnestWall ? !k.thinnestWall.ok : false,
         },
-        { label: "Displacement", value: `${k.displacementCc.stockRounded} cc to ${k.displacementCc.kitRounded} cc` },
+        { label: TERM.displacement.label, value: `${k.displacementCc.stockRounded} cc to ${k.displacementCc.kitRounded} cc` },
       ]
     : [{ label: "Cut", value: "This kit needs no cut.", warn: false }];
   let rig: CardLine[] | null = null;
   let rigMissing: string | null = null;
   if (k.rig) {
     const r = k.rig;
-    const shims = r.depthStop.shims.length ? r.depthStop.shims.map((s) => `${s.count} × ${L(s.thicknessMm)}`).join(" + ") : "no shims";
     rig = [
-      { label: "Cutter setting (caliper across head and bit)", value: L(r.cutterSettingToSetMm ?? r.cutterSettingMm) },
+      { label: TERM.cutterSetting.label, value: L(r.cutterSettingToSetMm ?? r.cutterSettingMm) },
       {
         label: "Bit length",
         value: r.bitReaches
@@ -118,19 +119,17 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
         warn: !r.bitReaches,
       },
       {
-        label: "Depth stop",
-        value: r.depthStop.reached
-          ? `ring in ${r.depthStop.groove}, ${shims} (stack ${L(r.depthStop.shimStackMm)}); stops at ${L(r.depthStop.travelMm)}`
-          : `cannot reach ${L(r.depthStop.wantedMm)} with the grooves and shims at hand`,
+        label: TERM.depthStop.label,
+        value: [depthStopSentence(r.depthStop, units), shimBreakdown(r.depthStop, units)].filter(Boolean).join("; "),
         warn: !r.depthStop.reached,
       },
       {
-        label: "Spindle speed",
+        label: TERM.spindleSpeed.label,
         value: `${Math.round(r.spindleRpm.min)}–${Math.round(Math.min(r.spindleRpm.max, r.spindleRpm.drillTopRpm))} rpm (drill top ${Math.round(r.spindleRpm.drillTopRpm)} rpm)`,
         warn: r.spindleRpm.drillTooSlow,
       },
       {
-        label: "Rotating hardware",
+        label: TERM.screwHeads.label,
         value: r.hardwareClears === null ? "not given" : r.hardwareClears ? `clears by ${L(r.hardwareClearanceMm ?? 0)}` : `strikes: ${L(-(r.hardwareClearanceMm ?? 0))} too far out`,
         warn: r.hardwareClears === false,
       },
@@ -150,16 +149,16 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     "Bit orientation: cutting edge leading in the direction of rotation; bit tight in the head.",
     k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",
     k.rig?.depthStop.reached
-      ? `Depth stop confirmed with the bit resting on the deck: ring in ${k.rig.depthStop.groove}, stack ${L(k.rig.depthStop.shimStackMm)}.`
+      ? `Depth stop confirmed with the bit resting on the deck: ${depthStopSentence(k.rig.depthStop, units)}.`
       : "Depth stop confirmed with the bit resting on the deck.",
     TRIAL_CUT_STEP,
     "Light feed, drill at the speed above; stop at the ring and let the cutter dwell before withdrawing.",
   ];
   const blanks = [
     { label: `${TRIAL_CUT_READING} (${units})`, cells: 1 },
-    { label: `Cut diameter readings (${units})`, cells: 3 },
-    { label: `Cut depth readings (${units})`, cells: 3 },
-    { label: `Sealing land at each stud (${units})`, cells: studs.length, cellLabels: studs },
+    { label: `${TERM.cutDiameter.label} readings (${units})`, cells: 3 },
+    { label: `${TERM.cutDepth.short} readings (${units})`, cells: 3 },
+    { label: `${TERM.sealingLand.short} at each stud (${units})`, cells: studs.length, cellLabels: studs },
     { label: `Gasket stack used (${units})`, cells: 1 },
     { label: "Crankcase cleaned of chips ☐   Trial fit: goes fully home ☐ / binds ☐", cells: 0 },
   ];

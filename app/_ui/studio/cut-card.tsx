@@ -1,6 +1,7 @@
 "use client";
 
 import type { KitResult, Study, StudyResult } from "@/geometry";
+import { TERM } from "@/model/glossary";
 import { diameterLabel, lengthLabel, type LengthUnits } from "@/model/units";
 import { CutSlider, type TrackMark } from "./cut-controls";
 import type { CutDraft } from "./use-live-fit";
@@ -37,14 +38,14 @@ type Props = {
 export function CutCard({ study, result, kit, units, following, onChange }: Props) {
   const r = cutRanges(study, result);
   const least = kit.leastCut;
-  const marks: TrackMark[] = [{ label: `largest safe cut ${diameterLabel(kit.maxCutDiameterMm, units)}`, fromMm: kit.maxCutDiameterMm, tone: "interfere" }];
+  const marks: TrackMark[] = [{ label: `${TERM.largestCut.short.toLowerCase()} ${diameterLabel(kit.maxCutDiameterMm, units)}`, fromMm: kit.maxCutDiameterMm, tone: "interfere" }];
   if (r.reach) marks.unshift({ label: `rig reaches ${diameterLabel(r.reach.min, units)} – ${lengthLabel(r.reach.max, units)}`, fromMm: r.reach.min, toMm: r.reach.max, tone: "accent" });
   const dNow = kit.cut?.diameterMm ?? least?.diameterMm ?? kit.skirt.diameterMm;
   const zNow = kit.cut?.depthMm ?? least?.depthMm ?? Math.max(1, kit.skirt.protrusionMm);
   return (
-    <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label="Planned cut">
+    <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label={TERM.plannedCut.label}>
       <CutSlider
-        label="Cut diameter"
+        label={TERM.cutDiameter.label}
         testId="cut-diameter"
         valueMm={dNow}
         minMm={r.dMin}
@@ -57,7 +58,7 @@ export function CutCard({ study, result, kit, units, following, onChange }: Prop
         onCommit={(mm) => onChange({ diameterMm: mm }, true)}
       />
       <CutSlider
-        label="Cut depth"
+        label={TERM.cutDepth.label}
         testId="cut-depth"
         valueMm={zNow}
         minMm={r.zMin}

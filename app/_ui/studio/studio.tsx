@@ -5,6 +5,7 @@ import type { Study, StudyResult } from "@/geometry";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
 import { drawnKey } from "@/scene/three/drawn-key";
 import type { ViewState } from "@/scene/three/view";
+import { BenchDetails } from "./bench-details";
 import { Cautions } from "./cautions";
 import { CutCard } from "./cut-card";
 import { Drawings } from "./drawings";
@@ -30,7 +31,7 @@ export interface StudioProps {
   readonly lockCustomerMode?: boolean;
 }
 
-/** The fit studio: the 3D view, the results in words, the cut controls, the kit lineup and the drawings. */
+/** The fit studio: the 3D view, the results in words, the cut controls with the walls, rig set-up and tilt they give, the kit lineup and the drawings. */
 export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
   const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
@@ -107,6 +108,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
             {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           </div>
           {!customer && <CutCard study={snap.study} result={snap.result} kit={k} units={units} following={following} onChange={change} />}
+          {!customer && <BenchDetails kit={live.result.kits[live.kitIndex]} result={live.result} units={units} />}
         </div>
         <aside className="flex min-w-0 flex-col gap-3">
           <ResultsPanel result={live.result} kitIndex={live.kitIndex} mouthDiameterMm={mouthDiameterMm} units={units} large={customer} />

@@ -4,6 +4,7 @@ import type { KitResult } from "@/geometry";
 import { PairInputs } from "@/app/_ui/form/pair-inputs";
 import { TextField } from "@/app/_ui/form/text-field";
 import { stepNote } from "@/app/_ui/studio/cut-card";
+import { TERM } from "@/model/glossary";
 import { lengthLabel, type LengthUnits } from "@/model/units";
 import type { StudyFormValues } from "./study-values";
 
@@ -16,7 +17,7 @@ export function CutPanel({ units, kit }: { units: LengthUnits; kit: KitResult | 
       <div className="grid gap-3 sm:grid-cols-2">
         <TextField<StudyFormValues>
           name="cut.diameterMm"
-          label="Cut diameter"
+          label={TERM.cutDiameter.label}
           unit={units}
           numeric
           placeholder={least ? `least cut ${lengthLabel(least.diameterMm, units)}` : "least cut"}
@@ -24,7 +25,7 @@ export function CutPanel({ units, kit }: { units: LengthUnits; kit: KitResult | 
         />
         <TextField<StudyFormValues>
           name="cut.depthMm"
-          label="Cut depth"
+          label={TERM.cutDepth.label}
           unit={units}
           numeric
           placeholder={least ? `least ${lengthLabel(least.depthMm, units)}` : "least depth"}
@@ -36,7 +37,7 @@ export function CutPanel({ units, kit }: { units: LengthUnits; kit: KitResult | 
         <div className="mt-1">
           <PairInputs<StudyFormValues> name="cut.centerOffsetMm" label="Centring offset" units={units} />
         </div>
-        <p className="field-hint">Blank: centred on the studs. Cut the least that clears, centred on the actual cylinder.</p>
+        <p className="field-hint">Blank: on the stud-pattern centre, which is where the new cylinder sits. Enter an offset only when the rig&apos;s axis cannot sit there; every figure is then worked out about that axis.</p>
       </div>
     </section>
   );

@@ -3,22 +3,12 @@
 import type { LengthUnits } from "@/geometry";
 import { useFormContext, useWatch } from "react-hook-form";
 import { TextField } from "@/app/_ui/form/text-field";
+import { LIMIT_TERM } from "@/model/glossary";
 import { lengthLabel, speedLabel } from "@/model/units";
 import { LIMIT_KEYS, type LimitKey, type StudyFormValues } from "./study-values";
 
-export const LIMIT_LABEL: Record<LimitKey, string> = {
-  minRadialClearanceMm: "Radial clearance around the skirt, at least",
-  minDepthClearanceMm: "Depth clearance under the skirt, at least",
-  minSealingLandMm: "Sealing land at each stud, at least",
-  minWallMm: "Wall to pockets and the outside, at least",
-  studToleranceMm: "Stud position tolerance",
-  hardwareMarginMm: "Screw-head margin inside the cut",
-  maxRockMm: "Holder rocking, at most",
-  minCrankClearanceMm: "Skirt to crank webs, at least",
-  cuttingSpeedMinMPerMin: "Cutting speed, from",
-  cuttingSpeedMaxMPerMin: "Cutting speed, to",
-  displacementClassesCc: "Legal-class limits",
-};
+/** Each limit's name, the same as in the shop's settings (model/glossary.ts). */
+export const LIMIT_LABEL: Record<LimitKey, string> = Object.fromEntries(LIMIT_KEYS.map((k) => [k, LIMIT_TERM[k].label])) as Record<LimitKey, string>;
 
 /** The study's own limits; a blank one takes the shop's default, shown beside it. */
 export function LimitsPanel({ units, shopLimits }: { units: LengthUnits; shopLimits: Record<string, unknown> }) {

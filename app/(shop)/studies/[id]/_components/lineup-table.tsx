@@ -9,6 +9,7 @@ import { lengthLabel } from "@/model/units";
 import { TONE_TEXT, VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
+import { TERM } from "@/model/glossary";
 
 const h = createColumnHelper<LineupRow>();
 const VERDICT_ORDER = { "fits-as-is": 0, "fits-after-cut": 1, "cannot-fit": 2 } as const;
@@ -56,19 +57,19 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
         }),
         h.accessor("needDiameterMm", {
           id: "needDiameter",
-          header: "Cut needed ⌀",
+          header: `${TERM.leastCut.short} ⌀`,
           sortingFn: nullsLast((r) => r.needDiameterMm),
           cell: (c) => <span className="num">{c.getValue() === null ? "none" : lengthLabel(c.getValue(), units)}</span>,
         }),
         h.accessor("needDepthMm", {
           id: "needDepth",
-          header: "Depth",
+          header: TERM.cutDepth.short,
           sortingFn: nullsLast((r) => r.needDepthMm),
           cell: (c) => <span className="num">{c.getValue() === null ? "—" : lengthLabel(c.getValue(), units)}</span>,
         }),
         h.accessor("thinnestWallMm", {
           id: "thinnestWall",
-          header: "Thinnest wall",
+          header: TERM.thinnestWall.label,
           sortingFn: nullsLast((r) => r.thinnestWallMm),
           cell: ({ row }) => {
             const w = row.original.kit.thinnestWall;
@@ -90,7 +91,7 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
         }),
         h.accessor((r) => r.kit.displacementCc.kit, {
           id: "displacement",
-          header: "Displacement",
+          header: TERM.displacement.label,
           cell: ({ row }) => (
             <span className="num">
               {row.original.kit.displacementCc.kitRounded} cc{row.original.kit.displacementCc.crossesClasses.length ? <span className="text-tight"> ⚑ class</span> : null}

@@ -6,7 +6,6 @@ import { CutPanel } from "./cut-panel";
 import { HistoryPanel } from "./history-panel";
 import { LimitsPanel } from "./limits-panel";
 import { ReadingsPanel } from "./readings-panel";
-import { ResultsView } from "./results-view";
 import { SelectionPanel } from "./selection-panel";
 import { StudioSlot } from "./studio-slot";
 import type { StudyFormValues } from "./study-values";
@@ -23,18 +22,27 @@ type Props = {
   loading: boolean;
 };
 
-/** The plan: the fit studio across the page, then the inputs beside everything the core says about the kit. */
+/**
+ * The plan: the fit studio across the page (the view, the results beside it, the cut and what it gives at the
+ * bench), then the inputs that drive it. Each result is shown once, in the studio.
+ */
 export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLimits, loading }: Props) {
   const form = useFormContext<StudyFormValues>();
   const shownKit = shown?.result.kits.find((k) => k.kitId === (values.chosenKitId || values.kitIds[0])) ?? null;
   return (
     <>
-      {shown ? <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} /> : null}
-      <div className="grid gap-5 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
+      {shown ? (
+        <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} />
+      ) : (
+        <p className="text-ink-2">{loading ? "Loading the case and kits…" : "Results appear once the inputs are complete."}</p>
+      )}
+      <div className="grid items-start gap-5 lg:grid-cols-2">
         <div className="flex min-w-0 flex-col gap-4">
           <SelectionPanel kitNames={kitNames} />
           <CutPanel units={units} kit={shownKit} />
           <ReadingsPanel units={units} studs={studs} />
+        </div>
+        <div className="flex min-w-0 flex-col gap-4">
           <LimitsPanel units={units} shopLimits={shopLimits} />
           <section className="card p-4" aria-label="Notes">
             <label htmlFor="study-notes" className="font-semibold">
@@ -44,7 +52,6 @@ export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLi
           </section>
           <HistoryPanel id={studyId} />
         </div>
-        <ResultsView shown={shown} units={units} chosen={values.chosenKitId} loading={loading} />
       </div>
     </>
   );

@@ -4,6 +4,7 @@ import type { LengthUnits } from "@/geometry";
 import { useFieldArray, useFormContext } from "react-hook-form";
 import { errorAt } from "@/app/_ui/form/field-error";
 import { TextField } from "@/app/_ui/form/text-field";
+import { STRAIGHTEDGE_HINT, TERM } from "@/model/glossary";
 import type { StudyFormValues } from "./study-values";
 
 /** The holder's height above the deck at each stud, as read (plus a straightedge where the deck is not under the gauge). */
@@ -14,7 +15,7 @@ export function ReadingsPanel({ units, studs }: { units: LengthUnits; studs: str
   return (
     <section className="card flex flex-col gap-3 p-4" aria-label="Holder heights">
       <h2 className="font-semibold">Holder heights</h2>
-      <p className="text-sm text-ink-2">Height of the holder plate above the deck at each stud, read with a depth gauge. Three or more give the tilt.</p>
+      <p className="text-sm text-ink-2">Height of the holder plate above the deck at each stud, read with a depth gauge. Three or more give the tilt. {STRAIGHTEDGE_HINT}</p>
       {fields.map((f, i) => {
         const studErr = errorAt(formState.errors, `readings.holderHeights.${i}.stud`);
         return (
@@ -30,8 +31,8 @@ export function ReadingsPanel({ units, studs }: { units: LengthUnits; studs: str
               </select>
               {studErr ? <p className="field-error">{studErr}</p> : null}
             </label>
-            <TextField<StudyFormValues> name={`readings.holderHeights.${i}.heightMm`} label="Height" unit={units} numeric className="w-28" />
-            <TextField<StudyFormValues> name={`readings.holderHeights.${i}.straightedgeMm`} label="Straightedge" unit={units} numeric className="w-28" />
+            <TextField<StudyFormValues> name={`readings.holderHeights.${i}.heightMm`} label={TERM.holderHeight.short} unit={units} numeric className="w-28" />
+            <TextField<StudyFormValues> name={`readings.holderHeights.${i}.straightedgeMm`} label={TERM.straightedge.label} unit={units} numeric className="w-36" />
             <button type="button" className="btn-quiet mb-0.5" onClick={() => remove(i)} aria-label={`Remove the reading at ${f.stud}`}>
               Remove
             </button>

@@ -2,6 +2,7 @@
 
 import { get, type FieldErrors } from "react-hook-form";
 import { lengthLabel, type LengthUnits } from "@/model/units";
+import { TERM } from "@/model/glossary";
 import { LIMIT_LABEL } from "./limits-panel";
 import type { LimitKey, StudyFormValues, StudyInputs } from "./study-values";
 
@@ -22,12 +23,12 @@ export function errorPaths(errors: FieldErrors, prefix = ""): Path[] {
 /** The field at a path in the study's words. */
 function fieldName(path: Path, values: StudyFormValues): string {
   const p = path.split(".");
-  if (path === "cut.diameterMm") return "Cut diameter";
-  if (path === "cut.depthMm") return "Cut depth";
+  if (path === "cut.diameterMm") return TERM.cutDiameter.label;
+  if (path === "cut.depthMm") return TERM.cutDepth.label;
   if (p[0] === "cut" && p[1] === "centerOffsetMm") return `Centring offset ${p[2] === "1" ? "y" : "x"}`;
   if (p[0] === "readings") {
     const stud = values.readings.holderHeights[Number(p[2])]?.stud;
-    return `${p[3] === "straightedgeMm" ? "Straightedge" : "Holder height"}${stud ? ` at stud ${stud}` : ""}`;
+    return `${p[3] === "straightedgeMm" ? TERM.straightedge.label : TERM.holderHeight.label}${stud ? ` at stud ${stud}` : ""}`;
   }
   if (p[0] === "limits") return LIMIT_LABEL[p[1] as LimitKey] ?? p[1];
   return path === "name" ? "Study name" : path;

@@ -1,5 +1,6 @@
 "use client";
 
+import { minorDigits } from "@/model/money";
 import type { LengthUnits } from "@/geometry";
 import { useCallback, useState } from "react";
 import { FormProvider } from "react-hook-form";
@@ -21,7 +22,7 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
   const choose = useCallback((kitId: string) => form.setValue("chosenKitId", kitId, { shouldDirty: true }), [form]);
 
   const kitNames = Object.fromEntries([...rows.kitRows.map((k) => [k.id, k.name]), ...(rows.caseRow ? [[rows.caseRow.id, rows.caseRow.name]] : [])]);
-  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price]));
+  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price ? k.data.price.amountMinor / 10 ** minorDigits(k.data.price.currency) : undefined]));
   const studs = rows.caseRow?.data.studs.map((s) => s.label) ?? [];
 
   return (

@@ -9,10 +9,11 @@ export const VERDICT: Record<Verdict, { words: string; tone: "clear" | "tight" |
   "cannot-fit": { ...VERDICT_TEXT["cannot-fit"], short: "cannot fit" },
 };
 
+// The verdicts' own colours (model/palette.ts), apart from the clearance bands'.
 export const TONE_CLASS = {
-  clear: "border-clear bg-clear-soft text-ink",
-  tight: "border-tight bg-tight-soft text-ink",
-  interfere: "border-interfere bg-interfere-soft text-ink",
+  clear: "border-verdict-fits bg-verdict-fits-soft text-ink",
+  tight: "border-verdict-after-cut bg-verdict-after-cut-soft text-ink",
+  interfere: "border-verdict-cannot bg-verdict-cannot-soft text-ink",
 } as const;
 
-export const TONE_TEXT = { clear: "text-clear", tight: "text-tight", interfere: "text-interfere" } as const;
+export const TONE_TEXT = { clear: "text-verdict-fits", tight: "text-verdict-after-cut", interfere: "text-verdict-cannot" } as const;

@@ -3,8 +3,11 @@ import { fromUnits, lengthLabel, toUnits, type LengthUnits } from "@/model/units
 import { VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
+import { VERDICT_COLOURS } from "@/model/palette";
+import { KeyLine } from "@/app/_ui/studio/legend";
 
-const COLOR = { clear: "var(--color-clear)", tight: "var(--color-tight)", interfere: "var(--color-interfere)" } as const;
+// The bars take the verdicts' own colours and glyphs (model/palette.ts), not the clearance bands'.
+const colour = (verdict: keyof typeof VERDICT_COLOURS) => `var(--color-${VERDICT_COLOURS[verdict].token})`;
 const ROW_H = 34;
 const LEFT = 190;
 const RIGHT = 330;
@@ -106,16 +109,18 @@ export function WindowChart({
                 width={Math.max(3, b - a)}
                 height={ROW_H - 16}
                 rx={3}
-                fill={COLOR[v.tone]}
+                fill={colour(r.kit.verdict)}
                 opacity={fits ? 0.85 : 0.35}
-                stroke={COLOR[v.tone]}
+                stroke={colour(r.kit.verdict)}
                 strokeDasharray={fits ? undefined : "3 2"}
               />
-              <line x1={x(need)} x2={x(need)} y1={y + 4} y2={y + ROW_H - 4} stroke={COLOR[v.tone]} strokeWidth={2} />
+              <line x1={x(need)} x2={x(need)} y1={y + 4} y2={y + ROW_H - 4} stroke={colour(r.kit.verdict)} strokeWidth={2} />
               {/* Two short lines, so the words stay inside the chart's right margin (about 50 characters at 11 px). */}
               <text x={WIDTH - RIGHT + 12} y={y + ROW_H / 2 - 2} fontSize="11" fill="var(--color-ink-2)">
                 <title>{`${v.short}: ${words}`}</title>
-                <tspan fontWeight={600}>{v.short}</tspan>
+                <tspan fontWeight={600}>
+                  {VERDICT_COLOURS[r.kit.verdict].icon} {v.short}
+                </tspan>
                 <tspan x={WIDTH - RIGHT + 12} dy={13}>
                   {words.length > 48 ? `${words.slice(0, 47)}…` : words}
                 </tspan>
@@ -137,15 +142,9 @@ export function WindowChart({
         </text>
       </svg>
       <ul className="flex flex-wrap gap-4 text-xs text-ink-2" aria-label="Legend">
-        <li className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 rounded-sm bg-clear" /> clear — fits the mouth as it is
-        </li>
-        <li className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 rounded-sm bg-tight" /> tight — fits once the mouth is cut
-        </li>
-        <li className="flex items-center gap-1">
-          <span className="inline-block h-3 w-5 rounded-sm bg-interfere" /> interference — cannot be made safe on this case
-        </li>
+        {(["fits-as-is", "fits-after-cut", "cannot-fit"] as const).map((verdict) => (
+          <KeyLine key={verdict} meaning={VERDICT_COLOURS[verdict]} />
+        ))}
         <li className="flex items-center gap-1">
           <span className="inline-block h-3 w-5 border-l-2 border-dashed border-ink-2" /> existing mouth
         </li>

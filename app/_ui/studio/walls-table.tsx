@@ -1,13 +1,14 @@
 import type { LengthUnits, WallResult } from "@/geometry";
+import { TERM } from "@/model/glossary";
 import { lengthLabel } from "@/model/units";
 
-const KIND: Record<WallResult["kind"], string> = { stud: "sealing land at stud", pocket: "wall to pocket", outline: "wall to the outside" };
+const KIND: Record<WallResult["kind"], string> = { stud: TERM.sealingLand.short, pocket: TERM.wallToPocket.short, outline: TERM.wallToOutside.label };
 
 /** The wall left from the cut to each stud hole, pocket and the deck's outside, against what is required. */
 export function WallsTable({ walls, units }: { walls: WallResult[]; units: LengthUnits }) {
   if (walls.length === 0) return <p className="text-sm text-ink-2">No cut, so no wall is touched.</p>;
   return (
-    <table className="w-full text-sm" aria-label="Walls left by the cut">
+    <table className="w-full text-sm" aria-label="Walls left by the cut" data-testid="walls">
       <thead className="text-left text-ink-2">
         <tr>
           <th className="py-1 font-medium">Where</th>

@@ -1,28 +1,29 @@
 import type { KitResult, LengthUnits, RigResult, StudyResult } from "@/geometry";
-import { Figure } from "./figure";
+import { depthStopSentence, shimBreakdown } from "@/model/depth-stop-words";
+import { TERM } from "@/model/glossary";
 import { lengthLabel, signedLengthLabel } from "@/model/units";
+import { Figure } from "./figure";
 
-/** How to set the boring rig for the cut: cutter setting, bit reach, hardware, depth stop, speed. */
+/** How to set the boring rig for the cut: cutter setting, bit reach, the cutter head's screws, depth stop, speed. */
 export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null; units: LengthUnits; cutDiameterMm: number | null }) {
   if (!rig) return <p className="text-sm text-ink-2">Choose a boring rig to get its set-up for this cut.</p>;
   const ds = rig.depthStop;
-  const shims = ds.shims.length ? ds.shims.map((s) => `${s.count} × ${lengthLabel(s.thicknessMm, units)}`).join(" + ") : "no shims";
   const rpm = rig.spindleRpm;
   return (
     <div className="grid gap-2 sm:grid-cols-2" data-testid="rig-setup">
       <Figure
-        label="Cutter setting (caliper across the head and the bit)"
+        label={TERM.cutterSetting.label}
         value={lengthLabel(rig.cutterSettingToSetMm ?? rig.cutterSettingMm, units)}
-        note={`exact ${lengthLabel(rig.cutterSettingMm, units)}, rounded up to the ${lengthLabel(rig.settingResolutionMm, units)} the calipers read · cuts ${lengthLabel(rig.cutAtSettingMm ?? cutDiameterMm, units)}`}
+        note={`exact ${lengthLabel(rig.cutterSettingMm, units)}, rounded up to the ${lengthLabel(rig.settingResolutionMm, units)} the caliper reads · cuts ${lengthLabel(rig.cutAtSettingMm ?? cutDiameterMm, units)}`}
       />
       <Figure
-        label="Bit"
+        label={TERM.bit.label}
         tone={rig.bitReaches ? "clear" : "interfere"}
         value={rig.bitReaches ? "reaches the cut" : rig.grindOffMm > 0 ? `grind off ${lengthLabel(rig.grindOffMm, units)}` : `too short by ${lengthLabel(rig.bitTooShortByMm, units)}`}
         note={`${lengthLabel(rig.bitLengthMm, units)} bit cuts ${lengthLabel(rig.bitReachMm.min, units)} – ${lengthLabel(rig.bitReachMm.max, units)}; lengths that reach: ${lengthLabel(rig.bitLengthWindowMm.min, units)} – ${lengthLabel(rig.bitLengthWindowMm.max, units)}`}
       />
       <Figure
-        label="Screw heads on the head"
+        label={TERM.screwHeads.label}
         tone={rig.hardwareClears === null ? undefined : rig.hardwareClears ? "clear" : "interfere"}
         value={
           rig.hardwareClearanceMm === null
@@ -35,18 +36,19 @@ export function RigSetup({ rig, units, cutDiameterMm }: { rig: RigResult | null;
         }
         note={
           rig.hardwareClears === false
-            ? "the screw heads would hit the case before the bit cuts: lower-profile screws or a smaller head"
-            : "distance from the cut radius to the outermost rotating hardware"
+            ? "the cutter head's screw heads would hit the case before the bit cuts: lower-profile screws or a smaller head"
+            : "from the outermost screw heads on the cutter head to the cut's edge"
         }
       />
       <Figure
-        label="Depth stop"
+        label={TERM.depthStop.label}
+        testId="depth-stop"
         tone={ds.reached ? "clear" : "interfere"}
-        value={ds.reached ? `${ds.groove} + ${shims}` : "cannot reach"}
-        note={ds.reached ? `gives ${lengthLabel(ds.travelMm, units)} for ${lengthLabel(ds.wantedMm, units)} wanted (+${lengthLabel(ds.overshootMm, units)})` : `the most travel is ${lengthLabel(ds.travelMm, units)}`}
+        value={depthStopSentence(ds, units)}
+        note={ds.reached ? [shimBreakdown(ds, units), `${lengthLabel(ds.wantedMm, units)} wanted, ${lengthLabel(ds.overshootMm, units)} over`].filter(Boolean).join(" · ") : undefined}
       />
       <Figure
-        label="Spindle speed"
+        label={TERM.spindleSpeed.label}
         tone={rpm.drillTooSlow ? "tight" : undefined}
         value={`${Math.round(rpm.min)} – ${Math.round(rpm.max)} rpm`}
         note={`drill tops out at ${Math.round(rpm.drillTopRpm)} rpm${rpm.drillLimited ? " (limits the speed)" : ""}`}
@@ -66,12 +68,12 @@ export function AlignmentFigures({ a, units, kit, limits }: { a: KitResult["alig
   const short = limits && withTilt !== null ? withTilt < limits.minRadialClearanceMm : false;
   return (
     <div className="grid gap-2 sm:grid-cols-2 lg:grid-cols-4">
-      <Figure label="Holder tilt" value={`${a.tiltDeg.toFixed(3)}°`} note={`towards ${Math.round(a.directionDeg)}°`} />
-      <Figure label="Rocking" value={lengthLabel(a.rockMm, units)} note="how far the readings leave one plane" />
-      <Figure label="Shift at the cut's bottom" value={lengthLabel(a.lateralShiftMm, units)} note={`depth varies ${lengthLabel(a.depthVariationMm, units)} across the bottom`} />
+      <Figure label={TERM.holderTilt.label} value={`${a.tiltDeg.toFixed(3)}°`} note={`toward ${Math.round(a.directionDeg)}°`} />
+      <Figure label={TERM.holderRock.label} value={lengthLabel(a.rockMm, units)} note="how far the readings leave one plane" />
+      <Figure label={TERM.axisShift.label} value={lengthLabel(a.lateralShiftMm, units)} note={`depth varies ${lengthLabel(a.depthVariationMm, units)} across the bottom`} />
       {cost !== null ? (
         <Figure
-          label="What the tilt costs"
+          label={TERM.tiltCost.label}
           testId="tilt-cost"
           tone={rocks || short ? "tight" : "clear"}
           value={`${lengthLabel(cost, units)} of clearance`}
