@@ -2,6 +2,7 @@
 // and the setup history show it. The arithmetic is the core's (geometry/verification.ts); this module only
 // words it. Pure: no I/O and no server-only import, so the job page, the API and the tests share one comparison.
 import { type AfterCutReadings, TRIAL_FIT_LABEL } from "@/model/schemas/jobs";
+import { TERM } from "@/model/glossary";
 import { type BandCheck, DEFAULT_VERIFY_TOLERANCE_MM, type MinimumCheck, type VerificationPlan, cutFigures } from "@/geometry";
 
 export { DEFAULT_VERIFY_TOLERANCE_MM, VerificationPlanError, planFromResult, type VerificationPlan } from "@/geometry";
@@ -29,7 +30,7 @@ const f = (n: number) => `${(Math.round(n * 1000) / 1000).toFixed(2)} mm`;
 const range = (b: BandCheck) => (b.minMm === b.maxMm ? f(b.minMm) : `${f(b.minMm)} – ${f(b.maxMm)}`);
 
 function bandRow(key: "cut-diameter" | "cut-depth", b: BandCheck, toleranceMm: number): VerificationCheck {
-  const [label, larger, smaller] = key === "cut-diameter" ? ["Cut diameter", "larger", "smaller"] : ["Cut depth", "deeper", "shallower"];
+  const [label, larger, smaller] = key === "cut-diameter" ? [TERM.cutDiameter.label, "larger", "smaller"] : [TERM.cutDepth.short, "deeper", "shallower"];
   return {
     key,
     label,
@@ -61,11 +62,11 @@ function minimumRow(key: CheckKey, label: string, m: MinimumCheck, okText: strin
 export function verifyCut(plan: VerificationPlan, r: AfterCutReadings, toleranceMm: number = DEFAULT_VERIFY_TOLERANCE_MM): Verification {
   const fig = cutFigures(plan, r, toleranceMm);
   const checks: VerificationCheck[] = [bandRow("cut-diameter", fig.diameter, toleranceMm), bandRow("cut-depth", fig.depth, toleranceMm)];
-  checks.push(minimumRow("radial-clearance", "Radial clearance to the skirt", fig.radial, "The skirt clears the cut.", (by) => `The skirt interferes by ${by}.`));
+  checks.push(minimumRow("radial-clearance", TERM.clearanceToCut.label, fig.radial, "The skirt clears the cut.", (by) => `The skirt interferes by ${by}.`));
   if (fig.depthClearance === null) {
     checks.push({
       key: "depth-clearance",
-      label: "Depth clearance under the skirt",
+      label: TERM.depthClearance.label,
       planned: "no step (cut opens into the crank chamber)",
       actual: "no step",
       plannedMm: null,

@@ -327,9 +327,10 @@ describe("the setup card PDF", () => {
     // Only the app's two faces: the drawings' text is set in the body face, not in a standard PDF font.
     expect(fontsEmbedded).toBe(2);
     expect(pdf.toString("latin1")).not.toMatch(/\/BaseFont \/(Helvetica|Times|Courier)/);
-    // Figures from the core's result for the example's first kit: cutter setting 44.80 mm, groove 2 with 2 × 0.10 + 1 × 0.50 mm.
+    // Figures from the core's result for the example's first kit: cutter setting 44.80 mm, groove 2 with 2 × 0.10 + 1 × 0.50 mm of shims.
     expect(text).toContain("44.80 mm");
-    expect(text).toContain("ring in groove 2, 2 × 0.10 mm + 1 × 0.50 mm");
+    expect(text).toContain("ring in groove 2 with 0.70 mm of shims: stops at");
+    expect(text).toContain("shims: 2 × 0.10 + 1 × 0.50 mm");
     expect(text).toMatch(/Wear eye protection/);
     expect(text).toMatch(/without crushing it/);
     expect(text).toMatch(/Remove every chip from the crankcase/);
