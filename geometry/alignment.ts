@@ -82,7 +82,7 @@ export function planeHeightMm(fit: Pick<PlaneFit, "a" | "b" | "cMm">, p: Vec2): 
 
 /**
  * Tool-axis position at depth z below the deck. The axis is square to the holder and passes through the
- * bearing at the pattern centre P, height h₀ = h(P): axis(z) = P + (h₀ + z)·(a, b), towards the high side.
+ * bearing at the pattern centre P, height h₀ = h(P): axis(z) = P + (h₀ + z)·(a, b), toward the high side.
  */
 export function axisAtDepthMm(fit: Pick<PlaneFit, "a" | "b" | "cMm">, bearingMm: Vec2, zMm: number): Vec2 {
   return add(bearingMm, scale([fit.a, fit.b], planeHeightMm(fit, bearingMm) + zMm));

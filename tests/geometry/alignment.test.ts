@@ -10,7 +10,7 @@ const at = (x: number, y: number, h: number) => ({ atMm: [x, y] as const, height
 // the expected figures here are worked by hand from the readings. That the tool axis stands square to the holder
 // and passes through the bearing at the stud-pattern centre is common practice, no published source.
 describe("holder plane", () => {
-  it("a holder 0.1 mm higher at +x over 56 mm tilts atan(0.1/56) towards +x", () => {
+  it("a holder 0.1 mm higher at +x over 56 mm tilts atan(0.1/56) toward +x", () => {
     const f = fitPlane([at(-28, 28, 30), at(28, 28, 30.1), at(28, -28, 30.1), at(-28, -28, 30)]);
     expect(tiltDeg(f)).toBeCloseTo((Math.atan(0.1 / 56) * 180) / Math.PI, 9);
     expect(tiltDirectionDeg(f)).toBeCloseTo(0, 6);
@@ -28,7 +28,7 @@ describe("holder plane", () => {
     expect(() => fitPlane(pts)).toThrow(DegenerateGeometryError);
   });
 
-  it("the tool axis at depth z is displaced by (h₀ + z)·(a, b) towards the high side", () => {
+  it("the tool axis at depth z is displaced by (h₀ + z)·(a, b) toward the high side", () => {
     const f = { a: 0.002, b: -0.001, cMm: 30 };
     const p = axisAtDepthMm(f, [0, 0], 25);
     expect(p[0]).toBeCloseTo(55 * 0.002, 12);

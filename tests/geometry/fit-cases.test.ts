@@ -38,7 +38,7 @@ describe("the rig's bearing sits at the stud-pattern centre", () => {
   it("the walls to the studs are measured from the pattern centre: the same 28√2 − 3.75 − R for all four", () => {
     const expected = 28 * Math.SQRT2 - 3.75 - 30.5;
     for (const label of ["a", "b", "c", "d"]) expect(wallOf(k, label).minWallMm).toBeCloseTo(expected, 9);
-    // The deck outline (Ø110 on the axis) is 55 − 3 from the centre towards +x.
+    // The deck outline (Ø110 on the axis) is 55 − 3 from the centre toward +x.
     expect(wallOf(k, "deck outline").minWallMm).toBeCloseTo(55 - 3 - 30.5, 9);
   });
 

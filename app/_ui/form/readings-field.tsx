@@ -40,7 +40,7 @@ export function ReadingsField<FV extends FieldValues>({
   const zone = useShopTimeZone();
   const texts = (field.value as string[] | undefined) ?? [];
   const values = texts.map((t) => parseLengthText(t, units)).map((r) => (r.ok ? r.value : undefined));
-  // Only readings without a message count towards the worst one and the spread.
+  // Only readings without a message count toward the worst one and the spread.
   const good = values
     .map((v, i) => [v, i] as const)
     .filter((p): p is readonly [number, number] => p[0] !== undefined && p[0] > 0 && !errorAt(formState.errors, `${name}.${p[1]}`));
