@@ -3,7 +3,7 @@ import { mirrorOutline, type Capture, type ShapeOutline, type ShapeParams } from
 import { temporal } from "zundo";
 import { createStore } from "zustand/vanilla";
 import type { CapturedShapes } from "@/app/_ui/capture/captured-shapes";
-import { lengthFieldText as lengthText, parseLengthText } from "@/model/units";
+import { fromUnits, lengthFieldText as lengthText, parseLengthText, toUnits } from "@/model/units";
 import { emptyOutline, type OutlineText, type PairText, type StudText } from "@/app/_ui/form/text-values";
 import { convertLengthTexts } from "@/app/_ui/form/units-text";
 
@@ -44,9 +44,9 @@ type Point = [number, number];
 export const SNAP = { mm: 0.1, in: 0.005 } as const;
 
 const snapText = (mm: number, units: LengthUnits, snap: boolean) => {
-  const v = units === "in" ? mm / 25.4 : mm;
+  const v = toUnits(mm, units);
   const s = snap ? Math.round(v / SNAP[units]) * SNAP[units] : v;
-  return lengthText(units === "in" ? s * 25.4 : s, units);
+  return lengthText(fromUnits(s, units), units);
 };
 
 /** A point in mm as texts in the units, snapped to the grid unless `snap` is false. */
