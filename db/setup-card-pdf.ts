@@ -1,6 +1,7 @@
 import "server-only";
 import { createRequire } from "node:module";
 import { join } from "node:path";
+import { MM_PER_INCH } from "@/geometry";
 import type { CardDrawing, CardVerdict, SetupCard } from "./setup-card";
 
 // The setup card as a PDF, drawn on the server with pdfkit: the figures on one A4 page, then each drawing on
@@ -26,7 +27,7 @@ const WARN = "#b3362c";
 const RULE = "#d9d3c6";
 
 /** Points per millimetre. */
-export const PT_PER_MM = 72 / 25.4;
+export const PT_PER_MM = 72 / MM_PER_INCH;
 const MARGIN = 36;
 /** The drawing pages' margin: 10 mm, as the printable page's. */
 const SHEET_MARGIN = 10 * PT_PER_MM;
