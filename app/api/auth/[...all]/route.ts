@@ -67,6 +67,7 @@ function jsonOf(text: string): unknown {
   try {
     return JSON.parse(text) as unknown;
   } catch {
+    // A body that is not JSON carries no fields to check; the auth library then answers it as it does any bad body.
     return undefined;
   }
 }
@@ -171,6 +172,7 @@ async function noStore(res: Promise<Response>): Promise<Response> {
     answer.headers.set("cache-control", "no-store");
     return answer;
   } catch {
+    // A redirect's headers are immutable: copy it so it can say no-store too.
     const copy = new Response(answer.body, answer);
     copy.headers.set("cache-control", "no-store");
     return copy;
