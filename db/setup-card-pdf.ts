@@ -2,6 +2,7 @@ import "server-only";
 import { createRequire } from "node:module";
 import { join } from "node:path";
 import { MM_PER_INCH } from "@/geometry";
+import { FIT, printed, SURFACE } from "@/model/palette";
 import type { CardDrawing, CardVerdict, SetupCard } from "./setup-card";
 
 // The setup card as a PDF, drawn on the server with pdfkit: the figures on one A4 page, then each drawing on
@@ -20,11 +21,12 @@ export const FONT_FILES = {
   numbers: join(process.cwd(), "node_modules", "@expo-google-fonts", "source-code-pro", "400Regular", "SourceCodePro_400Regular.ttf"),
 } as const;
 
-const INK = "#2b2f33";
-const INK2 = "#5b6167";
-const ACCENT = "#0f5e5c";
-const WARN = "#b3362c";
-const RULE = "#d9d3c6";
+// The palette's light theme (model/palette.ts): a warning is the one red of the fit code.
+const INK = SURFACE.ink.light;
+const INK2 = SURFACE["ink-2"].light;
+const ACCENT = SURFACE.accent.light;
+const WARN = printed(FIT.interfere);
+const RULE = SURFACE.rule.light;
 
 /** Points per millimetre. */
 export const PT_PER_MM = 72 / MM_PER_INCH;

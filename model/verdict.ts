@@ -1,4 +1,5 @@
 import type { ReasonCode, Verdict } from "@/geometry";
+import { printed, VERDICT_COLOURS } from "./palette";
 
 // The study's verdict for a kit in the product's words and colours, for every place that states it: the
 // job page, the setup card (page and PDF) and the consult page.
@@ -11,8 +12,12 @@ export const VERDICT_TEXT: Record<Verdict, { words: string; tone: VerdictTone }>
   "cannot-fit": { words: "Cannot fit safely", tone: "interfere" },
 };
 
-/** The tones as printed colours (the drawings' light palette, so screen and paper agree). */
-export const TONE_HEX: Record<VerdictTone, string> = { clear: "#0f6a63", tight: "#85560f", interfere: "#b3362c" };
+/** The tones as printed colours: the palette's verdict colours, light theme (model/palette.ts), so screen and paper agree. */
+export const TONE_HEX: Record<VerdictTone, string> = {
+  clear: printed(VERDICT_COLOURS["fits-as-is"]),
+  tight: printed(VERDICT_COLOURS["fits-after-cut"]),
+  interfere: printed(VERDICT_COLOURS["cannot-fit"]),
+};
 
 /** Why a kit got its verdict, in plain words. */
 export const REASON_TEXT: Record<ReasonCode, string> = {

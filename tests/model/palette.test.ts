@@ -44,6 +44,12 @@ describe("the stylesheet's colours are the palette's", () => {
     expect(darkStart).toBeGreaterThan(0);
     expect(declared(dark)).toEqual(cssVariables("dark"));
   });
+
+  it("the printed setup card keeps the light colours on a dark screen", () => {
+    const start = css.indexOf(".setup-card {");
+    expect(start).toBeGreaterThan(darkStart);
+    expect(declared(css.slice(start, css.indexOf("}", start)))).toEqual(cssVariables("light"));
+  });
 });
 
 describe("contrast of every pair that carries text (WCAG 2.1 AA)", () => {

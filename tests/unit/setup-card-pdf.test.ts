@@ -5,6 +5,7 @@ import { evaluateStudy, type Study } from "@/geometry";
 import type { PlanSnapshot } from "@/db/jobs";
 import { buildSetupCard, drawingScale, scaleText, setupCardDrawings, DRAWING_ROOM_MM } from "@/db/setup-card";
 import { setupCardPdf } from "@/db/setup-card-pdf";
+import { VERDICT_COLOURS } from "@/model/palette";
 import { measurePdf, widestBox } from "../integration/jobs-pdf-measure";
 import { roundStudy } from "../scene/fixtures";
 
@@ -71,7 +72,7 @@ describe("the setup card PDF", { timeout: 60_000 }, () => {
     expect(plan.result.kits[0].verdict).toBe("cannot-fit");
     const card = buildSetupCard(job(plan, { reason: "passages to be welded and re-cut" }), plan, "Quillfern Engine Works", "mm");
     expect(card.verdict.words).toBe("Cannot fit safely");
-    expect(card.verdict.color).toBe("#b3362c");
+    expect(card.verdict.color).toBe(VERDICT_COLOURS["cannot-fit"].color.light);
     const pages = await measurePdf(new Uint8Array(await setupCardPdf(card, setupCardDrawings(plan, card.kitIndex, "mm"))));
     expect(pages.length).toBe(3);
     for (const p of pages) expect(p.text.replace(/\s+/g, " ")).toMatch(/CANNOT FIT SAFELY — planned on Ada Quillfern's override \(2 Dec 2026\): passages to be welded/);

@@ -4,12 +4,13 @@ import { dateText } from "@/model/dates";
 import { blockingReasons, VERDICT_TEXT } from "@/model/verdict";
 import type { JobView } from "@/db/jobs";
 
+// The verdicts' own colours (model/palette.ts), apart from the clearance bands'.
 const TONE_BOX = {
-  clear: "border-clear bg-clear-soft",
-  tight: "border-tight bg-tight-soft",
-  interfere: "border-interfere bg-interfere-soft",
+  clear: "border-verdict-fits bg-verdict-fits-soft",
+  tight: "border-verdict-after-cut bg-verdict-after-cut-soft",
+  interfere: "border-verdict-cannot bg-verdict-cannot-soft",
 } as const;
-const TONE_WORDS = { clear: "text-clear", tight: "text-tight", interfere: "text-interfere" } as const;
+const TONE_WORDS = { clear: "text-verdict-fits", tight: "text-verdict-after-cut", interfere: "text-verdict-cannot" } as const;
 
 /**
  * The study's verdict for the planned kit, at the top of the job: its words in its colour, why a kit cannot
