@@ -9,7 +9,7 @@ import { fakesEnv } from "../../scripts/services.mjs";
 
 declare module "vitest" {
   export interface ProvidedContext {
-    jobFakes: { stripeURL: string; webhookSecret: string; secretKey: string; s3: Record<string, string> };
+    jobFakes: { stripeURL: string; webhookSecret: string; secretKey: string; s3: Record<string, string>; objectDir: string };
   }
 }
 
@@ -20,7 +20,7 @@ export default async function setup(project: TestProject) {
   const store = await startObjectStore({ port: 0 });
   const env = fakesEnv({ payments, store, secretKey, webhookSecret });
   Object.assign(process.env, env);
-  project.provide("jobFakes", { stripeURL: payments.url, webhookSecret, secretKey, s3: store.env });
+  project.provide("jobFakes", { stripeURL: payments.url, webhookSecret, secretKey, s3: store.env, objectDir: store.directory });
   return async () => {
     await payments.stop();
     await store.stop();

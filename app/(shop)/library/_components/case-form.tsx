@@ -2,13 +2,13 @@
 
 import { CaseProfileSchema, type LengthUnits } from "@/geometry";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { FormProvider } from "react-hook-form";
+import { FormProvider, useWatch } from "react-hook-form";
 import { useStore } from "zustand";
 import { FormNotice } from "../../../_ui/field";
 import type { CaseRow } from "../../../_ui/query/types";
 import { caseDefaults, caseDoc, caseFieldDefaults, caseToCore, mergeCase, type CaseFormValues } from "./case-values";
 import { errorAt } from "@/app/_ui/form/field-error";
-import { lengthFieldText as lengthText, parseLengthText } from "@/model/units";
+import { lengthFieldText as lengthText, lengthLabel, parseLengthText } from "@/model/units";
 import { ReadingsField } from "@/app/_ui/form/readings-field";
 import { SaveBar } from "@/app/_ui/form/save-bar";
 import { TextField } from "@/app/_ui/form/text-field";
@@ -144,6 +144,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
             <CasePhotoContext.Provider value={photo.link}>
               <CasePlan store={store} units={units} scope={scope} onCommit={validate} caseId={row?.id ?? null} />
             </CasePhotoContext.Provider>
+            <CrankLine units={units} />
           </div>
         </div>
         <SaveBar busy={busy} isNew={!row} backHref="/library?kind=cases" dirty={form.formState.isDirty || shapesDirty || photo.dirty} />
@@ -213,4 +214,25 @@ function useCasePhoto(row: CaseRow | null) {
   };
 
   return { link, afterSave, dirty, notice };
+}
+
+/** One line beside the plan on the crank chamber: what the study will check it with, or that it will not. */
+function CrankLine({ units }: { units: LengthUnits }) {
+  const crank = useWatch<CaseFormValues, "crank">({ name: "crank" });
+  const read = (t: string | undefined) => {
+    const r = parseLengthText(t, units);
+    return r.ok ? r.value : undefined;
+  };
+  const axis = read(crank?.deckToAxisMm);
+  const radius = read(crank?.webRadiusMm);
+  const span = read(crank?.webSpanMm);
+  const text =
+    axis !== undefined && radius !== undefined && span !== undefined
+      ? `Crank chamber: axis ${lengthLabel(axis, units)} below the deck, webs ${lengthLabel(radius, units)} in radius and ${lengthLabel(span, units)} across.`
+      : "Crank chamber not given: the study will not check the skirt against the crank webs.";
+  return (
+    <p className="mt-3 text-sm text-ink-2" data-testid="case-crank-line">
+      {text}
+    </p>
+  );
 }
