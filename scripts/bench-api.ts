@@ -1,9 +1,14 @@
-// The API benchmark: `npm run bench:api [-- --seconds 10 --connections 50]`.
+// The API benchmark: `npm run bench:api [-- --seconds 10 --connections 50 --no-build --cpu-prof DIR]`.
 // Starts the production server on 127.0.0.1 against a fresh seeded file database, signs in, and loads it
 // with autocannon for a bounded time: reading a study's results (the five-kit demo study) and listing
-// studies. In the same run, a bare node:http handler (a child process) reads the same rows through the
-// same data layer and libSQL client, without the framework and the session check. Prints requests/s and
-// p99 for both, and their ratio. A benchmark, not a test: it reports, and fails only when a request fails.
+// studies. In the same run, two floors answer the same routes:
+// - the framework floor: a route handler of the same production server (app/bench-floor) that answers the
+//   same JSON text, already held, with no session check and no database. It exists only because the
+//   benchmark starts the server with BOREWRIGHT_BENCH_FLOOR naming the file of those texts;
+// - the bare floor: a node:http handler (a child process) that reads the same rows through the same data
+//   layer and libSQL client, without the framework and the session check.
+// Prints requests/s, p50 and p99 of each, and the app's share of each floor. A benchmark, not a test: it
+// reports, and fails only when a request fails. `--cpu-prof DIR` writes the app server's CPU profile there.
 //
 // Run with tsx's react-server condition (the data layer is server-only):
 //   tsx --conditions=react-server scripts/bench-api.ts
@@ -68,21 +73,35 @@ async function load(url: string, headers: Record<string, string>, connections: n
   return { requestsPerSecond: Math.round(r.requests.average), p99Ms: r.latency.p99, p50Ms: r.latency.p50, non2xx: r.non2xx, errors: r.errors + r.timeouts };
 }
 
+function textArg(name: string): string | null {
+  const i = process.argv.indexOf(`--${name}`);
+  return i >= 0 && process.argv[i + 1] && !process.argv[i + 1].startsWith("--") ? process.argv[i + 1] : null;
+}
+
+const percent = (part: number, whole: number) => `${((part / Math.max(1, whole)) * 100).toFixed(0)} %`;
+
 async function main() {
   const seconds = arg("seconds", 10);
   const connections = arg("connections", 50);
+  const profileDir = textArg("cpu-prof");
   const children: ChildProcess[] = [];
   const dir = mkdtempSync(join(tmpdir(), "borewright-bench-"));
-  const stop = () => {
-    for (const c of children) if (c.exitCode === null) c.kill("SIGTERM");
+  const stop = async () => {
+    await Promise.all(
+      children
+        .filter((c) => c.exitCode === null)
+        .map((c) => new Promise<void>((resolve) => {
+          c.once("exit", () => resolve());
+          c.kill("SIGTERM");
+        })),
+    );
     rmSync(dir, { recursive: true, force: true });
   };
   process.on("SIGINT", () => {
-    stop();
-    process.exit(130);
+    void stop().then(() => process.exit(130));
   });
   try {
-    if (buildIsStale()) run("npx", ["next", "build"]);
+    if (!process.argv.includes("--no-build") && buildIsStale()) run("npx", ["next", "build"]);
     const databaseURL = `file:${join(dir, "bench.db")}`;
     await applyMigrations({ ...process.env, DATABASE_URL: databaseURL });
     const client = createClient({ url: databaseURL });
@@ -94,9 +113,18 @@ async function main() {
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;
     const secret = randomBytes(32).toString("base64url");
-    const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: secret, PAYMENTS: "off" } });
+    const floorFile = join(dir, "floor.json");
+    const env = { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: secret, PAYMENTS: "off", BOREWRIGHT_BENCH_FLOOR: floorFile };
+    // Node refuses --cpu-prof in NODE_OPTIONS: a profiled server is started here with it on the command line.
+    const server = profileDir
+      ? spawn(process.execPath, ["--cpu-prof", `--cpu-prof-dir=${profileDir}`, "node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+          cwd: root,
+          env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production", ...env },
+          stdio: ["ignore", "ignore", "inherit"],
+        })
+      : startNext({ port, quiet: true, env });
     children.push(server);
-    await waitFor(`${base}/sign-in`, 60_000);
+    await waitFor(`${base}/sign-in`, 60_000, server);
 
     const owner = DEMO_PEOPLE[0];
     const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
@@ -107,8 +135,19 @@ async function main() {
     if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}`);
     const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
     const headers = { cookie };
-    const check = await fetch(`${base}/api/v1/studies/${STUDY_ID}/results`, { headers });
-    if (check.status !== 200) throw new Error(`results answered ${check.status}: ${await check.text()}`);
+
+    // The framework floor answers the texts the measured routes answer now.
+    const routes = [
+      { name: `study results (${connections} connections)`, path: `/api/v1/studies/${STUDY_ID}/results`, floor: "/bench-floor/results" },
+      { name: `list studies (${connections} connections)`, path: LIST_PATH, floor: "/bench-floor/list" },
+    ] as const;
+    const texts: Record<string, string> = {};
+    for (const r of routes) {
+      const res = await fetch(`${base}${r.path}`, { headers });
+      if (res.status !== 200) throw new Error(`${r.path} answered ${res.status}: ${await res.text()}`);
+      texts[r.floor.split("/").pop() as string] = await res.text();
+    }
+    writeFileSync(floorFile, JSON.stringify(texts));
 
     const barePort = await freePort();
     const bare = spawn(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), "--bare", String(barePort)], {
@@ -118,47 +157,42 @@ async function main() {
     });
     children.push(bare);
     const bareBase = `http://127.0.0.1:${barePort}`;
-    await waitFor(`${bareBase}/`, 30_000);
+    await waitFor(`${bareBase}/`, 30_000, bare);
 
     // A short warm-up of each, so the first compilations are not measured.
-    for (const url of [`${base}/api/v1/studies/${STUDY_ID}/results`, `${base}${LIST_PATH}`, `${bareBase}/api/v1/studies/${STUDY_ID}/results`, `${bareBase}${LIST_PATH}`]) {
-      await autocannon({ url, headers, connections: 4, amount: 200 });
+    for (const r of routes) {
+      for (const url of [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`]) await autocannon({ url, headers, connections: 4, amount: 200 });
     }
 
-    const rows: { name: string; app: Figures; bare: Figures }[] = [];
-    for (const [name, path] of [
-      [`study results (${connections} connections)`, `/api/v1/studies/${STUDY_ID}/results`],
-      [`list studies (${connections} connections)`, LIST_PATH],
-    ] as const) {
-      const app = await load(`${base}${path}`, headers, connections, seconds);
-      const bareFigures = await load(`${bareBase}${path}`, {}, connections, seconds);
-      rows.push({ name, app, bare: bareFigures });
+    const rows: { name: string; bytes: number; app: Figures; floor: Figures; bare: Figures }[] = [];
+    for (const r of routes) {
+      const app = await load(`${base}${r.path}`, headers, connections, seconds);
+      const floor = await load(`${base}${r.floor}`, headers, connections, seconds);
+      const bareFigures = await load(`${bareBase}${r.path}`, {}, connections, seconds);
+      rows.push({ name: r.name, bytes: Buffer.byteLength(texts[r.floor.split("/").pop() as string]), app, floor, bare: bareFigures });
     }
 
     console.log(`\nAPI benchmark: ${seconds} s per run, 127.0.0.1, production build, file database (libSQL)\n`);
-    console.log("what".padEnd(34) + "app req/s".padStart(11) + "app p99".padStart(10) + "bare req/s".padStart(12) + "bare p99".padStart(10) + "app/bare".padStart(10));
+    const columns = ["app req/s", "p50", "p99", "floor req/s", "p50", "p99", "bare req/s", "p50", "p99", "app/floor", "app/bare"];
+    console.log("what".padEnd(34) + columns.map((c) => c.padStart(c.includes("req/s") ? 12 : 9)).join(""));
     let failed = false;
     for (const r of rows) {
-      const ratio = r.app.requestsPerSecond / Math.max(1, r.bare.requestsPerSecond);
-      console.log(
-        r.name.padEnd(34) +
-          String(r.app.requestsPerSecond).padStart(11) +
-          `${r.app.p99Ms} ms`.padStart(10) +
-          String(r.bare.requestsPerSecond).padStart(12) +
-          `${r.bare.p99Ms} ms`.padStart(10) +
-          `${(ratio * 100).toFixed(0)} %`.padStart(10),
-      );
-      if (r.app.non2xx || r.app.errors || r.bare.non2xx || r.bare.errors) {
-        failed = true;
-        console.error(`  ${r.name}: app ${r.app.non2xx} non-2xx, ${r.app.errors} errors; bare ${r.bare.non2xx} non-2xx, ${r.bare.errors} errors`);
+      const cells = [r.app, r.floor, r.bare].flatMap((f) => [String(f.requestsPerSecond).padStart(12), `${f.p50Ms} ms`.padStart(9), `${f.p99Ms} ms`.padStart(9)]);
+      console.log(r.name.padEnd(34) + cells.join("") + percent(r.app.requestsPerSecond, r.floor.requestsPerSecond).padStart(9) + percent(r.app.requestsPerSecond, r.bare.requestsPerSecond).padStart(9));
+      for (const [what, f] of [["app", r.app], ["floor", r.floor], ["bare", r.bare]] as const) {
+        if (f.non2xx || f.errors) {
+          failed = true;
+          console.error(`  ${r.name}, ${what}: ${f.non2xx} non-2xx, ${f.errors} errors`);
+        }
       }
     }
-    console.log("\nAim: p99 under 50 ms, and at least half the bare handler's requests/s.");
+    console.log(`\nAnswer sizes: ${rows.map((r) => `${r.name.split(" (")[0]} ${r.bytes} bytes`).join(", ")}.`);
+    console.log("Aim: at least 80 % of the framework floor's requests/s for both routes; list studies p99 at most 100 ms.");
     mkdirSync(join(root, "bench-results"), { recursive: true });
     writeFileSync(join(root, "bench-results", "api.json"), `${JSON.stringify({ at: new Date().toISOString(), seconds, connections, rows }, null, 2)}\n`);
     if (failed) process.exitCode = 1;
   } finally {
-    stop();
+    await stop();
   }
 }
 
