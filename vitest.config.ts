@@ -12,7 +12,8 @@ export default defineConfig({
         test: {
           name: "unit",
           sequence: { groupOrder: 0 },
-          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/scripts/**/*.test.ts", "tests/unit/**/*.test.ts"],
+          // tests/ mirrors the source: tests/db/csv.test.ts is the test of db/csv/, tests/app/… of app/…
+          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/scripts/**/*.test.ts", "tests/db/**/*.test.ts", "tests/app/**/*.test.ts", "tests/lint/**/*.test.ts", "tests/unit/**/*.test.ts"],
           environment: "node",
         },
       },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { createShapeStore, gesture, switchUnits, type ShapeDoc } from "../../app/(shop)/library/_components/shapes/shape-store";
-import { emptyOutline } from "../../app/_ui/form/text-values";
+import { createShapeStore, gesture, switchUnits, type ShapeDoc } from "@/app/(shop)/library/_components/shapes/shape-store";
+import { emptyOutline } from "@/app/_ui/form/text-values";
 
 const square = (): ShapeDoc => ({
   deck: { ...emptyOutline("polygon"), pointsMm: [["50", "-50"], ["50", "50"], ["-50", "50"], ["-50", "-50"]] },

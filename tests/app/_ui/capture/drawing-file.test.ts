@@ -221,7 +221,7 @@ describe("reading an SVG", () => {
 
 describe("the demo case's drawing", () => {
   it("imports to the same deck, mouth and studs as the demo photo shows", async () => {
-    const { DEMO_CASE, demoCaseDxf } = await import("../../scripts/render-demo-case-photo");
+    const { DEMO_CASE, demoCaseDxf } = await import("@/scripts/render-demo-case-photo");
     const read = readDrawing("eight-sided-case-deck.dxf", demoCaseDxf(), { unit: "mm" });
     const roles = Object.fromEntries(read.shapes.map((s) => [s.id, s.layer === "DECK" ? "deck" : s.layer === "MOUTH" ? "mouth" : s.layer === "STUDS" ? "stud" : "passage"] as const));
     const { shapes, problems } = pickShapes(read, roles, { unit: "mm", origin: "mouth" });
