@@ -10,7 +10,7 @@ export default defineConfig({
     // a minute a mutant here. A narrower set can only kill fewer mutants, so its score is a lower bound.
     include: process.env.MUTATION_TESTS
       ? process.env.MUTATION_TESTS.split(",")
-      : ["tests/geometry/**/*.test.ts", "tests/unit/job-status.test.ts", "tests/model/job-status*.test.ts", "tests/unit/verification.test.ts"],
+      : ["tests/geometry/**/*.test.ts", "tests/model/job-status*.test.ts", "tests/db/verification.test.ts"],
     environment: "node",
     // Instrumented code on a shared 2-core machine runs several times slower than plain: the heaviest depth-stop
     // search needs more than vitest's default 5 s there.
