@@ -92,7 +92,7 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
       </div>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
         <div className="flex min-w-0 flex-col gap-3">
-          <Toolbar view={fullView} compare={compare} customer={customer} onView={(v) => setView((s) => ({ ...s, ...v }))} onCompare={setCompare} onSnapshot={snapshot} multipleKits={multi} />
+          <Toolbar view={fullView} compare={compare} customer={customer} onView={(v) => setView((s) => ({ ...s, ...v }))} onCompare={setCompare} onSnapshot={snapshot} multipleKits={multi} portWindows={(study.kits[snap.kitIndex]?.baseGasket?.ports.length ?? 0) > 0} />
           <div
             className="card relative aspect-[4/3] max-h-[72vh] w-full overflow-hidden bg-paper-2"
             role="img"

@@ -12,6 +12,8 @@ interface Props {
   readonly onCompare: (m: CompareMode) => void;
   readonly onSnapshot: () => void;
   readonly multipleKits: boolean;
+  /** The kit on show has base-gasket port windows to lay over the case's passages. */
+  readonly portWindows?: boolean;
 }
 
 const PRESETS: [CameraPreset, string][] = [
@@ -21,7 +23,7 @@ const PRESETS: [CameraPreset, string][] = [
 ];
 
 /** View controls: camera presets, the section plane, the exaggeration, the comparison and the snapshot. */
-export function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot, multipleKits }: Props) {
+export function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot, multipleKits, portWindows }: Props) {
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm" role="toolbar" aria-label="View">
       <div className="flex gap-1" role="group" aria-label="Camera">
@@ -58,6 +60,12 @@ export function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot
         />
         <span className="num w-9">{view.sectionAngleDeg}°</span>
       </label>
+      {portWindows && (
+        <label className="flex items-center gap-2">
+          <input type="checkbox" className="accent-accent" checked={view.ports !== false} onChange={(e) => onView({ ports: e.target.checked })} data-testid="ports-toggle" />
+          Kit&apos;s port windows
+        </label>
+      )}
       {!customer && (
         <label className="flex items-center gap-2">
           Tilt and offset
