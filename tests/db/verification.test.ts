@@ -1,7 +1,8 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { evaluateStudy, parseStudy } from "@/geometry";
-import { AfterCutReadingsSchema, planFromResult, verifyCut, type AfterCutReadings, type VerificationPlan } from "@/db/verification";
+import { verificationPlan } from "../geometry/verification-plan";
+import { AfterCutReadingsSchema, planFromResult, verifyCut, type AfterCutReadings } from "@/db/verification";
 
 // The plan comes from the core's own evaluation of the shipped example study (invented data); the
 // verification arithmetic is common practice, no published source: worst reading wins, clearance is
@@ -10,21 +11,10 @@ const study = parseStudy(JSON.parse(readFileSync("public/examples/study.json", "
 const result = evaluateStudy(study);
 const kitId = study.kits[0].id;
 
-const plan: VerificationPlan = {
-  kitName: "test kit",
-  cutDiameterMm: 55.1,
-  cutDepthMm: 25.25,
-  throughMouth: false,
-  skirtDiameterMm: 53.96,
-  skirtLengthMm: 24.7,
-  minRadialClearanceMm: 0.5,
-  minDepthClearanceMm: 0.5,
-  minSealingLandMm: 2.5,
-  studs: [
-    { label: "front left", plannedMm: 8.27 },
-    { label: "rear right", plannedMm: 8.31 },
-  ],
-};
+const plan = verificationPlan([
+  { label: "front left", plannedMm: 8.27 },
+  { label: "rear right", plannedMm: 8.31 },
+]);
 
 const good: AfterCutReadings = {
   cutDiameterMm: [55.1, 55.12, 55.08],

@@ -14,22 +14,12 @@ import {
   VerificationPlanError,
 } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
+import { verificationPlan } from "./verification-plan";
 
 // The verification arithmetic is common practice, no published source: the worst reading counts, radial
 // clearance is half the difference of the smallest cut diameter and the skirt, depth clearance is the
 // shallowest depth minus the skirt's protrusion with the gasket stack fitted. Values worked by hand beside each check.
-const plan: VerificationPlan = {
-  kitName: "test kit",
-  cutDiameterMm: 55.1,
-  cutDepthMm: 25.25,
-  throughMouth: false,
-  skirtDiameterMm: 53.96,
-  skirtLengthMm: 24.7,
-  minRadialClearanceMm: 0.5,
-  minDepthClearanceMm: 0.5,
-  minSealingLandMm: 2.5,
-  studs: [{ label: "front left", plannedMm: 8.27 }],
-};
+const plan = verificationPlan([{ label: "front left", plannedMm: 8.27 }]);
 const cut = { cutDiameterMm: [55.1, 55.12, 55.08], cutDepthMm: [25.25, 25.27], sealingLandMm: [{ stud: " Front Left ", valueMm: 2.4 }], gasketStackMm: 0.2 };
 
 describe("after-cut figures against the plan", () => {
