@@ -29,7 +29,8 @@ export function demoStudy(studyId = DEMO_STUDIES[0].id): { study: Study; name: s
     case: { ...data, name: c.name },
     kits: s.kitIds.map((id) => {
       const k = DEMO_KITS.find((x) => x.id === id)!;
-      return { ...k.data, id: k.id, name: k.name };
+      // The price is money the core never reads; it stays with the library row.
+      return { ...k.data, price: undefined, id: k.id, name: k.name };
     }),
     ...(rig ? { rig: { ...rig.data, name: rig.name } } : {}),
     ...(s.cut ? { cut: s.cut } : {}),

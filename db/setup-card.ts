@@ -149,7 +149,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
     "Bit orientation: cutting edge leading in the direction of rotation; bit tight in the head.",
     k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",
     k.rig?.depthStop.reached
-      ? `Depth stop confirmed with the bit resting on the deck: ${depthStopSentence(k.rig.depthStop, units)}.`
+      ? "Depth stop set as above and confirmed with the bit resting on the deck."
       : "Depth stop confirmed with the bit resting on the deck.",
     TRIAL_CUT_STEP,
     "Light feed, drill at the speed above; stop at the ring and let the cutter dwell before withdrawing.",

@@ -34,7 +34,7 @@ export const TERM = {
   removed: term("Aluminium removed", "Removed", "Metal cut away"),
   crankClearance: term("Skirt to the crank webs", "Crank clearance", "Room between the cylinder and the crankshaft"),
   // ——— The rig ———
-  cutterSetting: term("Cutter setting (caliper across the head and the bit)", "Cutter setting", "Machine setting"),
+  cutterSetting: term("Cutter setting (caliper across head and bit)", "Cutter setting", "Machine setting"),
   bit: term("Bit", "Bit", "Cutting tool"),
   screwHeads: term("Screw-head clearance in the cut", "Screw heads", "Room for the cutter's screws"),
   depthStop: term("Depth stop", "Depth stop", "Depth setting"),
