@@ -11,6 +11,7 @@ const STATUS = {
   move_refused: 409,
   wrong_status: 409,
   plan_fixed: 409,
+  quote_fixed: 409,
   no_plan: 409,
   no_cut: 422,
   paid: 409,

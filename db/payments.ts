@@ -2,6 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq } from "drizzle-orm";
 import Stripe from "stripe";
+import { formatMoney, type CurrencyCode } from "@/model/money";
 import { DataError } from "./errors";
 import { AccessError, type Caller } from "./access";
 import { appUrl } from "./auth";
@@ -112,7 +113,7 @@ export async function handlePaymentWebhook(payload: string, signature: string | 
       kind: "payment",
       fromStatus: null,
       toStatus: null,
-      summary: `deposit paid: ${(payment.amount / 100).toFixed(2)} ${payment.currency.toUpperCase()}`,
+      summary: `deposit paid: ${formatMoney({ amountMinor: payment.amount, currency: payment.currency.toUpperCase() as CurrencyCode })}`,
     });
     outcome = { status: 200, body: { received: true, applied: true } };
   });

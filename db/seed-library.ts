@@ -81,11 +81,11 @@ export const DEMO_CASES: CaseSeed[] = [
   },
 ];
 
-const kit = (id: string, name: string, boreMm: number, skirt: number[], length: number[], studs: ReturnType<typeof square>, thread: string, gaskets: number[], price: number, notes = ""): KitSeed => ({
+const kit = (id: string, name: string, boreMm: number, skirt: number[], length: number[], studs: ReturnType<typeof square>, thread: string, gaskets: number[], /** whole euros */ price: number, notes = ""): KitSeed => ({
   id,
   name,
   notes,
-  data: { boreMm, skirtDiameterReadingsMm: skirt, skirtLengthReadingsMm: length, studs, studThread: thread, baseGasketsMm: gaskets, price },
+  data: { boreMm, skirtDiameterReadingsMm: skirt, skirtLengthReadingsMm: length, studs, studThread: thread, baseGasketsMm: gaskets, price: { amountMinor: price * 100, currency: "EUR" } },
 });
 
 export const DEMO_KITS: KitSeed[] = [

@@ -27,7 +27,7 @@ export async function seedDemo(db: SeedDb): Promise<number> {
     const shop = await tx.query.organization.findFirst({ where: eq(schema.organization.id, DEMO_SHOP.id) });
     if (!shop) {
       await tx.insert(schema.organization).values({ ...DEMO_SHOP, createdAt: new Date() });
-      await tx.insert(schema.shopSettings).values({ organizationId: DEMO_SHOP.id });
+      await tx.insert(schema.shopSettings).values({ organizationId: DEMO_SHOP.id, currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 });
       written += 2;
     }
     for (const person of DEMO_PEOPLE) {

@@ -1,7 +1,8 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
 import { LimitsSchema, StudyLimitsSchema, resolveLimits, type StudyLimits } from "@/geometry";
-import type { SettingsPatch, ShopSettings } from "@/model/schemas";
+import { CURRENCY_CODES, type CurrencyCode } from "@/model/money";
+import type { Pricing, SettingsPatch, ShopSettings } from "@/model/schemas";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { DataError, conflict } from "./errors";
@@ -11,8 +12,8 @@ import * as schema from "./schema";
 const prefixed = (prefix: string, fields: Record<string, string>) =>
   Object.fromEntries(Object.entries(fields).map(([k, v]) => [`${prefix}.${k}`, v]));
 
-// A shop's settings: the units it reads by default and its own limits (a subset; the rest are the
-// core's defaults, shown as such).
+// A shop's settings: the units it reads by default, its own limits (a subset; the rest are the core's
+// defaults, shown as such) and its prices (currency, labour rate, tax and deposit shares).
 
 /** The limits the shop set itself, as stored (a damaged or outdated column counts as none set). */
 export function parseShopLimits(json: string | null | undefined): StudyLimits {
@@ -38,11 +39,26 @@ export async function shopLimits(shopId: string): Promise<StudyLimits> {
   return parseShopLimits((await readRow(shopId))?.limitsJson);
 }
 
-function present(row: { units: string; limitsJson: string; version: number } | null): ShopSettings {
+type Row = typeof schema.shopSettings.$inferSelect;
+
+const DEFAULT_PRICING: Pricing = { currency: "EUR", labourRateMinor: null, taxPercent: 0, depositPercent: 30 };
+
+function pricingOf(row: Row | null): Pricing {
+  if (!row) return DEFAULT_PRICING;
+  const currency = (CURRENCY_CODES as readonly string[]).includes(row.currency) ? (row.currency as CurrencyCode) : DEFAULT_PRICING.currency;
+  return { currency, labourRateMinor: row.labourRateMinor, taxPercent: row.taxPercent, depositPercent: row.depositPercent };
+}
+
+/** The shop's currency, labour rate, tax and deposit shares, for pricing a quote. */
+export async function shopPricing(shopId: string): Promise<Pricing> {
+  return pricingOf(await readRow(shopId));
+}
+
+function present(row: Row | null): ShopSettings {
   const own = parseShopLimits(row?.limitsJson);
   const resolved = resolveLimits(own);
   return {
-    settings: { units: row?.units === "in" ? "in" : "mm", limits: resolved.values, defaulted: resolved.defaulted, timeZone: shopTimeZone() },
+    settings: { units: row?.units === "in" ? "in" : "mm", limits: resolved.values, defaulted: resolved.defaulted, timeZone: shopTimeZone(), pricing: pricingOf(row) },
     version: row?.version ?? 1,
   };
 }
@@ -53,7 +69,7 @@ export async function getSettings(caller: Caller): Promise<ShopSettings> {
   return present(await readRow(caller.shopId));
 }
 
-/** Changes the shop's units or limits (owner only); a stale version is refused with 409. */
+/** Changes the shop's units, limits or prices (owner only); a stale version is refused with 409. */
 export async function updateSettings(caller: Caller, patch: SettingsPatch): Promise<ShopSettings> {
   if (caller.role !== "owner") throw new AccessError("forbidden", "Only the shop's owner changes its settings.");
   const db = await getDb();
@@ -68,6 +84,7 @@ export async function updateSettings(caller: Caller, patch: SettingsPatch): Prom
   const set = {
     ...(patch.units !== undefined ? { units: patch.units } : {}),
     ...(patch.limits !== undefined ? { limitsJson: JSON.stringify(patch.limits) } : {}),
+    ...(patch.pricing !== undefined ? patch.pricing : {}),
   };
   if (Object.keys(set).length === 0) return present(current);
   const s = schema.shopSettings;
@@ -75,7 +92,7 @@ export async function updateSettings(caller: Caller, patch: SettingsPatch): Prom
     // A shop made before settings existed: its first change creates the row, unless another did first.
     const inserted = await db
       .insert(s)
-      .values({ organizationId: caller.shopId, units: set.units ?? "mm", limitsJson: set.limitsJson ?? "{}", version: 2, updatedAt: new Date() })
+      .values({ organizationId: caller.shopId, ...DEFAULT_PRICING, ...set, units: set.units ?? "mm", limitsJson: set.limitsJson ?? "{}", version: 2, updatedAt: new Date() })
       .onConflictDoNothing();
     if (inserted.rowsAffected === 0) throw conflict();
   } else {

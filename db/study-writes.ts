@@ -194,7 +194,12 @@ export async function importStudy(caller: Caller, study: Study): Promise<StudyRo
   const now = Date.now();
   const { name: caseName, ...caseData } = study.case;
   const caseValues = newLibraryValues(caller, "cases", { name: caseName, data: caseData }, now);
-  const kitValues = study.kits.map((k) => newLibraryValues(caller, "kits", { name: k.name, data: without(without(k, "id"), "name") }, now));
+  // A study file's kit price is a bare number: read as euros, as the library's prices were before they carried a currency.
+  const kitValues = study.kits.map((k) => {
+    const { price, ...rest } = without(without(k, "id"), "name");
+    const data = price === undefined ? rest : { ...rest, price: { amountMinor: Math.round(price * 100), currency: "EUR" as const } };
+    return newLibraryValues(caller, "kits", { name: k.name, data }, now);
+  });
   const rigValues = study.rig ? (({ name, ...data }) => newLibraryValues(caller, "rigs", { name, data }, now))(study.rig) : null;
 
   const studyId = newId();

@@ -10,8 +10,8 @@ type RigInput = NonNullable<StudyInput["rig"]>;
 
 /** What the assembler reads of a case row: its name, its data and the mouth readings taken on it. */
 export type CaseRowPart = { name: string; data: Omit<CaseInput, "name">; mouthReadingsMm?: readonly { valueMm: number }[] };
-/** What the assembler reads of a kit row. */
-export type KitRowPart = { id: string; name: string; data: Omit<KitInput, "id" | "name"> };
+/** What the assembler reads of a kit row (its price is money the core never reads, so it stays behind). */
+export type KitRowPart = { id: string; name: string; data: Omit<KitInput, "id" | "name" | "price"> & { price?: unknown } };
 /** What the assembler reads of a rig row. */
 export type RigRowPart = { name: string; data: Omit<RigInput, "name"> };
 
@@ -52,7 +52,11 @@ export function caseFromRow(row: CaseRowPart): CaseInput {
 export function assembleStudy(rows: StudyRows, shopLimits: StudyInput["limits"] | null): AssembledStudy {
   const study: AssembledStudy = {
     name: rows.name,
-    kits: rows.kits.map((k) => ({ ...k.data, id: k.id, name: k.name }) as KitInput),
+    kits: rows.kits.map((k) => {
+      const data: Record<string, unknown> = { ...k.data };
+      delete data.price;
+      return { ...data, id: k.id, name: k.name } as KitInput;
+    }),
   };
   if (rows.case) study.case = caseFromRow(rows.case);
   if (rows.rig) study.rig = { ...rows.rig.data, name: rows.rig.name } as RigInput;

@@ -1,6 +1,7 @@
 import type { z } from "zod";
 import { CaseCreateSchema, KitCreateSchema, type CaseData, type KitData, type LibraryCsvKind } from "@/model/schemas";
-import { fmt, numList, num, outline, outlineText, pockets, pocketsText, studs, studsText, yesNo } from "./cells";
+import { amountText, CURRENCY_CODES, parseAmount, type CurrencyCode, type Money } from "@/model/money";
+import { CellError, fmt, numList, num, outline, outlineText, pockets, pocketsText, studs, studsText, yesNo } from "./cells";
 
 // The columns of the library CSV: where each cell goes in a create body, and a library row as cells.
 // The formula neutraliser is applied to every cell when the CSV is written (text.ts), not here.
@@ -14,6 +15,18 @@ export type Column = {
 };
 
 const text = (t: string) => t.trim();
+
+/** A price cell: the amount and its ISO 4217 code, "289.00 EUR" (money, never a bare number). */
+function price(t: string): Money {
+  const m = /^\s*([\d.,\s]+?)\s*([A-Za-z]{3})\s*$/.exec(t);
+  if (!m) throw new CellError(`"${t.trim()}": write the price with its currency code, e.g. 289.00 EUR`);
+  const currency = m[2].toUpperCase();
+  if (!(CURRENCY_CODES as readonly string[]).includes(currency)) throw new CellError(`"${m[2]}": a currency code of ${CURRENCY_CODES.join(", ")}`);
+  const amountMinor = parseAmount(m[1], currency);
+  if (amountMinor === null) throw new CellError(`"${m[1].trim()}" is not an amount in ${currency}`);
+  return { amountMinor, currency: currency as CurrencyCode };
+}
+const priceText = (p: Money) => `${amountText(p.amountMinor, p.currency)} ${p.currency}`;
 
 const CASE_COLUMNS: Column[] = [
   { name: "name", required: true, path: "name", read: text },
@@ -43,7 +56,7 @@ const KIT_COLUMNS: Column[] = [
   { name: "stud_thread", required: false, path: "data.studThread", read: (t) => t.trim() },
   { name: "base_gaskets_mm", required: false, path: "data.baseGasketsMm", read: numList },
   { name: "always_with_gasket", required: false, path: "data.alwaysWithGasket", read: yesNo },
-  { name: "price", required: false, path: "data.price", read: num },
+  { name: "price", required: false, path: "data.price", read: price },
 ];
 
 export const COLUMNS: Record<LibraryCsvKind, Column[]> = { cases: CASE_COLUMNS, kits: KIT_COLUMNS };
@@ -104,7 +117,7 @@ export function kitCells(name: string, notes: string, d: KitData): string[] {
     d.studThread ?? "",
     d.baseGasketsMm.map(fmt).join("; "),
     d.alwaysWithGasket ? "yes" : "no",
-    d.price === undefined ? "" : fmt(d.price),
+    d.price === undefined ? "" : priceText(d.price),
   ];
 }
 
@@ -132,5 +145,5 @@ export const EXAMPLE_KIT: KitData = {
   studThread: "M7",
   baseGasketsMm: [0.2, 0.4],
   alwaysWithGasket: false,
-  price: 289,
+  price: { amountMinor: 28900, currency: "EUR" },
 };

@@ -6,6 +6,7 @@ import { getDb } from "../client";
 import { DataError } from "../errors";
 import type * as jobs from "../schema-jobs";
 import { addEvent, mailShop } from "./events";
+import { approvalWords } from "./quote-view";
 import { getJob } from "./reads";
 import { isJobCustomer, j, loadFor, moveFacts, type JobView } from "./view";
 
@@ -13,10 +14,12 @@ import { isJobCustomer, j, loadFor, moveFacts, type JobView } from "./view";
 // records on the way (a cannot-fit plan, readings outside the plan) are kept on the job with who and when.
 
 /** The history line of a move. */
-function summaryOf(caller: Caller, from: JobStatus, to: JobStatus, why: string | null, kind: "plan" | "verify" | null): string {
+function summaryOf(caller: Caller, record: jobs.JobRecord, to: JobStatus, why: string | null, kind: "plan" | "verify" | null): string {
+  const from = record.status as JobStatus;
   if (to === "approved") {
-    if (caller.role === "customer") return "approved the plan";
-    return why ? `approved the plan for the customer: ${why}` : "approved the plan for the shop's own engine";
+    const what = approvalWords(record);
+    if (caller.role === "customer") return `approved ${what}`;
+    return why ? `approved ${what} for the customer: ${why}` : `approved ${what} for the shop's own engine`;
   }
   if (kind === "plan") return `planned the job although the study says the kit cannot fit safely, on the owner's override: ${why}`;
   if (kind === "verify") return `verified the job although the after-cut readings are outside the plan, on the owner's override: ${why}`;
@@ -49,9 +52,11 @@ export async function moveJob(caller: Caller, id: string, to: JobStatus, reason?
     set.approvedById = caller.userId;
     set.approvedByName = caller.name;
     set.approvalReason = caller.role === "customer" ? null : why;
+    // One approval takes the plan and the quote together: the quote is kept as approved, fixed from now on.
+    set.approvedQuoteJson = record.quoteJson;
     if (caller.role === "customer" && !record.customerUserId) set.customerUserId = caller.userId;
   }
-  if (from === "approved" && to === "planned") Object.assign(set, { approvedAt: null, approvedById: null, approvedByName: null, approvalReason: null });
+  if (from === "approved" && to === "planned") Object.assign(set, { approvedAt: null, approvedById: null, approvedByName: null, approvalReason: null, approvedQuoteJson: null });
   if (override === "plan") Object.assign(set, { planOverrideReason: why, planOverrideById: caller.userId, planOverrideByName: caller.name, planOverrideAt: now });
   if (override === "verify") Object.assign(set, { verifyOverrideReason: why, verifyOverrideById: caller.userId, verifyOverrideByName: caller.name, verifyOverrideAt: now });
   if (from === "verified" && to === "machined") Object.assign(set, { verifyOverrideReason: null, verifyOverrideById: null, verifyOverrideByName: null, verifyOverrideAt: null });
@@ -59,8 +64,8 @@ export async function moveJob(caller: Caller, id: string, to: JobStatus, reason?
   await db.transaction(async (tx) => {
     const done = await tx.update(j).set(set).where(and(eq(j.id, id), eq(j.status, from))).returning({ id: j.id });
     if (done.length === 0) throw new DataError("conflict", "The job moved on since you opened it. Reload to see where it is now.");
-    await addEvent(tx, id, me, "status", summaryOf(caller, from, to, why, override), { from, to });
+    await addEvent(tx, id, me, "status", summaryOf(caller, record, to, why, override), { from, to });
   });
-  if (to === "approved" && !record.ownEngine) await mailShop(caller.shopId, record, `${record.reference}: plan approved`, [`${caller.name} approved the plan for ${record.title}.`]);
+  if (to === "approved" && !record.ownEngine) await mailShop(caller.shopId, record, `${record.reference}: plan approved`, [`${caller.name} approved ${approvalWords(record)} for ${record.title}.`]);
   return getJob(caller, id);
 }

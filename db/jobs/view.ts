@@ -10,6 +10,7 @@ import { SHOP_STAFF } from "../roles";
 import * as schema from "../schema";
 import * as jobs from "../schema-jobs";
 import type { AfterCutReadings, CheckKey, Verification } from "../verification";
+import { quoteView, type QuoteView } from "./quote-view";
 
 // A job as the pages and the API see it, and the one way a job is loaded for a caller: staff of its shop,
 // or its own customer once it is shared. Another shop's job, or a job not shared with this customer, is a
@@ -70,6 +71,9 @@ export type JobView = {
   kitId: string | null;
   plan: { studyName: string; kitName: string; takenAt: string; verdict: Verdict | null; override: Override | null } | null;
   deposit: { amount: number; currency: string; paid: boolean; paidAt: string | null };
+  /** The shop's quote (null until one is written) and the quote as approved with the plan (null until approved). */
+  quote: QuoteView | null;
+  approvedQuote: QuoteView | null;
   sharedAt: string | null;
   approval: { at: string; by: Person; reason: string | null } | null;
   verification: { verdict: Verification["verdict"]; at: string; override: Override | null } | null;
@@ -187,6 +191,8 @@ export function view(caller: Caller, l: Loaded): JobView {
         }
       : null,
     deposit: { amount: r.depositAmount, currency: r.currency, paid: r.paidAt !== null, paidAt: iso(r.paidAt) },
+    quote: quoteView(caller, r.quoteJson),
+    approvedQuote: quoteView(caller, r.approvedQuoteJson),
     sharedAt: iso(r.sharedAt),
     approval: r.approvedAt ? { at: iso(r.approvedAt) ?? "", by: { id: r.approvedById ?? "", name: r.approvedByName ?? "" }, reason: r.approvalReason } : null,
     verification: l.latest

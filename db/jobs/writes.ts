@@ -9,6 +9,7 @@ import { DataError } from "../errors";
 import * as schema from "../schema";
 import * as jobs from "../schema-jobs";
 import { addEvent, type Tx } from "./events";
+import { shopPricing } from "../settings";
 import { checkPlan, planOverrideColumns, snapshotPlan } from "./plan";
 import { getJob } from "./reads";
 import { assertStaff, j, loadFor, planVerdict, type JobView } from "./view";
@@ -57,6 +58,8 @@ export async function createJob(caller: Caller, body: JobCreate): Promise<JobVie
   const customerEmail = own ? "" : (body.customerEmail ?? "");
   const customerUserId = own ? null : await customerMemberId(caller.shopId, customerEmail);
   const id = randomUUID();
+  // Until a quote sets the deposit, the job is in the shop's currency.
+  const currency = (await shopPricing(caller.shopId)).currency.toLowerCase();
   const db = await getDb();
   const me = { id: caller.userId, name: caller.name };
   await db.transaction(async (tx) => {
@@ -79,7 +82,7 @@ export async function createJob(caller: Caller, body: JobCreate): Promise<JobVie
       status: plan && !waitsForOwner ? "planned" : "intake",
       ...planOverrideColumns(caller, override),
       depositAmount: own ? 0 : (body.depositAmount ?? 0),
-      currency: body.currency ?? "eur",
+      currency: body.currency ?? currency,
       verifyToleranceMm: body.verifyToleranceMm ?? 0.05,
       notes: body.notes ?? "",
       createdBy: caller.userId,
@@ -100,6 +103,10 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
   assertStaff(caller);
   const { record } = await loadFor(caller, id);
   if (record.version !== patch.version) throw new DataError("conflict", STALE);
+  if (record.quoteJson !== null && ((patch.depositAmount !== undefined && patch.depositAmount !== record.depositAmount) || (patch.currency !== undefined && patch.currency !== record.currency)))
+    throw new DataError("invalid_input", "The deposit comes from the job's quote; an owner sets a different one there, with a reason.", {
+      [patch.depositAmount !== undefined ? "depositAmount" : "currency"]: "Set by the quote.",
+    });
   if (patch.depositAmount !== undefined && record.paidAt !== null && patch.depositAmount !== record.depositAmount)
     throw new DataError("paid", "The deposit was paid already; its amount cannot change.", { depositAmount: "Already paid." });
   if (record.ownEngine && (patch.customerName !== undefined || patch.customerEmail !== undefined))

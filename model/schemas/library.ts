@@ -4,6 +4,7 @@
 // from them. Pure zod: no server-only code.
 import { z } from "zod";
 import { BoringRigSchema, CaseProfileSchema, CylinderKitSchema } from "@/geometry";
+import { MoneySchema } from "@/model/money";
 import { NameSchema, NotesSchema, ReadingSchema, ReadingValueMmSchema, VersionSchema, rowBase, without } from "./common";
 
 /**
@@ -26,8 +27,13 @@ function coreChecks<T>(core: z.ZodType, complete: (data: T) => unknown) {
 const caseShape = without(CaseProfileSchema.shape, "name");
 /** A case profile as the core reads it, without its name (the row's name is the profile's name). */
 export const CaseDataSchema = z.strictObject(caseShape).superRefine(coreChecks(CaseProfileSchema, (d: object) => ({ ...d, name: "case" })));
-/** A cylinder kit as the core reads it, without id and name (the row's id and name are used). */
-export const KitDataSchema = CylinderKitSchema.omit({ id: true, name: true });
+/**
+ * A cylinder kit as the core reads it, without id and name (the row's id and name are used); its price is
+ * money (integer minor units with the ISO 4217 code), which the core never reads.
+ */
+export const KitDataSchema = CylinderKitSchema.omit({ id: true, name: true, price: true }).extend({ price: MoneySchema.optional() });
+/** A cylinder kit as the kit form checks it: the core's kit with the price as money. */
+export const KitFormSchema = CylinderKitSchema.omit({ price: true }).extend({ price: MoneySchema.optional() });
 /** A boring rig as the core reads it, without its name. */
 export const RigDataSchema = BoringRigSchema.omit({ name: true });
 

@@ -24,6 +24,8 @@ export async function insertExampleStudy(shopId: string, userId: string, name = 
     for (const kit of example.kits) {
       const { name: kitName, ...data } = kit;
       delete data.id;
+      // The study file gives a bare price; the library keeps money (integer cents and the currency code), as the migration made of bare prices.
+      if (typeof data.price === "number") data.price = { amountMinor: Math.round(data.price * 100), currency: "EUR" };
       const kitId = randomUUID();
       kitIds.push(kitId);
       await db.execute({

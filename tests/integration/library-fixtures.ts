@@ -49,7 +49,6 @@ export const kitData = (boreMm: number, skirtMm: number, extra: Record<string, u
   studs,
   studThread: "M7",
   baseGasketsMm: [0.2, 0.4],
-  price: 200 + boreMm,
   ...extra,
 });
 

@@ -1,5 +1,6 @@
 "use client";
 
+import { formatMoney } from "@/model/money";
 import type { LengthUnits } from "@/geometry";
 import { dateText } from "@/model/dates";
 import { diameterLabel, lengthLabel } from "@/model/units";
@@ -76,7 +77,7 @@ export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, 
       },
     }),
     h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
-    h.accessor((r) => r.data.price, { id: "price", header: "Price", cell: (c) => num(c.getValue() === undefined ? "—" : (c.getValue() as number).toFixed(2)) }),
+    h.accessor((r) => r.data.price?.amountMinor, { id: "price", header: "Price", cell: (c) => num(c.row.original.data.price ? formatMoney(c.row.original.data.price) : "—") }),
     c.updated,
   ] as ColumnDef<KitRow, unknown>[];
 }

@@ -1,6 +1,7 @@
 "use client";
 
-import { CylinderKitSchema, type LengthUnits } from "@/geometry";
+import type { LengthUnits } from "@/geometry";
+import { KitFormSchema } from "@/model/schemas";
 import { useMemo, useRef, useState } from "react";
 import { FormProvider, useFormContext } from "react-hook-form";
 import { useStore } from "zustand";
@@ -35,7 +36,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
     kind: "kits",
     id: row?.id ?? null,
     version: row?.version ?? null,
-    schema: CylinderKitSchema,
+    schema: KitFormSchema,
     initialUnits,
     defaults: kitDefaults(row, "mm"),
     toCore: kitToCore,
@@ -67,7 +68,8 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
           <TextField<KitFormValues> name="name" label="Name" className="md:col-span-2" />
           <TextField<KitFormValues> name="boreMm" label="Bore" unit={units} numeric />
           <TextField<KitFormValues> name="strokeMm" label="Stroke (only with a stroker crank)" unit={units} numeric hint="Blank: the case's stroke." />
-          <TextField<KitFormValues> name="price" label="Price" numeric hint="In the shop's currency, optional." />
+          <TextField<KitFormValues> name="price" label="Price" numeric hint="Before tax, optional; it becomes the kit line of a job's quote." />
+          <TextField<KitFormValues> name="priceCurrency" label="Price currency" hint="ISO 4217 code, e.g. EUR." />
           <TextField<KitFormValues> name="notes" label="Notes" />
         </FormSection>
         <FormSection title="Skirt, as measured">

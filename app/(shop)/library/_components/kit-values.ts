@@ -1,8 +1,9 @@
 import { CylinderKitSchema, type LengthUnits } from "@/geometry";
+import { amountText, CURRENCY_CODES, parseAmount, type CurrencyCode, type Money } from "@/model/money";
 import type { Capture } from "@/geometry/shapes";
 import type { KitRow } from "../../../_ui/query/types";
 import type { FormReader } from "@/app/_ui/form/form-reader";
-import { lengthFieldText as lengthText, numberFieldText as numberText } from "@/model/units";
+import { lengthFieldText as lengthText } from "@/model/units";
 import { outlineText, readOutline, readStuds, studsText } from "@/app/_ui/form/read-shapes";
 import { emptyOutline, type OutlineText } from "@/app/_ui/form/text-values";
 import type { PocketText, ShapeDoc } from "./shapes/shape-store";
@@ -19,7 +20,9 @@ export type KitFormValues = {
   studThread: string;
   baseGasketsMm: string[];
   alwaysWithGasket: boolean;
+  /** The price in major units as typed ("289.00") and its ISO 4217 code ("EUR"): kept as integer minor units. */
   price: string;
+  priceCurrency: string;
   /** The base gasket at the deck (kept in the shape store): its outline, optional, and its port windows. */
   gasket?: { outline: OutlineText; ports: PocketText[] };
   /** The measurements the gasket's shapes were drawn from. */
@@ -68,7 +71,8 @@ export function kitDefaults(row: KitRow | null, units: LengthUnits): KitFormValu
     studThread: d?.studThread ?? "",
     baseGasketsMm: d?.baseGasketsMm?.map((x) => lengthText(x, units)) ?? [],
     alwaysWithGasket: d?.alwaysWithGasket ?? false,
-    price: numberText(d?.price),
+    price: d?.price ? amountText(d.price.amountMinor, d.price.currency) : "",
+    priceCurrency: d?.price?.currency ?? "EUR",
   };
 }
 
@@ -89,9 +93,25 @@ export function kitToCore(v: KitFormValues, read: FormReader): unknown {
     studThread: read.optionalText(v.studThread),
     baseGasketsMm: read.lengths(v.baseGasketsMm, ["baseGasketsMm"]),
     alwaysWithGasket: v.alwaysWithGasket,
-    price: read.number(v.price, ["price"]),
+    price: readPrice(v, read),
     ...gasketToCore(v, read),
   };
+}
+
+/** The typed price as money (minor units and code); undefined when blank or unreadable (the reader keeps why). */
+function readPrice(v: KitFormValues, read: FormReader): Money | undefined {
+  if (v.price.trim() === "") return undefined;
+  const currency = v.priceCurrency.trim().toUpperCase();
+  if (!(CURRENCY_CODES as readonly string[]).includes(currency)) {
+    read.issues.push({ path: ["priceCurrency"], message: `Give the price's currency code: ${CURRENCY_CODES.join(", ")}` });
+    return undefined;
+  }
+  const amountMinor = parseAmount(v.price, currency);
+  if (amountMinor === null) {
+    read.issues.push({ path: ["price"], message: `Write the price as an amount in ${currency}, e.g. 289 or 289.00` });
+    return undefined;
+  }
+  return { amountMinor, currency: currency as CurrencyCode };
 }
 
 function gasketToCore(v: KitFormValues, read: FormReader): Record<string, unknown> {
