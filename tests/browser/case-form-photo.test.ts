@@ -13,8 +13,8 @@ import { signedLengthLabel } from "@/model/units";
 const W = 800;
 const H = 600;
 const PHOTO = greyPng(W, H);
-/** Four stud centres clicked on the photo, in its pixels: a slightly skewed square. */
-const STUDS: [number, number][] = [[200, 450], [610, 460], [600, 140], [210, 150]];
+/** Four stud centres clicked on the photo, in its pixels: a square seen square on. */
+const STUDS: [number, number][] = [[200, 500], [600, 500], [600, 100], [200, 100]];
 
 let browser: Browser;
 let context: BrowserContext;
