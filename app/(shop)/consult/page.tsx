@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { listJobs } from "@/db/jobs";
+import { SHOP_STAFF } from "@/db/roles";
 import { EmptyState } from "../../_ui/empty-state";
 import { requirePage } from "../../_ui/guard";
 import { StatusBadge } from "../jobs/_components/status-badge";
@@ -9,7 +10,16 @@ export const metadata: Metadata = { title: "Consult" };
 
 /** The customer's shared plans at this shop. */
 export default async function ConsultPage() {
-  const caller = await requirePage("/consult", ["customer"]);
+  const caller = await requirePage("/consult");
+  if (SHOP_STAFF.includes(caller.role)) {
+    return (
+      <div className="mx-auto flex max-w-lg flex-col gap-3 py-12">
+        <h1 className="text-2xl font-semibold">Customers&apos; plans</h1>
+        <p className="text-ink-2">Here a customer finds the plans the shop shared with them. The shop&apos;s side of each job — the plan, the quote, sharing — is on the Jobs page.</p>
+        <p><Link className="btn no-underline" href="/jobs">Open the jobs</Link></p>
+      </div>
+    );
+  }
   const page = await listJobs(caller, { page: 1, pageSize: 100 });
   return (
     <div className="flex flex-col gap-6">

@@ -3,6 +3,7 @@ import { listMembers, listPendingInvitations } from "@/db/members";
 import { getSettings } from "@/db/settings";
 import { requirePage } from "../../_ui/guard";
 import { LimitsForm } from "./_components/limits-form";
+import { PricingForm } from "./_components/pricing-form";
 import { InviteForm, InvitationRow, MemberActions } from "./_components/members";
 
 export const metadata: Metadata = { title: "Shop settings" };
@@ -16,7 +17,7 @@ export default async function SettingsPage() {
     <div className="flex flex-col gap-8">
       <div>
         <h1 className="text-3xl font-semibold">Shop settings</h1>
-        <p className="mt-1 text-ink-2">{caller.shopName}: members and their roles, and the limits every study is checked against.</p>
+        <p className="mt-1 text-ink-2">{caller.shopName}: members and their roles, the prices quotes are written with, and the limits every study is checked against.</p>
       </div>
       <section className="card p-6" aria-labelledby="members-h">
         <h2 id="members-h" className="text-lg font-semibold">
@@ -69,6 +70,12 @@ export default async function SettingsPage() {
         ) : (
           <p className="mt-4 text-sm text-ink-2">No invitation is waiting for an answer.</p>
         )}
+      </section>
+      <section className="card p-6" aria-labelledby="pricing-h">
+        <h2 id="pricing-h" className="text-lg font-semibold">
+          Prices
+        </h2>
+        <PricingForm pricing={settings.settings.pricing} version={settings.version} />
       </section>
       <section className="card p-6" aria-labelledby="limits-h">
         <h2 id="limits-h" className="text-lg font-semibold">

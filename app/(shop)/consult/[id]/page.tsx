@@ -4,17 +4,24 @@ import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
 import { jobDetail } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
-import { formatLength, type KitResult } from "@/geometry";
+import { SHOP_STAFF } from "@/db/roles";
+import { shopTimeZone } from "@/db/settings";
+import { formatLength, type KitResult, type WarningCode } from "@/geometry";
+import { governingClearanceMm } from "@/scene/fit";
 import { CONSULT_CAUTIONS } from "@/model/cautions";
 import { VERDICT_TEXT } from "@/model/verdict";
 import { requirePage } from "../../../_ui/guard";
 import { Photos } from "../../jobs/[id]/_components/photos";
 import { PlanVsActual } from "../../jobs/[id]/_components/plan-vs-actual";
+import { QuoteTable } from "../../jobs/_components/quote-table";
 import { StatusBadge, money } from "../../jobs/_components/status-badge";
 import { ConsultActions } from "./_components/consult-actions";
 import { FitForCustomer } from "./_components/fit";
 
 export const metadata: Metadata = { title: "Your plan" };
+
+/** The core's warnings a customer decides on; the rest (the rig, the holder, the readings) are the bench's to act on. */
+const FOR_THE_CUSTOMER: ReadonlySet<WarningCode> = new Set<WarningCode>(["stud-pattern-mismatch", "crank-chamber-not-checked", "crank-clearance-below-minimum", "matched-passage-wall-below-minimum"]);
 
 /** The product's one set of verdict words (model/verdict.ts), each with what it means for the customer. */
 const VERDICT_WORDS: Record<KitResult["verdict"], string> = {
@@ -27,7 +34,8 @@ const VERDICT_WORDS: Record<KitResult["verdict"], string> = {
 export default async function ConsultJobPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ checkout?: string }> }) {
   const { id } = await params;
   const { checkout } = await searchParams;
-  const caller = await requirePage(`/consult/${id}`, ["customer"]);
+  const caller = await requirePage(`/consult/${id}`);
+  if (SHOP_STAFF.includes(caller.role)) return <StaffVisit id={id} />;
   const detail = await jobDetail(caller, id).catch((error: unknown) => {
     if (error instanceof AccessError && error.code === "not_found") notFound();
     throw error;
@@ -40,7 +48,9 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
   });
   const L = (mm: number) => formatLength(mm, caller.units);
   const chosen = plan?.result.kits.find((k) => k.kitId === plan.kitId);
-  const priceOf = (kitId: string) => plan?.study.kits.find((k) => k.id === kitId)?.price;
+  const zone = shopTimeZone();
+  // The quote the customer decides on: the one approved with the plan once approved, else the shop's current one.
+  const quote = job.approvedQuote ?? job.quote;
   return (
     <div className="flex flex-col gap-8">
       <div>
@@ -70,7 +80,6 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
                     Risk: {VERDICT_WORDS[k.verdict]}
                     {k.thinnestWall && k.verdict !== "cannot-fit" ? <> The thinnest wall left is <span className="num">{L(k.thinnestWall.minWallMm)}</span>.</> : null}
                   </p>
-                  {priceOf(k.kitId) !== undefined ? <p>Kit price: <span className="num">{priceOf(k.kitId)}</span></p> : null}
                 </li>
               ))}
             </ul>
@@ -82,7 +91,7 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
             {chosen.cut ? (
               <p>
                 The shop will widen the crankcase mouth to <strong className="num">{L(chosen.cut.diameterMm)}</strong> and <strong className="num">{L(chosen.cut.depthMm)}</strong> deep, leaving{" "}
-                <span className="num">{chosen.radialClearanceMm.vsCut !== null ? L(chosen.radialClearanceMm.vsCut) : "—"}</span> of room around the cylinder skirt.
+                <span className="num" data-testid="consult-room">{L(governingClearanceMm(chosen))}</span> of room around the cylinder skirt.
               </p>
             ) : (
               <p>The cylinder goes in without cutting the case.</p>
@@ -90,14 +99,26 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
             <p>Machining deposit: <strong className="num">{job.deposit.amount > 0 ? money(job.deposit.amount, job.deposit.currency) : "none"}</strong>{job.deposit.amount > 0 ? <span data-testid="paid-state"> — {job.deposit.paid ? "paid, thank you" : "not paid yet"}</span> : null}.</p>
           </section>
 
+          <section aria-labelledby="consult-quote-h" className="card flex flex-col gap-2 p-5">
+            <h2 id="consult-quote-h" className="text-2xl font-semibold">The price</h2>
+            {quote ? (
+              <>
+                <p className="text-lg">What the shop charges for this plan, line by line. You approve the plan and this price together{job.approvedQuote ? "; both are approved." : "."}</p>
+                <QuoteTable large totals={quote.totals} taxPercent={quote.quote.taxPercent} depositPercent={quote.quote.depositPercent} overridden={Boolean(quote.quote.depositOverride)} />
+              </>
+            ) : (
+              <p className="text-lg" data-testid="no-quote">The shop has not written the price yet. Ask below if you want it before you approve.</p>
+            )}
+          </section>
+
           <section aria-label="Cautions" className="caution flex flex-col gap-1 text-base" data-testid="consult-cautions">
             <h2 className="text-xl font-semibold">Before you decide</h2>
             <p>{CONSULT_CAUTIONS.legalClass}{chosen.displacementCc.crossesClasses.length ? ` This kit crosses the ${chosen.displacementCc.crossesClasses.join(", ")} cc line.` : ""}</p>
             <p>{CONSULT_CAUTIONS.kitMaker}</p>
-            {chosen.warnings.map((w) => <p key={w.code + w.message}>{w.message}</p>)}
+            {chosen.warnings.filter((w) => FOR_THE_CUSTOMER.has(w.code)).map((w) => <p key={w.code + w.message}>{w.message}</p>)}
           </section>
 
-          <ConsultActions job={job} checkout={checkout ?? null} />
+          <ConsultActions job={job} checkout={checkout ?? null} zone={zone} />
 
           {readings ? (
             <section aria-label="After the cut" className="flex flex-col gap-3">
@@ -110,6 +131,17 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
       ) : (
         <p className="text-ink-2">The shop is still preparing this plan.</p>
       )}
+    </div>
+  );
+}
+
+/** The shop's own people on a customer's page: what they can do instead. */
+function StaffVisit({ id }: { id: string }) {
+  return (
+    <div className="mx-auto flex max-w-lg flex-col gap-3 py-12">
+      <h1 className="text-2xl font-semibold">This is the customer&apos;s page</h1>
+      <p className="text-ink-2">The customer reads the plan and the price here and approves them. As a member of the shop you work on the same job on its own page: the plan, the quote, sharing and the readings.</p>
+      <p><Link className="btn no-underline" href={`/jobs/${id}`}>Open the job</Link></p>
     </div>
   );
 }

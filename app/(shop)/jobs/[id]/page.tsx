@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import { shopTimeZone } from "@/db/settings";
 import { dateText, dateTimeText } from "@/model/dates";
+import { depthStopSentence } from "@/model/depth-stop-words";
+import { TERM } from "@/model/glossary";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
-import { jobDetail } from "@/db/jobs";
+import { jobDetail, quoteFor } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
 import { formatLength } from "@/geometry";
@@ -15,6 +17,8 @@ import { JobActions } from "./_components/job-actions";
 import { Photos } from "./_components/photos";
 import { PlanVsActual } from "./_components/plan-vs-actual";
 import { ReadingsForm } from "./_components/readings-form";
+import { QuoteSection } from "./_components/quote-section";
+import { VerifyDecision } from "./_components/verify-decision";
 
 export const metadata: Metadata = { title: "Job" };
 
@@ -32,6 +36,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
     console.warn("job page: the job's photos could not be listed; the page shows without them.", error);
     return null;
   });
+  const quote = await quoteFor(caller, id);
   const kit = plan ? plan.result.kits.find((k) => k.kitId === plan.kitId) : undefined;
   const L = (mm: number) => formatLength(mm, caller.units);
   const zone = shopTimeZone();
@@ -86,8 +91,8 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
             <dl className="grid grid-cols-2 gap-y-1 text-sm sm:grid-cols-4">
               <dt className="text-ink-2">Kit</dt><dd className="sm:col-span-3">{kit.name} <span className="text-ink-3">(study “{plan.studyName}”{job.studyId ? <> · <Link href={`/studies/${job.studyId}`}>open</Link></> : null})</span></dd>
               <dt className="text-ink-2">Cut</dt><dd className="num sm:col-span-3">{kit.cut ? `⌀ ${L(kit.cut.diameterMm)} × ${L(kit.cut.depthMm)} deep` : "no cut needed"}</dd>
-              <dt className="text-ink-2">Cutter setting</dt><dd className="num">{kit.rig ? L(kit.rig.cutterSettingToSetMm ?? kit.rig.cutterSettingMm) : "—"}</dd>
-              <dt className="text-ink-2">Depth stop</dt><dd>{kit.rig ? `${kit.rig.depthStop.groove}, stack ${L(kit.rig.depthStop.shimStackMm)}` : "—"}</dd>
+              <dt className="text-ink-2">{TERM.cutterSetting.short}</dt><dd className="num">{kit.rig ? L(kit.rig.cutterSettingToSetMm ?? kit.rig.cutterSettingMm) : "—"}</dd>
+              <dt className="text-ink-2">{TERM.depthStop.label}</dt><dd>{kit.rig ? depthStopSentence(kit.rig.depthStop, caller.units) : "—"}</dd>
               <dt className="text-ink-2">Displacement</dt><dd className="num">{kit.displacementCc.stockRounded} → {kit.displacementCc.kitRounded} cc</dd>
               <dt className="text-ink-2">Taken</dt><dd className="num">{when(plan.takenAt)}</dd>
             </dl>
@@ -96,6 +101,8 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
           )}
         </div>
       </section>
+
+      <QuoteSection job={job} data={quote} role={caller.role} when={when} />
 
       {job.approval ? (
         <p className="text-sm text-ink-2" data-testid="approval">
@@ -111,6 +118,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
             Verified although the readings are outside the plan, on {job.verification.override.by.name}&apos;s override ({dateText(job.verification.override.at, zone)}): {job.verification.override.reason}
           </p>
         ) : null}
+        {job.status === "machined" && job.verification?.verdict === "fail" ? <VerifyDecision jobId={job.id} role={caller.role} /> : null}
         {job.status === "machined" && plan ? (
           <ReadingsForm jobId={job.id} studs={plan.study.case.studs.map((s) => s.label)} previous={readings?.readings ?? null} />
         ) : job.status === "approved" || job.status === "planned" || job.status === "intake" ? (

@@ -17,7 +17,7 @@ const fieldsOf = (issues: { path: PropertyKey[]; message: string }[]) => {
 /** The new-job form: checks as the person types, keeps everything typed, says what is wrong next to each field. */
 export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: StudyOption[]; initialStudyId: string; isOwner: boolean }) {
   const router = useRouter();
-  const [v, setV] = useState({ title: "", customerName: "", customerEmail: "", engineNumber: "", caseNumber: "", caseVariant: "", studyId: initialStudyId, deposit: "50.00", currency: "eur", notes: "", planOverrideReason: "" });
+  const [v, setV] = useState({ title: "", customerName: "", customerEmail: "", engineNumber: "", caseNumber: "", caseVariant: "", studyId: initialStudyId, notes: "", planOverrideReason: "" });
   const [ownEngine, setOwnEngine] = useState(false);
   // Shown once the server says the study's kit cannot fit safely and planning it needs the owner's reason.
   const [asksOverride, setAsksOverride] = useState(false);
@@ -26,9 +26,8 @@ export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: Stud
   const [problem, setProblem] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
+  // The deposit is not typed here: it is the shop's share of the job's quote (written on the job's page).
   const body = () => {
-    const deposit = v.deposit.trim().replace(",", ".");
-    const cents = /^\d+(\.\d{1,2})?$/.test(deposit) ? Math.round(Number(deposit) * 100) : Number.NaN;
     return {
       title: v.title,
       ...(ownEngine ? { ownEngine: true } : { customerName: v.customerName, customerEmail: v.customerEmail }),
@@ -36,8 +35,6 @@ export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: Stud
       caseNumber: v.caseNumber,
       caseVariant: v.caseVariant,
       studyId: v.studyId || null,
-      ...(ownEngine ? {} : { depositAmount: cents }),
-      currency: v.currency,
       notes: v.notes,
       ...(asksOverride && v.planOverrideReason.trim() ? { planOverrideReason: v.planOverrideReason } : {}),
     };
@@ -46,13 +43,12 @@ export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: Stud
     void next;
     const r = JobCreateSchema.safeParse(body());
     const f = r.success ? {} : fieldsOf(r.error.issues);
-    if (!ownEngine && !/^\d+([.,]\d{1,2})?$/.test(v.deposit.trim())) f.depositAmount = "Write the deposit as money, e.g. 50 or 50.00.";
     return f;
   };
   const set = (k: keyof typeof v) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement | HTMLTextAreaElement>) => {
     const next = { ...v, [k]: e.target.value };
     setV(next);
-    setTouched((t) => ({ ...t, [k === "deposit" ? "depositAmount" : k]: true }));
+    setTouched((t) => ({ ...t, [k]: true }));
   };
   const live = check();
   const shown = (k: string) => (touched[k] ? (live[k] ?? errors[k]) : errors[k]);
@@ -127,17 +123,7 @@ export function NewJobForm({ studies, initialStudyId, isOwner }: { studies: Stud
           </div>
         ) : null
       ) : null}
-      <div className={`grid gap-4 sm:grid-cols-2 ${ownEngine ? "hidden" : ""}`}>
-        <Field label="Machining deposit" name="deposit" inputMode="decimal" value={v.deposit} onChange={set("deposit")} error={shown("depositAmount")} hint="Paid by the customer by card on approval; 0 for none." />
-        <div>
-          <label htmlFor="field-currency" className="field-label">Currency</label>
-          <select id="field-currency" className="field-input" value={v.currency} onChange={set("currency")}>
-            {["eur", "usd", "gbp", "chf", "sek", "nok", "dkk", "pln", "czk", "cad", "aud"].map((c) => (
-              <option key={c} value={c}>{c.toUpperCase()}</option>
-            ))}
-          </select>
-        </div>
-      </div>
+      {ownEngine ? null : <p className="text-sm text-ink-2">The price and the deposit come from the job&apos;s quote, written on the job&apos;s page once it is open.</p>}
       <div>
         <label htmlFor="field-notes" className="field-label">Notes</label>
         <textarea id="field-notes" className="field-input" rows={3} value={v.notes} onChange={set("notes")} />

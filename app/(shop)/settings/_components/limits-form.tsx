@@ -5,22 +5,25 @@ import { useState } from "react";
 import { DEFAULT_LIMITS, inToMm, mmToIn } from "@/geometry";
 import { callApi } from "../../../_ui/api-client";
 import { FormNotice } from "../../../_ui/field";
+import { LIMIT_TERM } from "@/model/glossary";
 
-type LengthKey = "minRadialClearanceMm" | "minDepthClearanceMm" | "minSealingLandMm" | "minWallMm" | "studToleranceMm" | "hardwareMarginMm" | "maxRockMm";
+type LengthKey = "minRadialClearanceMm" | "minDepthClearanceMm" | "minSealingLandMm" | "minWallMm" | "studToleranceMm" | "hardwareMarginMm" | "maxRockMm" | "minCrankClearanceMm";
 type SpeedKey = "cuttingSpeedMinMPerMin" | "cuttingSpeedMaxMPerMin";
 type Key = LengthKey | SpeedKey | "displacementClassesCc";
 
+// Each limit's name and why, the same words as the study page (model/glossary.ts).
 const FIELDS: Array<{ key: Key; label: string; kind: "length" | "speed" | "classes"; why: string }> = [
-  { key: "minRadialClearanceMm", label: "Least radial clearance, skirt to cut", kind: "length", why: "Room all round the skirt in the mouth." },
-  { key: "minDepthClearanceMm", label: "Least depth clearance", kind: "length", why: "Room under the skirt before the cylinder base seats." },
-  { key: "minSealingLandMm", label: "Least sealing land to a stud hole", kind: "length", why: "The land the base gasket seals on." },
-  { key: "minWallMm", label: "Least wall to a passage or the outside", kind: "length", why: "Thinner walls are not to be trusted." },
-  { key: "studToleranceMm", label: "Stud position tolerance", kind: "length", why: "How far a kit stud may sit from the case stud." },
-  { key: "hardwareMarginMm", label: "Margin for rotating screw heads", kind: "length", why: "Screw heads must stay this far inside the cut." },
-  { key: "maxRockMm", label: "Most rocking of the holder", kind: "length", why: "Above this, shim the holder before cutting." },
-  { key: "cuttingSpeedMinMPerMin", label: "Cutting speed, lowest", kind: "speed", why: "Aluminium with a carbide bit." },
-  { key: "cuttingSpeedMaxMPerMin", label: "Cutting speed, highest", kind: "speed", why: "Aluminium with a carbide bit." },
-  { key: "displacementClassesCc", label: "Displacement class limits", kind: "classes", why: "A result that crosses one is flagged; local rules decide." },
+  { key: "minRadialClearanceMm", label: LIMIT_TERM.minRadialClearanceMm.label, kind: "length", why: LIMIT_TERM.minRadialClearanceMm.hint },
+  { key: "minDepthClearanceMm", label: LIMIT_TERM.minDepthClearanceMm.label, kind: "length", why: LIMIT_TERM.minDepthClearanceMm.hint },
+  { key: "minSealingLandMm", label: LIMIT_TERM.minSealingLandMm.label, kind: "length", why: LIMIT_TERM.minSealingLandMm.hint },
+  { key: "minWallMm", label: LIMIT_TERM.minWallMm.label, kind: "length", why: LIMIT_TERM.minWallMm.hint },
+  { key: "minCrankClearanceMm", label: LIMIT_TERM.minCrankClearanceMm.label, kind: "length", why: LIMIT_TERM.minCrankClearanceMm.hint },
+  { key: "studToleranceMm", label: LIMIT_TERM.studToleranceMm.label, kind: "length", why: LIMIT_TERM.studToleranceMm.hint },
+  { key: "hardwareMarginMm", label: LIMIT_TERM.hardwareMarginMm.label, kind: "length", why: LIMIT_TERM.hardwareMarginMm.hint },
+  { key: "maxRockMm", label: LIMIT_TERM.maxRockMm.label, kind: "length", why: LIMIT_TERM.maxRockMm.hint },
+  { key: "cuttingSpeedMinMPerMin", label: LIMIT_TERM.cuttingSpeedMinMPerMin.label, kind: "speed", why: LIMIT_TERM.cuttingSpeedMinMPerMin.hint },
+  { key: "cuttingSpeedMaxMPerMin", label: LIMIT_TERM.cuttingSpeedMaxMPerMin.label, kind: "speed", why: LIMIT_TERM.cuttingSpeedMaxMPerMin.hint },
+  { key: "displacementClassesCc", label: LIMIT_TERM.displacementClassesCc.label, kind: "classes", why: LIMIT_TERM.displacementClassesCc.hint },
 ];
 
 type Limits = Record<LengthKey | SpeedKey, number> & { displacementClassesCc: number[] };

@@ -3,11 +3,13 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import type { JobView } from "@/db/jobs";
+import { dateTimeText } from "@/model/dates";
 import { callApi } from "../../../../_ui/api-client";
 import { FormNotice } from "../../../../_ui/field";
+import { money } from "../../../jobs/_components/status-badge";
 
 /** Approve the plan, pay the deposit, or ask the shop a question. */
-export function ConsultActions({ job, checkout }: { job: JobView; checkout: string | null }) {
+export function ConsultActions({ job, checkout, zone }: { job: JobView; checkout: string | null; zone: string }) {
   const router = useRouter();
   const [busy, setBusy] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(
@@ -25,7 +27,7 @@ export function ConsultActions({ job, checkout }: { job: JobView; checkout: stri
     const res = await callApi(`/api/v1/consult/${job.id}/approve`, { body: {} });
     setBusy(null);
     if (!res.ok) return setNotice({ tone: "error", text: res.error.message });
-    setNotice({ tone: "ok", text: "Thank you — the plan is approved." });
+    setNotice({ tone: "ok", text: job.quote ? "Thank you — the plan and the price are approved." : "Thank you — the plan is approved." });
     router.refresh();
   }
   async function pay() {
@@ -54,16 +56,18 @@ export function ConsultActions({ job, checkout }: { job: JobView; checkout: stri
   return (
     <section aria-label="Your decision" className="card flex flex-col gap-4 p-5">
       {job.approval ? (
-        <p className="text-lg" data-testid="approved-line">Approved by {job.approval.by.name} on {job.approval.at.slice(0, 16).replace("T", " ")}.</p>
+        <p className="text-lg" data-testid="approved-line">
+          {job.approvedQuote ? "The plan and the price were approved" : "The plan was approved"} by {job.approval.by.name} on {dateTimeText(job.approval.at, zone)}.
+        </p>
       ) : job.status === "planned" ? (
         <div className="flex flex-wrap items-center gap-3">
-          <button className="btn text-lg" type="button" disabled={busy !== null} onClick={approve}>{busy === "approve" ? "Approving…" : "Approve this plan"}</button>
-          <span className="text-ink-2">Approving records your name and the time on the job.</span>
+          <button className="btn text-lg" type="button" disabled={busy !== null} onClick={approve}>{busy === "approve" ? "Approving…" : job.quote ? "Approve the plan and the price" : "Approve this plan"}</button>
+          <span className="text-ink-2">{job.quote ? "One approval for both; it records your name and the time on the job, and the price is fixed from then on." : "Approving records your name and the time on the job."}</span>
         </div>
       ) : null}
       {canPay ? (
         <div className="flex flex-wrap items-center gap-3">
-          <button className="btn text-lg" type="button" disabled={busy !== null} onClick={pay}>{busy === "pay" ? "Opening the checkout…" : `Pay the deposit (${(job.deposit.amount / 100).toFixed(2)} ${job.deposit.currency.toUpperCase()})`}</button>
+          <button className="btn text-lg" type="button" disabled={busy !== null} onClick={pay}>{busy === "pay" ? "Opening the checkout…" : `Pay the deposit (${money(job.deposit.amount, job.deposit.currency)})`}</button>
           <span className="text-ink-2">By card, on the payment service&apos;s secure page.</span>
         </div>
       ) : job.deposit.paid ? (

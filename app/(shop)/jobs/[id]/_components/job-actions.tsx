@@ -80,7 +80,9 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
     router.refresh();
   }
 
-  const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner"));
+  // Verifying is offered beside the readings, and only once they are within the plan: readings outside it are the
+  // owner's decision with a reason (the form under them), missing readings are recorded first.
+  const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner") && !(to === "verified" && job.status === "machined" && job.verification?.verdict !== "pass"));
   const canShare = hasPlan && !job.ownEngine && job.status !== "closed";
   const waiting = job.status === "planned" && role !== "owner" && !job.ownEngine;
   const asksReason = moves.some((to) => job.movesNeedingReason.includes(to));
