@@ -1,0 +1,189 @@
+import { beforeAll, describe, expect, it } from "vitest";
+import { inject } from "vitest";
+import { confirmEmail, DEMO, Http, signIn, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
+import { insertExampleStudy, jobBody, me } from "./jobs-support";
+
+// The quote from the library kit's price to the paid deposit. The hand sums beside each check are the
+// figures a shop works out on paper; rounding is once per figure, to the cent, halves up.
+
+type Money = { amountMinor: number; currency: string };
+type Totals = { lines: { kind: string; amount: Money }[]; subtotal: Money; tax: Money; total: Money; deposit: Money; depositShare: Money };
+type QuoteView = { quote: { depositOverride: { amountMinor: number; reason: string } | null; kit: { unitMinor: number } | null }; totals: Totals };
+type Job = { id: string; status: string; version: number; deposit: { amount: number; currency: string; paid: boolean }; quote: QuoteView | null; approvedQuote: QuoteView | null };
+type Err = { error: { code: string; message: string; fields?: Record<string, string> } };
+
+let owner: Http;
+let shopId: string;
+let studyId: string;
+
+/** A fresh shop of its own (its prices are this file's to set), with the shipped example study. */
+beforeAll(async () => {
+  owner = await signUp("Quote Owner", uniqueEmail("quote-owner"));
+  const o = await me(owner);
+  shopId = o.shopId;
+  ({ studyId } = await insertExampleStudy(o.shopId, o.userId, `Quote study ${Date.now()}`));
+});
+
+async function setPricing(http: Http, pricing: Record<string, unknown>) {
+  const current = (await http.get("/api/v1/settings")).json as { version: number };
+  return http.send("PATCH", "/api/v1/settings", { version: current.version, pricing });
+}
+
+async function newJob(http: Http, over: Record<string, unknown> = {}): Promise<Job> {
+  const res = await http.post("/api/v1/jobs", jobBody({ studyId, customerEmail: uniqueEmail("quote-customer"), ...over }));
+  expect(res.status, res.text).toBe(201);
+  return (res.json as { item: Job }).item;
+}
+
+const putQuote = (http: Http, job: { id: string; version: number }, body: Record<string, unknown>) => http.send("PUT", `/api/v1/jobs/${job.id}/quote`, { version: job.version, ...body });
+
+describe("the shop's prices", () => {
+  it("are kept as money and percentages, and a bad value is refused at its field with nothing changed", async () => {
+    const set = await setPricing(owner, { currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 });
+    expect(set.status, set.text).toBe(200);
+    expect((set.json as { settings: { pricing: unknown } }).settings.pricing).toEqual({ currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 });
+    const bad = await setPricing(owner, { currency: "XYZ", labourRateMinor: 12.5, taxPercent: 101, depositPercent: 30 });
+    expect(bad.status).toBe(400);
+    expect(Object.keys((bad.json as Err).error.fields ?? {}).sort()).toEqual(["pricing.currency", "pricing.labourRateMinor", "pricing.taxPercent"]);
+    const after = (await owner.get("/api/v1/settings")).json as { settings: { pricing: unknown } };
+    expect(after.settings.pricing).toEqual({ currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 });
+  });
+
+  it("are the owner's: a builder of the demo shop may read them but not change them", async () => {
+    const builder = await signIn(DEMO.builder.email, DEMO.builder.password);
+    expect((await builder.get("/api/v1/settings")).status).toBe(200);
+    expect((await setPricing(builder, { currency: "EUR", labourRateMinor: 1, taxPercent: 0, depositPercent: 0 })).status).toBe(403);
+  });
+});
+
+describe("a job's quote", () => {
+  it("goes from the library kit's price to the paid deposit: approved with the plan, fixed after, paid through the checkout", async () => {
+    const job = await newJob(owner);
+    const start = (await owner.get(`/api/v1/jobs/${job.id}/quote`)).json as { quote: null; libraryKit: { price: Money } };
+    // The example's chosen kit is priced 289 in the study file; the library keeps it as 28 900 cents in EUR.
+    expect(start.libraryKit.price).toEqual({ amountMinor: 28_900, currency: "EUR" });
+
+    // Kit left out: the library's price. Two base gaskets at 12.50, 1.5 h of machining at the shop's 60.00.
+    const saved = await putQuote(owner, job, { parts: [{ label: "Base gasket", quantity: 2, unitMinor: 1250 }], machiningHours: 1.5 });
+    expect(saved.status, saved.text).toBe(200);
+    const { job: afterSave, quote } = saved.json as { job: Job; quote: QuoteView };
+    // 289.00 + 2 × 12.50 + 1.5 h × 60.00 = 289.00 + 25.00 + 90.00 = 404.00
+    expect(quote.totals.lines.map((l) => l.amount.amountMinor)).toEqual([28_900, 2500, 9000]);
+    expect(quote.totals.subtotal).toEqual({ amountMinor: 40_400, currency: "EUR" });
+    // tax 20 % of 404.00 = 80.80; total 404.00 + 80.80 = 484.80
+    expect(quote.totals.tax.amountMinor).toBe(8080);
+    expect(quote.totals.total.amountMinor).toBe(48_480);
+    // deposit 30 % of 484.80 = 145.44
+    expect(quote.totals.deposit.amountMinor).toBe(14_544);
+    // The job's deposit follows the quote, replacing the 50.00 typed when the job was opened.
+    expect(afterSave.deposit).toMatchObject({ amount: 14_544, currency: "eur", paid: false });
+    // The deposit typed by hand no longer applies once a quote sets it.
+    const typed = await owner.send("PATCH", `/api/v1/jobs/${job.id}`, { version: afterSave.version, depositAmount: 9900 });
+    expect(typed.status).toBe(400);
+    expect((typed.json as Err).error.fields).toHaveProperty("depositAmount");
+
+    // Shared with a customer who joins the shop from the mail.
+    const customerEmail = ((await owner.get(`/api/v1/jobs/${job.id}`)).json as { job: { customer: { email: string } } }).job.customer.email;
+    expect((await owner.post(`/api/v1/jobs/${job.id}/share`)).status).toBe(200);
+    const mail = await waitForMail(customerEmail, /shares the plan/);
+    const invitationId = mail.links.find((l) => l.includes("/invite/"))!.split("/invite/")[1];
+    const customer = await signUp("Ivy Harrow", customerEmail);
+    await confirmEmail(customer, customerEmail);
+    expect((await customer.post("/api/auth/organization/accept-invitation", { invitationId })).status).toBe(200);
+    await customer.post("/api/auth/organization/set-active", { organizationId: shopId });
+
+    const seen = ((await customer.get(`/api/v1/jobs/${job.id}`)).json as { job: Job }).job;
+    expect(seen.quote?.totals.total.amountMinor).toBe(48_480);
+    expect(seen.approvedQuote).toBeNull();
+    // One approval takes the plan and the quote together; both are recorded.
+    const approved = await customer.post(`/api/v1/consult/${job.id}/approve`);
+    expect(approved.status, approved.text).toBe(200);
+    const item = (approved.json as { item: Job }).item;
+    expect(item.status).toBe("approved");
+    expect(item.approvedQuote?.totals.total.amountMinor).toBe(48_480);
+    const history = ((await owner.get(`/api/v1/jobs/${job.id}`)).json as { history: { summary: string }[] }).history.map((h) => h.summary);
+    expect(history.some((s) => /approved the plan and the quote \(total EUR\s484\.80, deposit EUR\s145\.44\)/.test(s))).toBe(true);
+
+    // Fixed once approved.
+    const late = await putQuote(owner, item, { parts: [], machiningHours: 0 });
+    expect(late.status).toBe(409);
+    expect((late.json as Err).error.code).toBe("quote_fixed");
+
+    // The deposit paid through the local payment fake: 145.44 EUR asked, the signed event marks it paid.
+    const checkout = await customer.post("/api/v1/payments/checkout", { jobId: job.id });
+    expect(checkout.status, checkout.text).toBe(201);
+    const { sessionId } = checkout.json as { sessionId: string };
+    const db = testDb();
+    try {
+      const row = await db.execute({ sql: "select amount, currency from job_payment where checkout_session_id = ?", args: [sessionId] });
+      expect(row.rows[0]).toMatchObject({ amount: 14_544, currency: "eur" });
+    } finally {
+      db.close();
+    }
+    const paid = await fetch(`${inject("jobFakes").stripeURL}/pay/${sessionId}`, { method: "POST", body: new URLSearchParams({ card: "4242 4242 4242 4242" }), redirect: "manual" });
+    expect(paid.status).toBe(303);
+    await expect.poll(async () => ((await customer.get(`/api/v1/jobs/${job.id}`)).json as { job: Job }).job.deposit.paid).toBe(true);
+  });
+
+  it("asks the owner's deposit instead of the share only with a reason, and never more than the total", async () => {
+    const job = await newJob(owner);
+    const noReason = await putQuote(owner, job, { parts: [], depositOverride: { amountMinor: 10_000, reason: "" } });
+    expect(noReason.status).toBe(400);
+    expect((noReason.json as Err).error.fields).toHaveProperty(["depositOverride.reason"]);
+    const tooMuch = await putQuote(owner, job, { depositOverride: { amountMinor: 99_999_00, reason: "all up front" } });
+    expect(tooMuch.status).toBe(400);
+    expect((tooMuch.json as Err).error.fields).toHaveProperty(["depositOverride.amountMinor"]);
+    const res = await putQuote(owner, job, { depositOverride: { amountMinor: 10_000, reason: "a regular customer of the shop" } });
+    expect(res.status, res.text).toBe(200);
+    const { job: saved, quote } = res.json as { job: Job; quote: QuoteView };
+    // 289.00 kit only: tax 20 % = 57.80, total 346.80, share 30 % = 104.04; the owner asks 100.00 instead.
+    expect(quote.totals.total.amountMinor).toBe(34_680);
+    expect(quote.totals.depositShare.amountMinor).toBe(10_404);
+    expect(saved.deposit.amount).toBe(10_000);
+    expect(quote.quote.depositOverride).toMatchObject({ amountMinor: 10_000, reason: "a regular customer of the shop" });
+  });
+
+  it("refuses what it cannot price, at the field: hours off the quarter, machining without a labour rate, a stale version", async () => {
+    const job = await newJob(owner);
+    const quarter = await putQuote(owner, job, { machiningHours: 1.3 });
+    expect(quarter.status).toBe(400);
+    expect((quarter.json as Err).error.fields?.machiningHours).toMatch(/quarter hour/);
+    const stale = await putQuote(owner, { id: job.id, version: job.version + 5 }, { parts: [] });
+    expect(stale.status).toBe(409);
+
+    // Another shop that has set no labour rate yet.
+    const other = await signUp("Quote Owner Two", uniqueEmail("quote-owner-two"));
+    const o = await me(other);
+    const study = await insertExampleStudy(o.shopId, o.userId, "Quote study two");
+    const created = await other.post("/api/v1/jobs", jobBody({ studyId: study.studyId, customerEmail: uniqueEmail("quote-customer-two") }));
+    const otherJob = (created.json as { item: Job }).item;
+    const noRate = await putQuote(other, otherJob, { machiningHours: 1 });
+    expect(noRate.status).toBe(400);
+    expect((noRate.json as Err).error.fields?.machiningHours).toMatch(/labour rate is not set/);
+    // Nothing was written.
+    expect(((await other.get(`/api/v1/jobs/${otherJob.id}`)).json as { job: Job }).job.quote).toBeNull();
+    // And another shop's job is not there at all.
+    expect((await putQuote(other, job, { parts: [] })).status).toBe(404);
+    expect((await other.get(`/api/v1/jobs/${job.id}/quote`)).status).toBe(404);
+  });
+
+  it("a builder may draft the quote but not set a deposit of their own, and the setup card shows no prices", async () => {
+    const builder = await signIn(DEMO.builder.email, DEMO.builder.password);
+    const demo = await me(builder);
+    const study = await insertExampleStudy(demo.shopId, demo.userId, `Builder quote study ${Date.now()}`);
+    const created = await builder.post("/api/v1/jobs", jobBody({ studyId: study.studyId, customerEmail: uniqueEmail("builder-quote") }));
+    const job = (created.json as { item: Job }).item;
+    const drafted = await putQuote(builder, job, { kit: { label: "Kit as sold", unitMinor: 30_000 }, parts: [{ label: "Gasket set", quantity: 1, unitMinor: 1999 }] });
+    expect(drafted.status, drafted.text).toBe(200);
+    const saved = (drafted.json as { job: Job }).job;
+    // 300.00 + 19.99 = 319.99 before tax.
+    expect(saved.quote?.totals.subtotal.amountMinor).toBe(31_999);
+    const own = await putQuote(builder, saved, { parts: [], depositOverride: { amountMinor: 100, reason: "my own call" } });
+    expect(own.status).toBe(403);
+
+    const card = await builder.get(`/setup-card/${job.id}`);
+    expect(card.status).toBe(200);
+    const text = card.text.replace(/<[^>]+>/g, " ");
+    expect(text).not.toMatch(/EUR|€|319[.,]99|300[.,]00|deposit/i);
+  });
+});
