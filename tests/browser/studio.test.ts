@@ -214,7 +214,7 @@ describe("the fit studio on the example study", () => {
     await shot("side-by-side");
     await page.getByTestId("compare").selectOption("overlay");
     await page.getByTestId("kit-1").check();
-    await expect.poll(() => page.getByTestId("results").locator("h2").textContent()).toBe(example.kits[1].name);
+    await expect.poll(() => page.getByTestId("kit-results").locator("h2").textContent()).toBe(example.kits[1].name);
     await page.evaluate(() => window.scrollTo(0, 0));
     await shot("overlay");
   });
@@ -245,7 +245,7 @@ describe("the study page", () => {
 
   it("while the cut field holds a half-typed value, says the results are for the last valid one and names it", async () => {
     const field = bench.getByRole("region", { name: "Cut plan" }).getByLabel("Cut diameter");
-    const planned = bench.getByTestId("kit-results").getByTestId("cut-diameter");
+    const planned = bench.getByTestId("kit-results").getByTestId("planned-cut");
     await field.fill("55.5");
     await expect.poll(() => planned.textContent()).toContain("55.50 mm");
     await expect.poll(() => bench.getByTestId("stale-results").count()).toBe(0);
@@ -266,6 +266,32 @@ describe("the study page", () => {
     await expect.poll(() => field.inputValue()).toBe("");
     await expect.poll(() => bench.getByTestId("cut-mode").textContent()).toMatch(/least cut and follows the readings/);
     // The plan shows the least cut as the least cut (it follows the readings), not as a number someone set.
-    await expect.poll(() => bench.getByTestId("kit-results").getByTestId("cut-diameter").textContent()).toMatch(/Cut diameter \(least cut\)/);
+    await expect.poll(() => bench.getByTestId("kit-results").getByTestId("planned-cut").textContent()).toMatch(/the least cut for this kit/);
+  });
+
+  it("shows each thing once: one verdict, one kit picker, one set of cautions, one list of warnings", async () => {
+    expect(await bench.getByTestId("verdict").count()).toBe(1);
+    expect(await bench.getByRole("region", { name: "Fit results" }).count()).toBe(1);
+    expect(await bench.getByRole("group", { name: "Kit shown" }).count()).toBe(0);
+    expect(await bench.getByTestId("cautions").count()).toBe(1);
+    expect(await bench.getByText("Worth a look").count()).toBe(0);
+    expect(await bench.getByRole("region", { name: "Rig set-up" }).count()).toBe(1);
+    await bench.setViewportSize({ width: 1440, height: 1000 });
+    await bench.screenshot({ path: join(SHOTS, "study-1440.png"), fullPage: true });
+    await bench.setViewportSize({ width: 1400, height: 1000 });
+  });
+
+  it("says the depth stop as the setup card does: the ring's groove, the shims under it and where it stops", async () => {
+    const stop = bench.getByTestId("depth-stop");
+    await expect.poll(() => stop.innerText()).toMatch(/ring in groove \d+ (with \d+\.\d{2} mm of shims|, no shims): stops at \d+\.\d{2} mm/);
+    expect(await stop.innerText()).not.toMatch(/groove \d+ \+/);
+  });
+
+  it("reads on a phone: the study page at 390 px wide has no sideways scroll", async () => {
+    await bench.setViewportSize({ width: 390, height: 844 });
+    await bench.getByTestId("kit-results").waitFor();
+    await expect.poll(() => bench.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await bench.screenshot({ path: join(SHOTS, "study-390.png"), fullPage: true });
+    await bench.setViewportSize({ width: 1400, height: 1000 });
   });
 });
