@@ -4,6 +4,8 @@ import { useGesture } from "@use-gesture/react";
 import { useCallback, useState, type RefObject } from "react";
 import { FIT, panBy, viewForKey, ZOOM_STEP, zoomAt, type View } from "./zoom";
 
+const TOUCH = typeof window !== "undefined" && "ontouchstart" in window;
+
 /**
  * The zoom and pan of a drawing or photo shown in `viewport`: the wheel and a pinch zoom about the
  * pointer, `pan` moves by screen pixels (a drag), `onKey` takes +, − and 0, and the buttons of <ZoomBar>.
@@ -34,7 +36,9 @@ export function useZoom(viewport: RefObject<HTMLElement | SVGElement | null>) {
         return scale;
       },
     },
-    { target: viewport, eventOptions: { passive: false }, pinch: { pinchOnWheel: false } },
+    // A trackpad's pinch arrives as a wheel with Ctrl. Two fingers on a touch screen are read as touch events:
+    // the pointer-event pinch would capture the pointer on the element pressed, which a redrawn plan replaces.
+    { target: viewport, eventOptions: { passive: false }, pinch: { pinchOnWheel: false, enabled: TOUCH, pointer: { touch: true } } },
   );
   const pan = useCallback(
     (dxPx: number, dyPx: number) => {
