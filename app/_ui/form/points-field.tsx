@@ -1,6 +1,7 @@
 "use client";
 
 import { useController, useFormContext, type FieldValues, type Path } from "react-hook-form";
+import { CornerInputs } from "./corner-inputs";
 import { errorAt } from "./field-error";
 import type { PairText } from "./text-values";
 
@@ -20,33 +21,7 @@ export function PointsField<FV extends FieldValues>({ name, units, label }: { na
           const ey = errorAt(formState.errors, `${name}.${i}.1`);
           return (
             <li key={i} className="flex flex-col">
-              <div className="flex flex-wrap items-center gap-2">
-                <span className="w-10 text-sm text-ink-3 num">#{i + 1}</span>
-                {([0, 1] as const).map((axis) => (
-                  <label key={axis} className="flex items-center gap-1 text-sm text-ink-2">
-                    <span className="num">{axis === 0 ? "x" : "y"}</span>
-                    <input
-                      aria-label={`${label} corner ${i + 1} ${axis === 0 ? "x" : "y"} (${units})`}
-                      className="field-input mt-0 w-24 num"
-                      inputMode="decimal"
-                      autoComplete="off"
-                      value={p[axis]}
-                      aria-invalid={(axis === 0 ? ex : ey) ? true : undefined}
-                      onChange={(e) => edit(i, axis, e.target.value)}
-                      onBlur={field.onBlur}
-                    />
-                  </label>
-                ))}
-                <span className="text-sm text-ink-3 num">{units}</span>
-                <button type="button" className="btn-quiet" onClick={() => set(points.filter((_, j) => j !== i))} aria-label={`Remove ${label} corner ${i + 1}`}>
-                  Remove
-                </button>
-              </div>
-              {ex || ey ? (
-                <p role="alert" className="field-error ml-12">
-                  {[ex && `x: ${ex}`, ey && `y: ${ey}`].filter(Boolean).join(" · ")}
-                </p>
-              ) : null}
+              <CornerInputs label={label} index={i} point={p} units={units} errors={[ex, ey]} onEdit={(axis, text) => edit(i, axis, text)} onRemove={() => set(points.filter((_, j) => j !== i))} onBlur={field.onBlur} />
             </li>
           );
         })}

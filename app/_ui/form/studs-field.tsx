@@ -1,11 +1,11 @@
 "use client";
 
 import type { LengthUnits } from "@/geometry";
-import { useState } from "react";
 import { useFieldArray, useFormContext, type ArrayPath, type FieldValues } from "react-hook-form";
 import { errorAt } from "./field-error";
-import { lengthFieldText, parseLengthText } from "@/model/units";
+import { lengthFieldText } from "@/model/units";
 import { PairInputs } from "./pair-inputs";
+import { ListError, StudListTools } from "./stud-list-tools";
 import type { StudText } from "./text-values";
 
 const SQUARE = [
@@ -19,12 +19,9 @@ const SQUARE = [
 export function StudsField<FV extends FieldValues>({ units, copyFrom }: { units: LengthUnits; copyFrom?: React.ReactNode }) {
   const { control, formState, register } = useFormContext<FV>();
   const { fields, append, remove, replace } = useFieldArray({ control, name: "studs" as ArrayPath<FV> });
-  const [side, setSide] = useState("");
-  const sideMm = parseLengthText(side, units);
-  const fillSquare = () => {
-    if (!sideMm.ok || !sideMm.value) return;
-    const h = lengthFieldText(sideMm.value / 2, units);
-    const neg = lengthFieldText(-sideMm.value / 2, units);
+  const fillSquare = (sideMm: number) => {
+    const h = lengthFieldText(sideMm / 2, units);
+    const neg = lengthFieldText(-sideMm / 2, units);
     replace(SQUARE.map(([label, sx, sy]) => ({ label, positionMm: [sx < 0 ? neg : h, sy < 0 ? neg : h] }) satisfies StudText) as never);
   };
   const listError = errorAt(formState.errors, "studs");
@@ -58,26 +55,10 @@ export function StudsField<FV extends FieldValues>({ units, copyFrom }: { units:
           );
         })}
       </ul>
-      {listError ? (
-        <p role="alert" className="field-error">
-          {listError}
-        </p>
-      ) : null}
-      <div className="flex flex-wrap items-end gap-3">
-        <button type="button" className="btn-quiet" onClick={() => append({ label: `stud ${fields.length + 1}`, positionMm: ["", ""] } as never)}>
-          Add a stud
-        </button>
-        <label className="flex items-center gap-2 text-sm">
-          <span className="text-ink-2">Square pattern, side</span>
-          <input className="field-input mt-0 w-24 num" inputMode="decimal" value={side} onChange={(e) => setSide(e.target.value)} aria-label={`Square pattern side (${units})`} />
-          <span className="text-ink-3 num">{units}</span>
-        </label>
-        <button type="button" className="btn-quiet" onClick={fillSquare} disabled={!sideMm.ok || !sideMm.value}>
-          Fill four studs
-        </button>
+      <ListError message={listError} />
+      <StudListTools units={units} onAdd={() => append({ label: `stud ${fields.length + 1}`, positionMm: ["", ""] } as never)} onFillSquare={fillSquare}>
         {copyFrom}
-      </div>
-      {!sideMm.ok ? <p className="field-error">{sideMm.message}</p> : null}
+      </StudListTools>
     </fieldset>
   );
 }

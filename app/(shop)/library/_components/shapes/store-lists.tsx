@@ -1,11 +1,11 @@
 "use client";
 
 import { studsFromParams, type ShapeParams } from "@/geometry/shapes";
-import { memo, useState } from "react";
-import { parseLengthText } from "@/model/units";
+import { memo } from "react";
 import { useFormContext } from "react-hook-form";
 import { useStore } from "zustand";
 import { errorAt } from "@/app/_ui/form/field-error";
+import { ListError, StudListTools } from "@/app/_ui/form/stud-list-tools";
 import { emptyOutline } from "@/app/_ui/form/text-values";
 import { MEASURES, MeasurePanel } from "./measure-panel";
 import { pointText, type ShapeStore } from "./shape-store";
@@ -23,8 +23,6 @@ export function StoreStudsField({ store }: { store: ShapeStore }) {
     if (list) act.setStuds(list.map((s) => ({ label: s.label, positionMm: pointText(s.positionMm, units, false) })), p);
   };
   const listError = errorAt(formState.errors, "studs");
-  const [side, setSide] = useState("");
-  const sideMm = parseLengthText(side, units);
   return (
     <fieldset className="flex flex-col gap-3">
       <legend className="field-label">Studs (centre from the cylinder axis at the deck)</legend>
@@ -34,25 +32,12 @@ export function StoreStudsField({ store }: { store: ShapeStore }) {
           <StudRow key={i} store={store} index={i} label={s.label} x={s.positionMm[0]} y={s.positionMm[1]} units={units} />
         ))}
       </ul>
-      {listError ? (
-        <p role="alert" className="field-error">
-          {listError}
-        </p>
-      ) : null}
-      <div className="flex flex-wrap items-end gap-3">
-        <button type="button" className="btn-quiet" onClick={() => act.setStuds([...studs, { label: `stud ${studs.length + 1}`, positionMm: ["", ""] }])}>
-          Add a stud
-        </button>
-        <label className="flex items-center gap-2 text-sm">
-          <span className="text-ink-2">Square pattern, side</span>
-          <input className="field-input mt-0 w-24 num" inputMode="decimal" value={side} onChange={(e) => setSide(e.target.value)} aria-label={`Square pattern side (${units})`} />
-          <span className="text-ink-3 num">{units}</span>
-        </label>
-        <button type="button" className="btn-quiet" disabled={!sideMm.ok || !sideMm.value} onClick={() => sideMm.ok && sideMm.value && apply({ kind: "rect-studs", spacingXMm: sideMm.value, spacingYMm: sideMm.value })}>
-          Fill four studs
-        </button>
-      </div>
-      {!sideMm.ok ? <p className="field-error">{sideMm.message}</p> : null}
+      <ListError message={listError} />
+      <StudListTools
+        units={units}
+        onAdd={() => act.setStuds([...studs, { label: `stud ${studs.length + 1}`, positionMm: ["", ""] }])}
+        onFillSquare={(side) => apply({ kind: "rect-studs", spacingXMm: side, spacingYMm: side })}
+      />
     </fieldset>
   );
 }

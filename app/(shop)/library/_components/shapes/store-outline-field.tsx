@@ -4,6 +4,7 @@ import { outlineFromParams, type ShapeParams } from "@/geometry/shapes";
 import { memo, type ReactNode } from "react";
 import { useFormContext } from "react-hook-form";
 import { useStore } from "zustand";
+import { AxisErrors, CornerInputs } from "@/app/_ui/form/corner-inputs";
 import { errorAt } from "@/app/_ui/form/field-error";
 import { emptyOutline, type OutlineText, type PairText } from "@/app/_ui/form/text-values";
 import { MeasurePanel, type MeasureSpec } from "./measure-panel";
@@ -127,7 +128,7 @@ function Pair(p: PairProps) {
         ))}
         <span className="text-sm text-ink-3 num">{p.units}</span>
       </div>
-      {ex || ey ? <p role="alert" className="field-error">{[ex && `x: ${ex}`, ey && `y: ${ey}`].filter(Boolean).join(" · ")}</p> : null}
+      <AxisErrors x={ex} y={ey} />
     </div>
   );
 }
@@ -164,20 +165,7 @@ const CornerRow = memo(function CornerRow({ store, shapeKey, path, label, index,
   };
   return (
     <li className={`flex flex-col rounded px-1 ${lit ? "bg-accent/10 ring-1 ring-accent" : ""}`} data-corner={cornerKey} onMouseEnter={() => store.setState({ hover: cornerKey })} onFocus={() => store.setState({ hover: cornerKey })}>
-      <div className="flex flex-wrap items-center gap-2">
-        <span className="w-10 text-sm text-ink-3 num">#{index + 1}</span>
-        {([0, 1] as const).map((axis) => (
-          <label key={axis} className="flex items-center gap-1 text-sm text-ink-2">
-            <span className="num">{axis ? "y" : "x"}</span>
-            <input aria-label={`${label} corner ${index + 1} ${axis ? "y" : "x"} (${units})`} className="field-input mt-0 w-24 num" inputMode="decimal" autoComplete="off" value={point[axis]} aria-invalid={(axis ? ey : ex) ? true : undefined} onChange={(e) => edit(axis, e.target.value)} />
-          </label>
-        ))}
-        <span className="text-sm text-ink-3 num">{units}</span>
-        <button type="button" className="btn-quiet" onClick={() => store.getState().act.removeCorner(shapeKey, index)} aria-label={`Remove ${label} corner ${index + 1}`}>
-          Remove
-        </button>
-      </div>
-      {ex || ey ? <p role="alert" className="field-error ml-12">{[ex && `x: ${ex}`, ey && `y: ${ey}`].filter(Boolean).join(" · ")}</p> : null}
+      <CornerInputs label={label} index={index} point={point} units={units} errors={[ex, ey]} onEdit={edit} onRemove={() => store.getState().act.removeCorner(shapeKey, index)} />
     </li>
   );
 });
