@@ -3,6 +3,7 @@
 import { useGo } from "../../_ui/use-go";
 import { useState } from "react";
 import { callApi } from "../../_ui/api-client";
+import { UnitToggle } from "../../_ui/form/unit-toggle";
 
 type Shop = { id: string; name: string; role: string };
 
@@ -42,20 +43,7 @@ export function HeaderControls({ shops, activeShopId, units }: { shops: Shop[]; 
         </label>
       ) : null}
       {/* A new preference reloads the page, so a study or form already open shows it too. */}
-      <div role="group" aria-label="Length units" className="inline-flex overflow-hidden rounded-md border border-rule">
-        {(["mm", "in"] as const).map((u) => (
-          <button
-            key={u}
-            type="button"
-            aria-pressed={units === u}
-            disabled={busy}
-            onClick={() => units !== u && run("/api/v1/me", { units: u }, () => window.location.reload())}
-            className={`px-2.5 py-1 num ${units === u ? "bg-accent text-paper" : "bg-card text-ink-2 hover:text-ink"}`}
-          >
-            {u}
-          </button>
-        ))}
-      </div>
+      <UnitToggle units={units} label="Length units" compact disabled={busy} onChange={(u) => run("/api/v1/me", { units: u }, () => window.location.reload())} />
       <button type="button" className="btn-quiet" disabled={busy} onClick={() => run("/api/auth/sign-out", {}, () => go("/sign-in"))}>
         Sign out
       </button>
