@@ -1,7 +1,7 @@
 import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { headers } from "next/headers";
-import { auth } from "./auth";
+import { sessionOf } from "./auth";
 import { getDb } from "./client";
 import { isRole, type Role } from "./roles";
 import * as schema from "./schema";
@@ -33,7 +33,7 @@ export type Caller = {
 
 /** The signed-in person without a shop check, or null. */
 export async function getSessionUser() {
-  const session = await auth.api.getSession({ headers: await headers() });
+  const session = await sessionOf(await headers());
   return session ?? null;
 }
 

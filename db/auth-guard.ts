@@ -74,3 +74,65 @@ export class FailedSignIns {
 
 /** The limit of this server process: ten failed sign-ins per account in a quarter of an hour. */
 export const failedSignIns = new FailedSignIns();
+
+/**
+ * Signed session cookies this process has seen the sign-in library accept, each with the session token it
+ * carries, so that a later request with the very same cookie skips the signature check and the library's
+ * machinery. An entry proves only that the cookie's signature was good: the session row is still read on
+ * every request, so a session ended anywhere (sign-out, revocation, a password reset or change, another
+ * server process) ends at once. Bounded in size; the least recently used entry leaves first.
+ */
+export class VerifiedCookies {
+  private readonly tokens = new Map<string, string>();
+  constructor(readonly max = 10_000) {}
+
+  get size(): number {
+    return this.tokens.size;
+  }
+
+  /** The session token a cookie value was seen to carry, or undefined. */
+  tokenOf(cookie: string): string | undefined {
+    const token = this.tokens.get(cookie);
+    if (token !== undefined) {
+      this.tokens.delete(cookie);
+      this.tokens.set(cookie, token);
+    }
+    return token;
+  }
+
+  /** Keeps a cookie value the library accepted, when it is the token's signed form (`token.signature`). */
+  remember(cookie: string, token: string): void {
+    if (!signedFormOf(cookie, token)) return;
+    this.tokens.delete(cookie);
+    this.tokens.set(cookie, token);
+    if (this.tokens.size > this.max) this.tokens.delete(this.tokens.keys().next().value as string);
+  }
+
+  forget(cookie: string): void {
+    this.tokens.delete(cookie);
+  }
+}
+
+function signedFormOf(cookie: string, token: string): boolean {
+  try {
+    const value = decodeURIComponent(cookie);
+    return token.length > 0 && value.startsWith(`${token}.`) && value.length > token.length + 1;
+  } catch {
+    return false;
+  }
+}
+
+/** The raw value of the named cookie in a Cookie header, or null when it is absent. */
+export function cookieValue(header: string | null, name: string): string | null {
+  if (!header) return null;
+  for (const part of header.split(";")) {
+    const at = part.indexOf("=");
+    if (at > 0 && part.slice(0, at).trim() === name) return part.slice(at + 1).trim();
+  }
+  return null;
+}
+
+/** Whether a session expiring at `expiresAt` is due for the library's refresh (older than `updateAgeS`). */
+export function refreshDue(expiresAt: Date, expiresInS: number, updateAgeS: number, now = Date.now()): boolean {
+  return expiresAt.getTime() - expiresInS * 1000 + updateAgeS * 1000 <= now;
+}

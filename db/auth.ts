@@ -4,9 +4,9 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { APIError } from "better-auth/api";
 import { organization } from "better-auth/plugins";
-import { and, asc, eq, isNull } from "drizzle-orm";
+import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { PersonNameSchema } from "@/model/names";
-import { CLIENT_ADDRESS_HEADER } from "./auth-guard";
+import { CLIENT_ADDRESS_HEADER, VerifiedCookies, cookieValue, refreshDue } from "./auth-guard";
 import { dbSync } from "./client";
 import { appUrl, trustedOrigins } from "./config";
 import { actionMail, sendMail } from "./mail";
@@ -17,6 +17,10 @@ import { createShopFor } from "./shops";
 export { appUrl };
 
 export const MIN_PASSWORD_LENGTH = 10;
+
+/** A session lasts a week, and is extended by the library when it is used after a day. */
+const SESSION_EXPIRES_IN_S = 7 * 24 * 60 * 60;
+const SESSION_UPDATE_AGE_S = 24 * 60 * 60;
 
 /** A person's name by the product's rules (trimmed), or the library's 400 naming the field. */
 function checkedName(name: unknown): string {
@@ -31,6 +35,9 @@ export const auth = betterAuth({
   secret: process.env.BETTER_AUTH_SECRET,
   trustedOrigins: trustedOrigins(),
   database: drizzleAdapter(dbSync(), { provider: "sqlite", schema }),
+  // No signed cookie cache of the session: a session ended on the server (sign-out, a password reset or
+  // change) must end at once, so every request reads the session row (see sessionOf below).
+  session: { expiresIn: SESSION_EXPIRES_IN_S, updateAge: SESSION_UPDATE_AGE_S },
   user: {
     additionalFields: {
       units: { type: "string", required: false, defaultValue: "mm", input: false },
@@ -144,3 +151,33 @@ export const auth = betterAuth({
 });
 
 export type Session = typeof auth.$Infer.Session;
+
+const verifiedCookies = new VerifiedCookies();
+const sessionByToken = dbSync()
+  .select({ session: schema.session, user: schema.user })
+  .from(schema.session)
+  .innerJoin(schema.user, eq(schema.user.id, schema.session.userId))
+  .where(eq(schema.session.token, sql.placeholder("token")))
+  .limit(1)
+  .prepare();
+
+/**
+ * The signed-in person of a request, or null: the library's getSession, except that a cookie whose
+ * signature the library already accepted in this process is answered by one read of the session row and
+ * its user. A session that is gone, expired or due for the library's refresh goes to the library again.
+ */
+export async function sessionOf(headers: Headers): Promise<Session | null> {
+  const name = (await auth.$context).authCookies.sessionToken.name;
+  const cookie = cookieValue(headers.get("cookie"), name);
+  const token = cookie === null ? undefined : verifiedCookies.tokenOf(cookie);
+  if (cookie !== null && token !== undefined) {
+    const [found] = await sessionByToken.execute({ token });
+    if (found && found.session.expiresAt.getTime() > Date.now() && !refreshDue(found.session.expiresAt, SESSION_EXPIRES_IN_S, SESSION_UPDATE_AGE_S)) {
+      return found as Session;
+    }
+    verifiedCookies.forget(cookie);
+  }
+  const session = await auth.api.getSession({ headers });
+  if (session && cookie !== null) verifiedCookies.remember(cookie, session.session.token);
+  return session;
+}

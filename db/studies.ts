@@ -5,7 +5,7 @@ import { CutPlanSchema, GeometryError, ReadingsSchema, StudyLimitsSchema, evalua
 import type { CaseRow, HistoryItem, KitRow, ListQuery, Page, RigRow, StudyRow } from "@/model/schemas";
 import { assembleStudy, checkStudy, type AssembledStudy } from "@/model/study-assembly";
 import type { Caller } from "./access";
-import { getClient, getDb } from "./client";
+import { getClient, getDb, type Db } from "./client";
 import { DataError } from "./errors";
 import { archivedFilter, libraryRowsById, nameFilter } from "./library";
 import { assertStaff, fieldsOf, iso, notFound, readColumn, rowBaseOf } from "./rows";
@@ -99,29 +99,49 @@ function sortColumn(sort: string | undefined): SQL | SQLiteColumn {
   }
 }
 
-/** One page of the shop's studies. */
-export async function listStudies(caller: Caller, query: ListQuery): Promise<Page<StudyRow>> {
-  assertStaff(caller);
-  const db = await getDb();
-  const where = and(eq(s.organizationId, caller.shopId), archivedFilter(s.archivedAt, query.archived), nameFilter(s.name, query.q));
+/** The study's kit ids in its order, as a JSON array, read in the same statement as the study. */
+const kitIdsJson = sql<string>`(select json_group_array(kit_id) from (select ${schema.studyKit.kitId} as kit_id from ${schema.studyKit} where ${schema.studyKit.studyId} = ${s.id} order by ${schema.studyKit.position}))`;
+
+function listStatement(db: Db, query: ListQuery) {
+  const where = and(
+    eq(s.organizationId, sql.placeholder("shopId")),
+    archivedFilter(s.archivedAt, query.archived),
+    query.q?.trim() ? sql`instr(lower(${s.name}), lower(${sql.placeholder("q")})) > 0` : undefined,
+  );
   const dir = query.dir ?? (query.sort ? "asc" : "desc");
   const column = sortColumn(query.sort);
-  const [totalRow] = await db.select({ n: count() }).from(s).where(where);
-  const rows = await db
-    .select(selection)
+  return db
+    .select({ ...selection, kitIds: kitIdsJson, total: sql<number>`count(*) over ()` })
     .from(s)
     .innerJoin(schema.user, eq(schema.user.id, s.createdBy))
     .innerJoin(schema.caseProfile, eq(schema.caseProfile.id, s.caseId))
     .where(where)
     .orderBy(dir === "asc" ? asc(column) : desc(column), asc(s.id))
-    .limit(query.pageSize)
-    .offset((query.page - 1) * query.pageSize);
-  const kits = await kitIdsOf(rows.map((r) => r.record.id));
+    .limit(sql.placeholder("limit"))
+    .offset(sql.placeholder("offset"))
+    .prepare();
+}
+
+// The list's statement is built once for each shape of query (sort, direction, archived, with a name or not).
+const listStatements = new Map<string, ReturnType<typeof listStatement>>();
+
+/** One page of the shop's studies: the rows, their kits and the total in one statement. */
+export async function listStudies(caller: Caller, query: ListQuery): Promise<Page<StudyRow>> {
+  assertStaff(caller);
+  const db = await getDb();
+  const q = query.q?.trim() ?? "";
+  const shape = `${query.sort ?? ""}|${query.dir ?? ""}|${query.archived ?? ""}|${q ? "q" : ""}`;
+  let statement = listStatements.get(shape);
+  if (!statement) listStatements.set(shape, (statement = listStatement(db, query)));
+  const rows = await statement.execute({ shopId: caller.shopId, q, limit: query.pageSize, offset: (query.page - 1) * query.pageSize });
+  // A page past the end has no row to carry the total.
+  const where = and(eq(s.organizationId, caller.shopId), archivedFilter(s.archivedAt, query.archived), nameFilter(s.name, query.q));
+  const total = rows[0]?.total ?? (query.page > 1 ? ((await db.select({ n: count() }).from(s).where(where))[0]?.n ?? 0) : 0);
   return {
-    items: rows.map((r) => toStudyRow({ ...r, kitIds: kits.get(r.record.id) ?? [] })),
+    items: rows.map((r) => toStudyRow({ record: r.record, creatorName: r.creatorName, caseName: r.caseName, kitIds: JSON.parse(r.kitIds) as string[] })),
     page: query.page,
     pageSize: query.pageSize,
-    total: totalRow?.n ?? 0,
+    total,
   };
 }
 
