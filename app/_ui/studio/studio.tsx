@@ -90,8 +90,8 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
           </button>
         )}
       </div>
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
-        <div className="flex min-w-0 flex-col gap-3">
+      <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,1fr)_28rem] lg:grid-rows-[auto_1fr]">
+        <div className="flex min-w-0 flex-col gap-3 lg:col-start-1 lg:row-start-1">
           <Toolbar view={fullView} compare={compare} customer={customer} onView={(v) => setView((s) => ({ ...s, ...v }))} onCompare={setCompare} onSnapshot={snapshot} multipleKits={multi} portWindows={(study.kits[snap.kitIndex]?.baseGasket?.ports.length ?? 0) > 0} />
           <div
             className="card relative aspect-[4/3] max-h-[72vh] w-full overflow-hidden bg-paper-2"
@@ -107,14 +107,19 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
             </div>
             {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           </div>
-          {!customer && <CutCard study={snap.study} result={snap.result} kit={k} units={units} following={following} onChange={change} />}
-          {!customer && <BenchDetails kit={live.result.kits[live.kitIndex]} result={live.result} units={units} />}
         </div>
-        <aside className="flex min-w-0 flex-col gap-3">
+        <aside className="flex min-w-0 flex-col gap-3 lg:col-start-2 lg:row-span-2 lg:row-start-1">
           <ResultsPanel result={live.result} kitIndex={live.kitIndex} mouthDiameterMm={mouthDiameterMm} units={units} large={customer} />
           {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
           <Legend result={live.result} units={units} large={customer} />
         </aside>
+        {/* On a phone the results come right under the view, before the cut and the bench figures. */}
+        {!customer && (
+          <div className="flex min-w-0 flex-col gap-3 lg:col-start-1 lg:row-start-2">
+            <CutCard study={snap.study} result={snap.result} kit={k} units={units} following={following} onChange={change} />
+            <BenchDetails kit={live.result.kits[live.kitIndex]} result={live.result} units={units} />
+          </div>
+        )}
       </div>
       {!customer && <Cautions />}
       <Drawings study={settled.study} result={settled.result} kitIndex={settled.kitIndex} units={units} />
