@@ -37,6 +37,39 @@ describe("a job in the browser, from the study to verified", () => {
     await bench.waitForURL(/\/jobs\/[0-9a-f-]{36}$/);
     const jobId = bench.url().split("/jobs/")[1];
     expect(await bench.getByTestId("job-status").textContent()).toBe("Planned");
+
+    // ── The builder drafts the quote: the kit's price from the library, two gaskets, machining at the shop's rate.
+    const quote = bench.getByRole("form", { name: "The quote" });
+    expect(await quote.getByLabel("Kit price").inputValue()).toBe("289.00");
+    await quote.getByRole("button", { name: "Add a part" }).click();
+    await quote.getByLabel("Part", { exact: true }).fill("Base gasket");
+    await quote.getByLabel("Quantity").fill("2");
+    await quote.getByLabel("Each").fill("12.50");
+    await quote.getByLabel("Machining time").fill("1.3");
+    await quote.getByRole("button", { name: "Save as the job's quote" }).click();
+    await expect.poll(() => quote.getByText(/to the quarter hour \(0\.25/).count(), { timeout: 10_000 }).toBe(1);
+    expect(await quote.getByLabel("Each").inputValue()).toBe("12.50");
+    await quote.getByLabel("Machining time").fill("1.5");
+    await quote.getByRole("button", { name: "Save as the job's quote" }).click();
+    await expect.poll(() => bench.getByTestId("deposit-state").textContent(), { timeout: 10_000 }).toMatch(/145\.44/);
+    // 289.00 + 2 × 12.50 + 1.5 h × 60.00 = 404.00; tax 20 % = 80.80; total 484.80; deposit 30 % = 145.44 (the demo shop's rates).
+    const figures = bench.getByTestId("quote-section");
+    expect((await figures.getByTestId("quote-subtotal").textContent())?.replace(/\s/g, " ")).toBe("EUR 404.00");
+    expect((await figures.getByTestId("quote-tax").textContent())?.replace(/\s/g, " ")).toBe("EUR 80.80");
+    expect((await figures.getByTestId("quote-total").textContent())?.replace(/\s/g, " ")).toBe("EUR 484.80");
+    expect((await figures.getByTestId("quote-deposit").textContent())?.replace(/\s/g, " ")).toBe("EUR 145.44");
+    // A builder drafts; the deposit of their own is the owner's, so the builder is not offered one.
+    expect(await quote.getByText(/Ask a deposit other than/).count()).toBe(0);
+    for (const width of [1440, 390]) {
+      await bench.setViewportSize({ width, height: 900 });
+      await screenshot(bench, `jobs-01a-job-quote-${width}`);
+    }
+    await bench.setViewportSize({ width: 1280, height: 900 });
+    // The shop's own people opening the customer's page are sent to the job, not told to ask someone.
+    await bench.goto(`/consult/${jobId}`);
+    expect(await bench.getByText(/ask the shop.s owner/i).count()).toBe(0);
+    await bench.getByRole("link", { name: "Open the job" }).click();
+    await bench.waitForURL(`**/jobs/${jobId}`);
     await bench.getByRole("button", { name: "Share with the customer" }).click();
     await expect.poll(() => bench.getByText(/was invited into the shop as a customer/).count(), { timeout: 10_000 }).toBe(1);
     await screenshot(bench, "jobs-01-job-planned-and-shared");
@@ -66,7 +99,16 @@ describe("a job in the browser, from the study to verified", () => {
     expect(cautions).toMatch(/legal class/);
     expect(cautions).toMatch(/local rules decide/);
     expect(await sofa.getByText("Fits after the cut — once the case mouth is cut to size.").count()).toBeGreaterThan(0);
-    await sofa.waitForTimeout(1500); // let the 3D view draw
+    // The 3D view has drawn what the studio asks for (the canvas's last frame key matches the view's).
+    await sofa.waitForFunction(
+      () => {
+        const view = document.querySelector<HTMLElement>("[data-testid=view]");
+        const canvas = view?.querySelector("canvas");
+        return Boolean(view && canvas && canvas.dataset.drawn === view.dataset.wanted);
+      },
+      undefined,
+      { timeout: 30_000 },
+    );
     await screenshot(sofa, "jobs-02-consult-fit");
     // The customer's studio is locked in customer mode: no way to the bench view and its cut controls.
     expect(await sofa.getByTestId("studio").getAttribute("data-customer")).toBe("true");
@@ -74,18 +116,36 @@ describe("a job in the browser, from the study to verified", () => {
     expect(await sofa.getByText("Back to the bench view").count()).toBe(0);
     expect(await sofa.getByLabel("Planned cut").count()).toBe(0);
     expect(await sofa.getByTestId("cut-diameter").count()).toBe(0);
-    await sofa.getByRole("button", { name: "Approve this plan" }).click();
+    // Plain words only: no shop settings, no rig; the room around the skirt is the summary's own figure.
+    const page = (await sofa.locator("main").textContent()) ?? "";
+    expect(page).not.toMatch(/Limits at their defaults|At the product.s defaults|Cutter setting|Depth stop|rpm|groove/i);
+    const room = (await sofa.getByTestId("consult-room").textContent()) ?? "";
+    const summary = (await sofa.getByTestId("clearance").first().textContent()) ?? "";
+    // The summary row reads "+0.54 mm" then its minimum; the plan's sentence gives the same first figure.
+    const figure = (t: string) => t.match(/\d+\.\d+/)?.[0];
+    expect(figure(room)).toBeDefined();
+    expect(figure(summary)).toBe(figure(room));
+    // The price in plain words, approved together with the plan.
+    expect((await sofa.getByTestId("quote-total").textContent())?.replace(/\s/g, " ")).toBe("EUR 484.80");
+    for (const width of [1440, 390]) {
+      await sofa.setViewportSize({ width, height: 900 });
+      await screenshot(sofa, `jobs-02a-consult-quote-${width}`);
+    }
+    await sofa.setViewportSize({ width: 1180, height: 900 });
+    await sofa.getByRole("button", { name: "Approve the plan and the price" }).click();
     await expect.poll(() => sofa.getByTestId("approved-line").count(), { timeout: 10_000 }).toBe(1);
-    expect(await sofa.getByTestId("approved-line").textContent()).toContain("Wren Calloway");
+    const approvedLine = (await sofa.getByTestId("approved-line").textContent()) ?? "";
+    expect(approvedLine).toContain("The plan and the price were approved by Wren Calloway");
+    expect(approvedLine).toMatch(/\d{1,2} [A-Z][a-z]{2} \d{4}, \d{2}:\d{2} \S+/); // the one date format, zone named
 
     // ── The deposit through the fake checkout; paid only once the signed event arrives.
-    await sofa.getByRole("button", { name: /Pay the deposit \(50\.00 EUR\)/ }).click();
+    await sofa.getByRole("button", { name: /Pay the deposit \(EUR\s145\.44\)/ }).click();
     await sofa.waitForURL(/\/pay\/cs_test_/);
-    expect(await sofa.getByTestId("amount").textContent()).toBe("EUR 50.00");
+    expect(await sofa.getByTestId("amount").textContent()).toBe("EUR 145.44");
     await sofa.getByLabel("Card number").fill("4242 4242 4242 4242");
     await sofa.getByLabel("Name on card").fill("Wren Calloway");
     await screenshot(sofa, "jobs-03-fake-checkout");
-    await sofa.getByRole("button", { name: /^Pay EUR 50\.00/ }).click();
+    await sofa.getByRole("button", { name: /^Pay EUR 145\.44/ }).click();
     await sofa.waitForURL(`**/consult/${jobId}?checkout=done`);
     await expect.poll(async () => {
       await sofa.reload();
@@ -103,6 +163,8 @@ describe("a job in the browser, from the study to verified", () => {
     expect(await bench.getByTestId("deposit-state").textContent()).toContain("paid");
     await bench.getByRole("button", { name: "Mark machined" }).click();
     await expect.poll(() => bench.getByTestId("job-status").textContent(), { timeout: 10_000 }).toBe("Machined");
+    // The quote was approved with the plan: fixed now, shown as approved.
+    expect(await bench.getByTestId("quote-fixed").textContent()).toContain("Approved with the plan by Wren Calloway");
     const form = bench.getByRole("form", { name: "After-cut readings" });
     await form.getByLabel("Cut diameter readings").fill("55,10 55.12");
     await form.getByRole("button", { name: "Save and verify" }).click();
@@ -113,6 +175,15 @@ describe("a job in the browser, from the study to verified", () => {
     await form.getByLabel("Gasket stack used").fill("0.2");
     await form.getByLabel("Trial fit").selectOption("goes-home");
     await form.getByLabel("Crankcase cleaned of every chip").check();
+    // First a cut that came out under size: outside the plan, and verifying it is the owner's, so the builder is told so.
+    await form.getByLabel("Cut diameter readings").fill("54.90 55.00 54.95");
+    await form.getByRole("button", { name: "Save and verify" }).click();
+    await expect.poll(() => bench.getByTestId("verdict").textContent(), { timeout: 10_000 }).toMatch(/^Outside the plan/);
+    expect(await bench.getByRole("button", { name: /Mark verified|Verify as it stands/ }).count()).toBe(0);
+    expect(await bench.getByTestId("verify-who").textContent()).toMatch(/the shop owner.s decision, with a recorded reason/);
+    await screenshot(bench, "jobs-04a-outside-the-plan-builder");
+    // Re-cut and measured again: within the plan.
+    await form.getByLabel("Cut diameter readings").fill("55.10 55.12 55.09");
     await form.getByRole("button", { name: "Save and verify" }).click();
     await expect.poll(() => bench.getByTestId("verdict").textContent(), { timeout: 10_000 }).toMatch(/^Within the plan/);
     await bench.getByRole("button", { name: "Mark verified" }).click();
@@ -165,5 +236,5 @@ describe("a job in the browser, from the study to verified", () => {
     await shop.close();
     await home.close();
     // One person's whole afternoon in the shop, two browsers and the payment fake: longer than one step.
-  }, 120_000);
+  }, 240_000);
 });
