@@ -3,7 +3,6 @@
 import { CaseProfileSchema, type LengthUnits } from "@/geometry";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useWatch } from "react-hook-form";
-import { useStore } from "zustand";
 import { FormNotice } from "../../../_ui/field";
 import type { CaseRow } from "../../../_ui/query/types";
 import { caseDefaults, caseDoc, caseFieldDefaults, caseToCore, mergeCase, type CaseFormValues } from "./case-values";
@@ -12,18 +11,17 @@ import { lengthFieldText as lengthText, lengthLabel, parseLengthText } from "@/m
 import { ReadingsField } from "@/app/_ui/form/readings-field";
 import { SaveBar } from "@/app/_ui/form/save-bar";
 import { TextField } from "@/app/_ui/form/text-field";
-import { UnitToggle } from "@/app/_ui/form/unit-toggle";
-import { convertLengthTexts } from "@/app/_ui/form/units-text";
-import { useLibraryForm, type OutsideValues } from "@/app/_ui/form/use-library-form";
+import { FormHeading } from "@/app/_ui/form/form-heading";
+import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
 import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
 import { CasePhotoContext, keepCasePhoto, keepReference, latestCasePhoto, leaveNoticeFor, takeNoticeFor, type CasePhotoLink } from "./case-photo";
 import { FormSection } from "./form-section";
 import { CasePlan } from "./shapes/case-plan";
 import { MEASURES } from "./shapes/measure-panel";
-import { createShapeStore, switchUnits } from "./shapes/shape-store";
 import { StorePocketsField, StoreStudsField } from "./shapes/store-lists";
 import { StoreOutlineField } from "./shapes/store-outline-field";
+import { useShapeForm } from "./shapes/use-shape-form";
 import { useShapeValidation } from "./shapes/use-shape-validation";
 
 /**
@@ -33,12 +31,7 @@ import { useShapeValidation } from "./shapes/use-shape-validation";
  */
 export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; units: LengthUnits }) {
   const [first] = useState(() => caseDefaults(row, "mm"));
-  const [store] = useState(() => createShapeStore(convertLengthTexts(caseDoc(first, row), "mm", initialUnits), initialUnits));
-  const saved = useRef(store.getState().doc);
-  const outside = useMemo<OutsideValues<CaseFormValues>>(
-    () => ({ merge: (v) => mergeCase(v, store.getState().doc), switchUnits: (to) => switchUnits(store, to), saved: () => void (saved.current = store.getState().doc) }),
-    [store],
-  );
+  const { store, outside, shapesDirty } = useShapeForm<CaseFormValues>(() => caseDoc(first, row), initialUnits, mergeCase);
   const photo = useCasePhoto(row);
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "cases",
@@ -60,7 +53,6 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
     outside,
     afterSave: photo.afterSave,
   });
-  const shapesDirty = useStore(store, (s) => s.doc !== saved.current);
   const scope = useRef<HTMLFormElement>(null);
   const validate = useShapeValidation(store, form);
   const errors = form.formState.errors;
@@ -72,11 +64,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
   return (
     <FormProvider {...form}>
       <form ref={scope} onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit case profile ${row.name}` : "New case profile"}>
-        <div className="flex flex-wrap items-center justify-between gap-3">
-          <h1 className="text-2xl font-semibold">{row ? row.name : "New case profile"}</h1>
-          <UnitToggle units={units} onChange={setUnits} />
-        </div>
-        {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+        <FormHeading title={row ? row.name : "New case profile"} units={units} onUnits={setUnits} notice={notice} />
         {photo.notice && !notice ? <FormNotice tone="error">{photo.notice}</FormNotice> : null}
         <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
           <div className="flex min-w-0 flex-col gap-6">

@@ -2,10 +2,8 @@
 
 import type { LengthUnits } from "@/geometry";
 import { KitFormSchema } from "@/model/schemas";
-import { useMemo, useRef, useState } from "react";
+import { useRef } from "react";
 import { FormProvider, useFormContext } from "react-hook-form";
-import { useStore } from "zustand";
-import { FormNotice } from "../../../_ui/field";
 import type { KitRow } from "../../../_ui/query/types";
 import { CopyStudsFromCase } from "./copy-studs";
 import { FormSection } from "./form-section";
@@ -13,12 +11,11 @@ import { ReadingsField } from "@/app/_ui/form/readings-field";
 import { SaveBar } from "@/app/_ui/form/save-bar";
 import { StudsField } from "@/app/_ui/form/studs-field";
 import { TextField } from "@/app/_ui/form/text-field";
-import { UnitToggle } from "@/app/_ui/form/unit-toggle";
-import { convertLengthTexts } from "@/app/_ui/form/units-text";
-import { useLibraryForm, type OutsideValues } from "@/app/_ui/form/use-library-form";
+import { FormHeading } from "@/app/_ui/form/form-heading";
+import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import { kitDefaults, kitDoc, kitToCore, mergeKit, type KitFormValues } from "./kit-values";
 import { GasketSection } from "./shapes/gasket-section";
-import { createShapeStore, switchUnits } from "./shapes/shape-store";
+import { useShapeForm } from "./shapes/use-shape-form";
 import { useShapeValidation } from "./shapes/use-shape-validation";
 
 /** Half the last digit of a length shown in inches (0.0001 in): a reading shown in inches still finds its stamp. */
@@ -26,12 +23,7 @@ const INCH_TEXT_MM = 0.0013;
 
 /** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets and the base gasket's ports, price. */
 export function KitForm({ row, units: initialUnits }: { row: KitRow | null; units: LengthUnits }) {
-  const [store] = useState(() => createShapeStore(convertLengthTexts(kitDoc(row), "mm", initialUnits), initialUnits));
-  const saved = useRef(store.getState().doc);
-  const outside = useMemo<OutsideValues<KitFormValues>>(
-    () => ({ merge: (v) => mergeKit(v, store.getState().doc), switchUnits: (to) => switchUnits(store, to), saved: () => void (saved.current = store.getState().doc) }),
-    [store],
-  );
+  const { store, outside, shapesDirty } = useShapeForm<KitFormValues>(() => kitDoc(row), initialUnits, mergeKit);
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "kits",
     id: row?.id ?? null,
@@ -48,7 +40,6 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
     fieldPath: (p) => p.replace(/^data\./, ""),
     outside,
   });
-  const shapesDirty = useStore(store, (s) => s.doc !== saved.current);
   const scope = useRef<HTMLFormElement>(null);
   const validate = useShapeValidation(store, form);
   const stamp = (list: KitRow["readings"]["skirtDiameter"] | undefined) => (v: number | undefined) => {
@@ -59,11 +50,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
   return (
     <FormProvider {...form}>
       <form ref={scope} onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit kit ${row.name}` : "New cylinder kit"}>
-        <div className="flex flex-wrap items-center justify-between gap-3">
-          <h1 className="text-2xl font-semibold">{row ? row.name : "New cylinder kit"}</h1>
-          <UnitToggle units={units} onChange={setUnits} />
-        </div>
-        {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+        <FormHeading title={row ? row.name : "New cylinder kit"} units={units} onUnits={setUnits} notice={notice} />
         <FormSection title="Kit">
           <TextField<KitFormValues> name="name" label="Name" className="md:col-span-2" />
           <TextField<KitFormValues> name="boreMm" label="Bore" unit={units} numeric />

@@ -2,12 +2,11 @@
 
 import { BoringRigSchema, type LengthUnits } from "@/geometry";
 import { FormProvider } from "react-hook-form";
-import { FormNotice } from "../../../_ui/field";
 import type { RigRow } from "../../../_ui/query/types";
 import { FormSection } from "./form-section";
 import { SaveBar } from "@/app/_ui/form/save-bar";
 import { TextField } from "@/app/_ui/form/text-field";
-import { UnitToggle } from "@/app/_ui/form/unit-toggle";
+import { FormHeading } from "@/app/_ui/form/form-heading";
 import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import { GroovesField, ShimsField } from "./rig-lists";
 import { rigDefaults, rigToCore, type RigFormValues } from "./rig-values";
@@ -30,11 +29,7 @@ export function RigForm({ row, units: initialUnits }: { row: RigRow | null; unit
   return (
     <FormProvider {...form}>
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-6" aria-label={row ? `Edit rig ${row.name}` : "New boring rig"}>
-        <div className="flex flex-wrap items-center justify-between gap-3">
-          <h1 className="text-2xl font-semibold">{row ? row.name : "New boring rig"}</h1>
-          <UnitToggle units={units} onChange={setUnits} />
-        </div>
-        {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+        <FormHeading title={row ? row.name : "New boring rig"} units={units} onUnits={setUnits} notice={notice} />
         <FormSection title="Rig">
           <TextField<RigFormValues> name="name" label="Name" className="md:col-span-2" />
           <TextField<RigFormValues> name="headDiameterMm" label="Cutter head diameter, as measured (without the bit)" unit={units} numeric />
