@@ -2,6 +2,7 @@
 
 import { useController, useFormContext, type FieldValues, type Path } from "react-hook-form";
 import { CornerInputs } from "./corner-inputs";
+import { ListError } from "./stud-list-tools";
 import { errorAt } from "./field-error";
 import type { PairText } from "./text-values";
 
@@ -31,11 +32,7 @@ export function PointsField<FV extends FieldValues>({ name, units, label }: { na
           Add a corner
         </button>
       </div>
-      {err ? (
-        <p role="alert" className="field-error">
-          {err}
-        </p>
-      ) : null}
+      <ListError message={err} />
     </div>
   );
 }

@@ -4,7 +4,7 @@ import type { LengthUnits } from "@/geometry";
 import { useState, type ReactNode } from "react";
 import { parseLengthText } from "@/model/units";
 
-/** The message a list field has as a whole (too few studs, a repeated label), read out when it appears. */
+/** The message a list field has as a whole (too few studs, a repeated label, too few corners), read out when it appears. */
 export function ListError({ message }: { message: string | undefined }) {
   return message ? (
     <p role="alert" className="field-error">

@@ -5,6 +5,7 @@ import { memo, type ReactNode } from "react";
 import { useFormContext } from "react-hook-form";
 import { useStore } from "zustand";
 import { AxisErrors, CornerInputs } from "@/app/_ui/form/corner-inputs";
+import { ListError } from "@/app/_ui/form/stud-list-tools";
 import { errorAt } from "@/app/_ui/form/field-error";
 import { emptyOutline, type OutlineText, type PairText } from "@/app/_ui/form/text-values";
 import { MeasurePanel, type MeasureSpec } from "./measure-panel";
@@ -74,11 +75,7 @@ export function StoreOutlineField({
           </div>
         </div>
       )}
-      {err ? (
-        <p role="alert" className="field-error">
-          {err}
-        </p>
-      ) : null}
+      <ListError message={err} />
     </fieldset>
   );
 }
