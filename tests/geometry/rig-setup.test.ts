@@ -54,6 +54,8 @@ describe("the rig's set-up for a cut", () => {
 
   it("hardware exactly at its margin clears; a rig that gives no hardware radius is not judged", () => {
     expect(setUp({}, 55, 24.5, { ...L, hardwareMarginMm: 6.5 })).toMatchObject({ result: { hardwareClearanceMm: 6.5, hardwareClears: true }, warnings: [] });
+    // With no tolerance at all, exactly at the margin still clears.
+    expect(rigSetup(testRig as never, 55, 24.5, { ...L, hardwareMarginMm: 6.5 }, 0, []).hardwareClears).toBe(true);
     const strikes = setUp({}, 55, 24.5, { ...L, hardwareMarginMm: 7 });
     expect(strikes.result.hardwareClears).toBe(false);
     expect(strikes.codes).toEqual(["hardware-strikes"]);
