@@ -1,28 +1,14 @@
 // The bench setup card's content, built from a plan snapshot: it states the core's figures for the planned kit
 // in the reader's units, its dates in the shop's time zone, and a cannot-fit plan on every page.
 import { describe, expect, it } from "vitest";
-import { evaluateStudy, mmToIn, type Study } from "@/geometry";
-import type { PlanSnapshot } from "@/db/jobs";
+import { evaluateStudy, mmToIn } from "@/geometry";
 import { buildSetupCard, setupCardDrawings } from "@/db/setup-card";
 import { SETUP_CARD_CAUTIONS } from "@/model/cautions";
 import { roundStudy } from "../scene/fixtures";
+import { benchJob, benchPlan } from "./setup-card-plan";
 
-const job = (override: { reason: string } | null = null) => ({
-  reference: "J-0042",
-  title: "Bench test engine",
-  customer: { name: "Quillfern Engine Works" },
-  engineNumber: "",
-  caseNumber: "C-1",
-  caseVariant: "",
-  plan: { override: override ? { at: "2026-12-02T09:00:00.000Z", by: { id: "u1", name: "Ada Quillfern" }, reason: override.reason } : null },
-});
-
-/** A plan of the study for the kit at `kitIndex`, as the job keeps it. */
-function snapshot(study: Study, kitIndex = 0): PlanSnapshot {
-  const result = evaluateStudy(study);
-  const k = result.kits[kitIndex];
-  return { studyId: "s1", studyName: "Bench study", kitId: k.kitId, kitName: k.name, study, result, takenAt: "2026-12-02T08:00:00.000Z" };
-}
+const job = benchJob;
+const snapshot = benchPlan;
 
 const line = (lines: { label: string; value: string }[] | null, label: string) => lines?.find((l) => l.label === label)?.value;
 
@@ -69,7 +55,7 @@ describe("the setup card", () => {
     const card = buildSetupCard(job(), plan, "Quillfern Engine Works", "mm", { printedAt: new Date("2026-12-02T23:30:00.000Z"), timeZone: "Europe/Berlin" });
     expect(line(card.header, "Printed")).toBe("3 Dec 2026, 00:30 Europe/Berlin");
     expect(line(card.header, "Study")).toBe("Bench study (plan taken 2 Dec 2026)");
-    expect(line(card.header, "Engine no.")).toBe("—");
+    expect(line(buildSetupCard({ ...job(), engineNumber: "" }, plan, "Quillfern Engine Works", "mm").header, "Engine no.")).toBe("—");
   });
 
   it("asks for a rig when the study has none, and keeps every caution in the order of the work", () => {

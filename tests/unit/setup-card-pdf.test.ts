@@ -1,29 +1,18 @@
 // The setup card's PDF as printed: the figures on page 1, each drawing on a landscape page of its own at its
 // stated scale — measured in the PDF itself — and a cannot-fit plan marked on every page.
 import { describe, expect, it } from "vitest";
-import { evaluateStudy, type Study } from "@/geometry";
+import type { Study } from "@/geometry";
 import type { PlanSnapshot } from "@/db/jobs";
 import { buildSetupCard, drawingScale, scaleText, setupCardDrawings, DRAWING_ROOM_MM } from "@/db/setup-card";
 import { setupCardPdf } from "@/db/setup-card-pdf";
 import { VERDICT_COLOURS } from "@/model/palette";
 import { measurePdf, widestBox } from "../integration/jobs-pdf-measure";
+import { benchJob, benchPlan } from "../db/setup-card-plan";
 import { roundStudy } from "../scene/fixtures";
 
-const job = (plan: PlanSnapshot, override: { reason: string } | null = null) => ({
-  reference: "J-0042",
-  title: "Bench test engine",
-  customer: { name: "Quillfern Engine Works" },
-  engineNumber: "E-1",
-  caseNumber: "C-1",
-  caseVariant: "",
-  plan: { override: override ? { at: "2026-12-02T09:00:00.000Z", by: { id: "u1", name: "Ada Quillfern" }, reason: override.reason } : null },
-});
-
-function snapshot(study: Study): PlanSnapshot {
-  const result = evaluateStudy(study);
-  const k = result.kits[0];
-  return { studyId: "s1", studyName: "Bench study", kitId: k.kitId, kitName: k.name, study, result, takenAt: "2026-12-02T08:00:00.000Z" };
-}
+// The job and its plan, as the content test builds its card from (tests/db/setup-card-plan.ts).
+const job = (_plan: PlanSnapshot, override: { reason: string } | null = null) => benchJob(override);
+const snapshot = (study: Study) => benchPlan(study);
 
 describe("the drawings' scale on the card", () => {
   it("is the largest of 1:1, 1:2, 1:4 that fits the landscape page's room", () => {
