@@ -45,4 +45,32 @@ describe("the study's history", () => {
   it("writes lengths with at least one decimal and at most three", () => {
     expect([formatMm(2), formatMm(2.5), formatMm(0.12345)]).toEqual(["2.0", "2.5", "0.123"]);
   });
+
+  it("tells a rig changed from one set or removed, and a cut value from one proposed", () => {
+    const rigged = { ...base, rigId: "r1" };
+    expect(describeChanges(rigged, { ...base, rigId: "r2" }, nameOf)).toEqual(["rig Rig 1 → (deleted)"]);
+    expect(describeChanges(rigged, base, nameOf)).toEqual(["removed the rig Rig 1"]);
+    const cut = { ...base, cut: { diameterMm: 54, depthMm: 25.25 } };
+    expect(describeChanges(cut, { ...base, cut: { diameterMm: 54.5, depthMm: 25.25 } }, nameOf)).toEqual(["cut diameter 54.0 → 54.5 mm"]);
+    expect(describeChanges(cut, base, nameOf)).toEqual(["cut diameter 54.0 → proposed", "cut depth 25.25 → proposed"]);
+  });
+
+  it("states the centring offset set or removed, and the holder heights by their count", () => {
+    const offset = { ...base, cut: { centerOffsetMm: [0.1, -0.25] as const } };
+    expect(describeChanges(base, offset, nameOf)).toEqual(["cut centring offset set to (0.1, -0.25) mm"]);
+    expect(describeChanges(offset, base, nameOf)).toEqual(["cut centring offset removed"]);
+    const one = { ...base, readings: { holderHeights: [{ stud: "front left", heightMm: 30, straightedgeMm: 0 }] } };
+    expect(describeChanges(base, one, nameOf)).toEqual(["holder heights changed (1 reading)"]);
+    expect(describeChanges(one, { ...base, readings: { holderHeights: [] } }, nameOf)).toEqual(["holder heights cleared"]);
+  });
+
+  it("writes a limit in its own unit, a list of classes, and a limit back to its default", () => {
+    const before = { ...base, limits: { cuttingSpeedMaxMPerMin: 120, displacementClassesCc: [50, 125] } };
+    const after = { ...base, limits: { displacementClassesCc: [] } };
+    expect(describeChanges(before, after, nameOf)).toEqual(["highest cutting speed 120.0 m/min → default", "displacement classes 50, 125 cc → none"]);
+  });
+
+  it("says when the chosen kit is cleared", () => {
+    expect(describeChanges({ ...base, chosenKitId: "k1" }, base, nameOf)).toEqual(["cleared the chosen kit"]);
+  });
 });
