@@ -6,7 +6,8 @@ import { me, insertExampleStudy, jobBody } from "../integration/jobs-support";
 import { DEMO, signIn, uniqueEmail } from "../support/http";
 
 // Every page each role can reach, walked mostly by clicking, checked by axe-core's rules
-// (WCAG 2.1 A and AA). Any serious or critical finding fails the walk, with what and where.
+// (WCAG 2.1 A and AA), in the light and in the dark colour scheme. Any serious or critical finding fails
+// the walk, with what and where.
 
 let browser: Browser;
 /** The shop's planned job, shared with the demo customer, and the study it was planned from. */
@@ -28,12 +29,14 @@ afterAll(async () => {
   await browser?.close();
 });
 
+type Scheme = "light" | "dark";
 type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
 
 /** One person's walk: one context, one tab, the findings of every page it opens. */
-async function walker(role?: keyof typeof DEMO): Promise<{ page: Page; context: BrowserContext; check: (name: string) => Promise<void>; findings: Finding[] }> {
+async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page: Page; context: BrowserContext; check: (name: string) => Promise<void>; findings: Finding[] }> {
   const context = await newPerson(browser);
   const page = await context.newPage();
+  await page.emulateMedia({ colorScheme: scheme });
   if (role) await signInThroughForm(page, DEMO[role].email, DEMO[role].password);
   const findings: Finding[] = [];
   const check = async (name: string) => {
@@ -41,7 +44,7 @@ async function walker(role?: keyof typeof DEMO): Promise<{ page: Page; context: 
     const result = await new AxeBuilder({ page }).withTags(["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "best-practice"]).analyze();
     for (const v of result.violations) {
       if (v.impact !== "serious" && v.impact !== "critical") continue;
-      findings.push({ page: `${name} (${new URL(page.url()).pathname})`, rule: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.join(" ")) });
+      findings.push({ page: `${name}, ${scheme} (${new URL(page.url()).pathname})`, rule: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.join(" ")) });
     }
   };
   return { page, context, check, findings };
@@ -107,9 +110,9 @@ async function keyboardThroughStudio(page: Page) {
   await stepByKey(page, "cut-depth");
 }
 
-describe("accessibility of every page, by role", () => {
+describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, in the %s colour scheme", (scheme) => {
   it("a visitor: the front page, the example studio (its section plane and cut sliders by keyboard) and the account forms", async () => {
-    const { page, context, check, findings } = await walker();
+    const { page, context, check, findings } = await walker(scheme);
     await page.goto("/");
     await check("front page");
     await page.goto("/try");
@@ -127,9 +130,9 @@ describe("accessibility of every page, by role", () => {
     expect(findings, report(findings)).toEqual([]);
   });
 
-  // The longest walk: fifteen pages, each checked in full.
-  it("the owner: home, the library's shelves and forms, studies, a study, jobs, a new job, a job, settings and outbox", { timeout: 180_000 }, async () => {
-    const { page, context, check, findings } = await walker("owner");
+  // The longest walk: fifteen pages, each checked in full (about three minutes on a busy two-core machine).
+  it("the owner: home, the library's shelves and forms, studies, a study, jobs, a new job, a job, settings and outbox", { timeout: 360_000 }, async () => {
+    const { page, context, check, findings } = await walker(scheme, "owner");
     await check("home");
     await nav(page, "Library");
     await page.waitForURL("**/library");
@@ -171,7 +174,7 @@ describe("accessibility of every page, by role", () => {
   });
 
   it("the builder: home, jobs, a job and its setup card", async () => {
-    const { page, context, check, findings } = await walker("builder");
+    const { page, context, check, findings } = await walker(scheme, "builder");
     await check("home");
     await nav(page, "Jobs");
     await page.waitForURL("**/jobs");
@@ -186,7 +189,7 @@ describe("accessibility of every page, by role", () => {
   });
 
   it("the customer: the consult list and a consult page", async () => {
-    const { page, context, check, findings } = await walker("customer");
+    const { page, context, check, findings } = await walker(scheme, "customer");
     await check("landing");
     await nav(page, "Consult");
     await page.waitForURL("**/consult");
