@@ -120,6 +120,24 @@ describe("a photo chosen for a new case profile", () => {
     await expect.poll(() => surface.getAttribute("data-photo-width")).toBe(String(W));
     await expect.poll(() => panel.getByLabel(/Stud spacing across/).inputValue()).toMatch(/^56(\.0+)?$|^2\.205$/);
     await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a/);
+    expect(await textOf(page.getByText(/^(Unsaved changes|No unsaved changes)$/))).toBe("No unsaved changes");
+
+    // A new reference, two points and their distance, is kept with the photo when the case is saved.
+    await panel.getByRole("radio", { name: /Two points and their distance/ }).check();
+    await panel.getByLabel(/Measured distance between the two points/).fill("79.2");
+    for (const [x, y] of [STUDS[0], STUDS[2]]) {
+      const before = Number(await surface.getAttribute("data-points"));
+      const box = await surface.boundingBox();
+      if (!box) throw new Error("the photo is not shown");
+      await surface.click({ position: { x: (x / W) * box.width, y: (y / H) * box.height } });
+      await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
+    }
+    await expect.poll(() => textOf(page.getByText(/^(Unsaved changes|No unsaved changes)$/))).toBe("Unsaved changes");
+    await page.getByRole("button", { name: "Save changes" }).click();
+    await expect.poll(() => textOf(page.getByRole("status").filter({ hasText: /^Saved “/ }))).toBe(`Saved “${name}”.`);
+    const again = await photosOf(saved!.id);
+    expect(again).toHaveLength(1);
+    expect(again[0].reference).toMatchObject({ kind: "scale", distanceMm: 79.2 });
   });
 
   it("that cannot be uploaded leaves the case saved, and its form says the photo was not kept and why", async () => {

@@ -15,7 +15,7 @@ import { FormHeading } from "@/app/_ui/form/form-heading";
 import { useLibraryForm } from "@/app/_ui/form/use-library-form";
 import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
 import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
-import { CasePhotoContext, keepCasePhoto, keepReference, latestCasePhoto, leaveNoticeFor, takeNoticeFor, type CasePhotoLink } from "./case-photo";
+import { CasePhotoContext, keepCasePhoto, keepReference, latestCasePhoto, leaveNoticeFor, sameReference, takeNoticeFor, type CasePhotoLink } from "./case-photo";
 import { FormSection } from "./form-section";
 import { CasePlan } from "./shapes/case-plan";
 import { MEASURES } from "./shapes/measure-panel";
@@ -150,7 +150,7 @@ function useCasePhoto(row: CaseRow | null) {
   const caseId = row?.id ?? null;
   const chosen = useRef<ChosenPhoto | null>(null);
   const reference = useRef<PhotoReference | null>(null);
-  const keptKey = useRef("null");
+  const kept = useRef<PhotoReference | null>(null);
   const [dirty, setDirty] = useState(false);
   const [initialReference, setInitialReference] = useState<PhotoReference | undefined>(undefined);
   const [notice, setNotice] = useState<string | null>(null);
@@ -165,7 +165,7 @@ function useCasePhoto(row: CaseRow | null) {
       if (left) setNotice(left);
       if (!r.ok) setNotice(`The kept photo's reference points could not be read: ${r.message}`);
       else if (r.photo?.reference) {
-        keptKey.current = JSON.stringify(r.photo.reference);
+        kept.current = r.photo.reference;
         reference.current = r.photo.reference;
         setInitialReference(r.photo.reference);
       }
@@ -177,7 +177,7 @@ function useCasePhoto(row: CaseRow | null) {
 
   const onReferenceChange = useCallback((ref: PhotoReference | null) => {
     reference.current = ref;
-    setDirty(JSON.stringify(ref) !== keptKey.current);
+    setDirty(!sameReference(ref, kept.current));
   }, []);
   const onPhotoChosen = useCallback((p: ChosenPhoto) => {
     chosen.current = p;
@@ -189,15 +189,15 @@ function useCasePhoto(row: CaseRow | null) {
     if (created) {
       const photo = chosen.current;
       if (!photo) return;
-      const kept = await keepCasePhoto(saved.id, photo, reference.current);
-      if (kept.ok) return;
-      leaveNoticeFor(saved.id, `Saved “${saved.name}”, but the photo was not kept: ${kept.message} Choose it again below to keep it with the case profile.`);
+      const stored = await keepCasePhoto(saved.id, photo, reference.current);
+      if (stored.ok) return;
+      leaveNoticeFor(saved.id, `Saved “${saved.name}”, but the photo was not kept: ${stored.message} Choose it again below to keep it with the case profile.`);
       return { goTo: `/library/cases/${saved.id}` };
     }
-    if (JSON.stringify(reference.current) === keptKey.current) return;
-    const kept = await keepReference(saved.id, reference.current);
-    if (!kept.ok) return { notice: { tone: "error" as const, text: `Saved “${saved.name}”, but the photo's reference points were not kept: ${kept.message}` } };
-    keptKey.current = JSON.stringify(reference.current);
+    if (sameReference(reference.current, kept.current)) return;
+    const done = await keepReference(saved.id, reference.current);
+    if (!done.ok) return { notice: { tone: "error" as const, text: `Saved “${saved.name}”, but the photo's reference points were not kept: ${done.message}` } };
+    kept.current = reference.current;
     setDirty(false);
   };
 

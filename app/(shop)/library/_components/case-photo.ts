@@ -22,6 +22,23 @@ export function useCasePhotoLink(): CasePhotoLink | null {
   return useContext(CasePhotoContext);
 }
 
+/** The smallest length a field shows in inches (0.001 in), in mm: a kept length read back through a field may move by this much. */
+const FIELD_STEP_MM = 0.0254;
+
+/**
+ * Whether two references are the same for keeping: the same kind and points, and lengths within what a field
+ * rounds them to (a length kept in mm, shown in inches and read back, is not a change someone made).
+ */
+export function sameReference(a: PhotoReference | null | undefined, b: PhotoReference | null | undefined): boolean {
+  if (!a || !b) return !a && !b;
+  if (a.kind !== b.kind || a.points.length !== b.points.length) return false;
+  if (a.points.some((p, i) => Math.abs(p[0] - b.points[i][0]) > 1e-6 || Math.abs(p[1] - b.points[i][1]) > 1e-6)) return false;
+  const near = (x: number, y: number) => Math.abs(x - y) <= FIELD_STEP_MM / 2 + 1e-9;
+  if (a.kind === "scale" && b.kind === "scale") return near(a.distanceMm, b.distanceMm);
+  if (a.kind === "rectangle" && b.kind === "rectangle") return near(a.widthMm, b.widthMm) && near(a.heightMm, b.heightMm);
+  return false;
+}
+
 type StoredPhoto = { id: string; state: string; reference: PhotoReference | null };
 
 /** The case profile's latest kept photo (the one the trace shows), null when none, or why it could not be read. */
