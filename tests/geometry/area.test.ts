@@ -61,7 +61,7 @@ function nearCircle(pts: readonly P[], c: Vec2, r: number, gap: number): boolean
   });
 }
 
-describe("disk ∩ polygon area, analytic", () => {
+describe("disk ∩ polygon area, analytic", { timeout: 60_000 }, () => {
   // Aizu Online Judge, Computational Geometry Library problem CGL_7_H "Intersection of a Circle and a Polygon",
   // the two sample cases (circle centred at the origin; outputs to 12 decimals).
   it.each([
@@ -118,7 +118,7 @@ describe("disk ∩ polygon area, analytic", () => {
   });
 });
 
-describe("point to polygon boundary, without the library", () => {
+describe("point to polygon boundary, without the library", { timeout: 60_000 }, () => {
   it("agrees with flatten-js on distance, nearest point and inside for random points and polygons", () => {
     fc.assert(
       fc.property(polygonArb, fc.tuple(fc.double({ min: -45, max: 45, noNaN: true }), fc.double({ min: -45, max: 45, noNaN: true })), (pts, p) => {
@@ -147,7 +147,7 @@ describe("point to polygon boundary, without the library", () => {
   });
 });
 
-describe("a traced mouth of many corners", () => {
+describe("a traced mouth of many corners", { timeout: 60_000 }, () => {
   /** A circle of radius 23 mm as 500 corners, each radius off by up to 0.1 % (a seeded sequence). */
   function jitteredMouth(): P[] {
     let seed = 7;

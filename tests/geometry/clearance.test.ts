@@ -37,7 +37,7 @@ function clippedInterference(c: Vec2, r: number, opening: Outline): number {
 /** Relative error of a 4096-gon against its circle is about (2π/4096)²/6 ≈ 4e-7, so allow 1e-5 of the skirt area. */
 const areaTol = (r: number) => 1e-5 * Math.PI * r * r + 1e-6;
 
-describe("radial clearance against a round mouth", () => {
+describe("radial clearance against a round mouth", { timeout: 60_000 }, () => {
   it("a skirt 0.2 mm wider than the mouth interferes by 0.1 mm radially", () => {
     const res = skirtClearance([0, 0], 23.1, { kind: "circle", diameterMm: 46 }, TOL);
     expect(res.clearanceMm).toBeCloseTo(-0.1, 9);
@@ -68,7 +68,7 @@ describe("radial clearance against a round mouth", () => {
   });
 });
 
-describe("radial clearance against a polygon mouth", () => {
+describe("radial clearance against a polygon mouth", { timeout: 60_000 }, () => {
   const mouth: Outline = { kind: "polygon", pointsMm: [[-23, -20], [23, -20], [25, 0], [23, 20], [-23, 20], [-25, 0]] };
 
   it("the clearance is the distance to the nearest edge minus the skirt radius", () => {

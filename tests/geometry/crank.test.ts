@@ -16,7 +16,7 @@ function toWebs(x: number, y: number, z: number, c: typeof crank): number {
   return axial > 0 || radial > 0 ? Math.hypot(Math.max(axial, 0), Math.max(radial, 0)) : Math.max(axial, radial);
 }
 
-describe("clearance between the skirt's lower edge and the swept crank webs", () => {
+describe("clearance between the skirt's lower edge and the swept crank webs", { timeout: 60_000 }, () => {
   it("a skirt wider than the web span meets the rim corner: L − K", () => {
     // r = 28, p = 24.7, d = 45.7 → h = 21, L = √(28² + 21²) = 35; K = √(21² + 20²) = 29; 35 − 29 = 6 mm.
     // The nearest edge point is on the ray to the corner: a = L·(S/2)/K = 35·20/29 = 24.1379… ≤ r.

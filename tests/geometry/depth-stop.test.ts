@@ -79,7 +79,7 @@ function expectConsistent(stop: DepthStop, wantedMm: number, rig: Rig) {
   expect(stop.overshootMm).toBeGreaterThanOrEqual(-TOL);
 }
 
-describe("depth stop search", () => {
+describe("depth stop search", { timeout: 60_000 }, () => {
   it("equals the one-by-one search on small rigs (≤ 3 sizes of ≤ 4 shims, ≤ 3 grooves)", () => {
     // On failure fast-check prints the seed and path that reproduce the case.
     fc.assert(

@@ -8,7 +8,7 @@ import { propertyRuns } from "./runs";
 /** The study with the diameter and depth left out (the centring offset kept), so the core proposes each kit's cut. */
 const unplanned = (s: Study): Study => ({ ...s, cut: s.cut?.centerOffsetMm ? { centerOffsetMm: s.cut.centerOffsetMm } : undefined });
 
-describe("each kit's least cut", () => {
+describe("each kit's least cut", { timeout: 60_000 }, () => {
   it("without a rig: D = skirt + 2·minimum clearance rounded up to 0.1 mm, depth = protrusion + minimum rounded up to 0.05 mm", () => {
     // Skirt 54 mm, minimum radial clearance 0.5 (default): 54 + 2·0.5 = 55.0 mm; length 24.7 + 0.5 = 25.2 mm.
     // Worked here by hand from the formula; the clearances are common practice, no published source.

@@ -50,7 +50,7 @@ const snappedStarArb = fc
     return cw ? pts.reverse() : pts;
   });
 
-describe("polygon validity by sweep", () => {
+describe("polygon validity by sweep", { timeout: 60_000 }, () => {
   it("agrees with the pairwise check on random polygons of a small grid (touches, overlaps and repeats included)", () => {
     const seen = { valid: 0, invalid: 0 };
     fc.assert(

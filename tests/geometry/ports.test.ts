@@ -40,7 +40,7 @@ describe("steps between a port window and the passage under it", () => {
   });
 });
 
-describe("the matched passage in the study result", () => {
+describe("the matched passage in the study result", { timeout: 60_000 }, () => {
   const study = (ports: { label: string; outline: typeof port }[]): StudyInput => {
     const s = roundStudyInput();
     s.case.pockets = [{ label: "right transfer passage", outline: slot }];
