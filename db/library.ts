@@ -104,20 +104,21 @@ export async function listLibrary<K extends LibraryKind>(caller: Caller, kind: K
   const where = and(eq(t.organizationId, caller.shopId), archivedFilter(t.archivedAt, query.archived), nameFilter(t.name, query.q));
   const dir = query.dir ?? (query.sort ? "asc" : "desc");
   const order = dir === "asc" ? asc(sortColumn(kind, query.sort)) : desc(sortColumn(kind, query.sort));
-  const [totalRow] = await db.select({ n: count() }).from(t).where(where);
+  // The page and the total in one statement; a page past the end has no row to carry the total.
   const rows = await db
-    .select({ row: libraryTable(kind), creatorName: schema.user.name })
+    .select({ row: libraryTable(kind), creatorName: schema.user.name, total: sql<number>`count(*) over ()` })
     .from(t)
     .innerJoin(schema.user, eq(schema.user.id, t.createdBy))
     .where(where)
     .orderBy(order, asc(t.id))
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
+  const total = rows[0]?.total ?? (query.page > 1 ? ((await db.select({ n: count() }).from(t).where(where))[0]?.n ?? 0) : 0);
   return {
     items: rows.map((r) => toRow(kind, r.row as AnyRecord, r.creatorName)),
     page: query.page,
     pageSize: query.pageSize,
-    total: totalRow?.n ?? 0,
+    total,
   };
 }
 
