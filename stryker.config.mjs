@@ -1,6 +1,15 @@
 // Mutation testing of the fit computation (geometry/) and the pure job rules: `npm run test:mutation`.
 // Not part of `npm test`: it runs the unit tests once per mutant. The machine is shared, so one test runner at
-// a time. Run part of it with `npm run test:mutation -- --mutate geometry/wall.ts`.
+// a time. Run part of it with `npm run test:mutation -- --mutate geometry/wall.ts --incremental
+// --incrementalFile reports/mutation/wall.json`, and narrow the tests to that file's own with
+// MUTATION_TESTS=tests/geometry/wall.test.ts,… (stryker.vitest.config.ts). Surviving mutants that change nothing
+// are listed, with the reason, in tests/geometry/equivalent-mutants.md.
+//
+// The zod schema files (geometry/schema*.ts, geometry/result-schema.ts) are left out: they are declarations
+// (field shapes, bounds and their messages), evaluated once when the module loads, so every one of their
+// mutants is "static" and runs against the whole unit suite — about a minute a mutant on this machine for
+// 317 mutants — while tests/geometry/schema.test.ts and the properties' "every invalid study is
+// rejected" check what they accept and refuse.
 /** @type {import("@stryker-mutator/api/core").PartialStrykerOptions} */
 const config = {
   testRunner: "vitest",
@@ -13,6 +22,8 @@ const config = {
     "!geometry/**/*.d.ts",
     "!geometry/**/cli*.ts",
     "!geometry/**/bench*.ts",
+    "!geometry/schema*.ts",
+    "!geometry/result-schema.ts",
     "model/job-status.ts",
   ],
   ignorePatterns: ["data", "test-results", "bench-results", "reports", ".next*", "public/uploads"],
