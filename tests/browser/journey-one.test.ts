@@ -87,7 +87,7 @@ async function walk(page: Page, tag: string) {
   await page.locator("#f-skirtLengthReadingsMm-0").fill("24.6");
   await page.getByLabel("Copy studs from a case profile").selectOption({ label: CASE });
   await expect.poll(() => page.getByLabel("Stud 1 label").inputValue()).not.toBe("");
-  await page.getByLabel("Price").fill("289");
+  await page.getByLabel("Price", { exact: true }).fill("289");
   await page.getByRole("button", { name: "Create" }).click();
   await page.waitForURL(/\/library\?kind=kits/);
   await page.getByRole("link", { name: KIT }).waitFor();
