@@ -70,8 +70,8 @@ type Figures = { requestsPerSecond: number; p99Ms: number; p50Ms: number; non2xx
 
 /**
  * The CPU time a process and its descendants have used, in ms (Linux /proc; null elsewhere). On a shared
- * machine requests/s and latency follow whatever else runs; the server's CPU time per answered request
- * does not, so it is the figure to compare between runs.
+ * machine requests/s and latency follow whatever else runs; the server's own CPU time per answered request
+ * says what each answer costs the server, though contention inflates it too.
  */
 function cpuMs(pid: number | undefined): number | null {
   if (pid === undefined) return null;
@@ -217,7 +217,7 @@ async function main() {
       }
     }
     const cpu = (f: Figures) => (f.cpuMsPerRequest === null ? "–" : `${f.cpuMsPerRequest.toFixed(2)} ms`);
-    console.log(`\nServer CPU time per answered request (steady on a shared machine, where requests/s are not):`);
+    console.log(`\nServer CPU time per answered request (what each answer costs the server itself):`);
     console.log("what".padEnd(16) + ["app", "floor", "bare", "app/floor", "app/bare"].map((c) => c.padStart(11)).join(""));
     for (const r of rows) {
       const share = (a: Figures, b: Figures) => (a.cpuMsPerRequest && b.cpuMsPerRequest ? percent(b.cpuMsPerRequest, a.cpuMsPerRequest) : "–");
