@@ -65,6 +65,10 @@ describe("what the holder's readings warn about", () => {
     expect(rocks.warnings.map((w) => w.code)).toEqual(["holder-rocks"]);
     expect(rocks.warnings[0].message).toContain("disagree by up to 0.10 mm from a flat plane (more than 0.05 mm)");
     expect(rocks.alignment).not.toBeNull();
+    // With no tolerance: 0.25 high gives a rock of exactly 0.0625 (binary-exact), at a limit of 0.0625 accepted.
+    const exact = holderAlignment(unchecked(level(30, { b: 0.25 })), 0.0625, 0);
+    expect(exact.plane?.rockMm).toBe(0.0625);
+    expect(exact.warnings).toEqual([]);
   });
 
   it("fewer than three readings at the case's studs give no plane, and say so", () => {
