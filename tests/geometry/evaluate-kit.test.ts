@@ -47,3 +47,76 @@ describe("the lateral shift reported", () => {
     expect(k.alignment?.depthVariationMm).toBeCloseTo(2.32, 9);
   });
 });
+
+describe("the cut against the skirt on a tilted holder", () => {
+  it("the skirt is checked against the cut where the axis strays most, at the skirt's end", () => {
+    // Cut Ø55 given: at the skirt's end the axis is 1.068 off, so the Ø54 skirt reaches 27 − (27.5 − 1.068) = 0.568
+    // past the cut; at the deck (0.08 off) it would clear.
+    const k = evaluateStudy(parse(tiltedStudy({}, { diameterMm: 55, depthMm: 25.5 }))).kits[0];
+    expect(k.interference.vsCut?.deepestMm).toBeCloseTo(0.568, 9);
+    expect(k.effectiveRadialClearanceMm).toBeCloseTo(27.5 - 27 - 1.068, 9);
+  });
+});
+
+describe("one kit's figures, level holder", () => {
+  it("a skirt that clears the mouth by exactly the minimum fits as is, even with no tolerance", () => {
+    // (46 − 45)/2 = 0.5 = the minimum.
+    const input = roundStudyInput();
+    input.kits[0].skirtDiameterReadingsMm = [45];
+    const k = evaluateStudy(parse(input), { toleranceMm: 0 }).kits[0];
+    expect(k.verdict).toBe("fits-as-is");
+    expect(k.radialClearanceMm.vsMouth).toBe(0.5);
+    expect(k.cut).toBeNull();
+  });
+
+  it("a skirt that ends exactly at the deck does not enter the case, even with no tolerance", () => {
+    // 24.7 mm skirt on a 24.7 mm gasket: protrusion 0. The Ø54 skirt is wider than the Ø46 mouth, but never in it.
+    const input = roundStudyInput();
+    input.kits[0] = { ...input.kits[0], baseGasketsMm: [24.7], alwaysWithGasket: true };
+    const k = evaluateStudy(parse(input), { toleranceMm: 0 }).kits[0];
+    expect(k.skirt.protrusionMm).toBe(0);
+    expect(k.verdict).toBe("fits-as-is");
+    expect(k.interference.vsMouth).toBeNull();
+    expect(k.cut).toBeNull();
+    expect(k.leastCut).toBeNull();
+  });
+
+  it("a skirt that clears the mouth with only a depth given is still cut to that depth", () => {
+    const input = { ...roundStudyInput(), cut: { depthMm: 20 } };
+    input.kits[0].skirtDiameterReadingsMm = [44.8];
+    const k = evaluateStudy(parse(input)).kits[0];
+    expect(k.cut?.depthMm).toBe(20);
+    expect(k.cut?.depthProposed).toBe(false);
+    expect(k.leastCut).toBeNull();
+  });
+
+  it("with no cut: no cut clearance, walls or removal, and the case's own largest cut", () => {
+    const input = roundStudyInput();
+    input.kits[0].skirtDiameterReadingsMm = [44.8];
+    const r = evaluateStudy(parse(input));
+    const k = r.kits[0];
+    expect(k.radialClearanceMm.vsCut).toBeNull();
+    expect(k.effectiveRadialClearanceMm).toBeNull();
+    expect(k.depthClearanceMm).toBeNull();
+    expect(k.interference).toEqual({ vsMouth: null, vsCut: null });
+    expect(k.walls).toEqual([]);
+    expect(k.thinnestWall).toBeNull();
+    expect(k.maxCutDiameterMm).toBe(r.case.maxCutDiameterMm);
+    // The density defaulted: A356.0-T6, 2.67 g/cm³ (MatWeb), as geometry/limits.ts names it.
+    expect(k.removal).toEqual({ areaMm2: 0, volumeMm3: 0, massG: 0, densityGPerCm3: 2.67, densityDefaulted: true });
+  });
+
+  it("a kit with its own stroke is measured on it, not the case's", () => {
+    // V = π/4·B²·S/1000 (howmotorcycleswork.com, "engine mathematics"): 47 mm bore, 42 mm stroke → 72.87 cc;
+    // the stock 40 × 39.2 → 49.26 cc.
+    const input = roundStudyInput();
+    input.kits[0].strokeMm = 42;
+    const d = evaluateStudy(parse(input)).kits[0].displacementCc;
+    const kit = (Math.PI / 4) * 47 * 47 * 42 / 1000;
+    const stock = (Math.PI / 4) * 40 * 40 * 39.2 / 1000;
+    expect(d.kit).toBeCloseTo(kit, 9);
+    expect(d.stock).toBeCloseTo(stock, 9);
+    expect(d.change).toBeCloseTo(kit - stock, 9);
+    expect(d).toMatchObject({ kitRounded: 73, stockRounded: 49 });
+  });
+});
