@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
 import { me, insertExampleStudy, jobBody } from "../integration/jobs-support";
 import { DEMO, signIn, uniqueEmail } from "../support/http";
+import { cssVariables } from "@/model/palette";
 
 // Every page each role can reach, walked mostly by clicking, checked by axe-core's rules
 // (WCAG 2.1 A and AA), in the light and in the dark colour scheme. Any serious or critical finding fails
@@ -118,6 +119,10 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await page.goto("/try");
     await page.getByTestId("view").waitFor();
     await check("example studio");
+    // Every colour of the palette reaches the page in this scheme (the legend's swatches paint with them).
+    const expected = cssVariables(scheme);
+    const onPage = await page.evaluate((names) => names.map((n) => getComputedStyle(document.documentElement).getPropertyValue(n).trim().toLowerCase()), Object.keys(expected));
+    expect(Object.fromEntries(Object.keys(expected).map((k, i) => [k, onPage[i]]))).toEqual(expected);
     await keyboardThroughStudio(page);
     await page.goto("/sign-in");
     await check("sign in");
