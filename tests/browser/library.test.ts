@@ -4,7 +4,8 @@
 import { mkdirSync, readFileSync } from "node:fs";
 import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
-import { DEMO, freshAddress } from "../support/http";
+import { DEMO, freshAddress, signIn as signInHttp } from "../support/http";
+import { newCase, newKit, newRig } from "../integration/library-fixtures";
 
 const SHOTS = "test-results/screenshots";
 const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"];
@@ -192,6 +193,12 @@ describe("the library's tabs", () => {
   // Every ordered pair of shelves once: cases→kits→cases→rigs→kits→rigs→cases.
   const walk = ["cases", "kits", "cases", "rigs", "kits", "rigs", "cases"] as const;
   const tab = { cases: "Case profiles", kits: "Cylinder kits", rigs: "Boring rigs" } as const;
+
+  // Each shelf needs a row of its own to show; the test shop is seeded without a library.
+  beforeAll(async () => {
+    const owner = await signInHttp(DEMO.owner.email, DEMO.owner.password);
+    await Promise.all([newCase(owner), newKit(owner), newRig(owner)]);
+  });
 
   it("moves between every pair of shelves by clicking, each showing its own table", async () => {
     const errorsBefore = pageErrors.length;
