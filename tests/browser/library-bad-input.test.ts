@@ -3,6 +3,7 @@
 import { mkdirSync } from "node:fs";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
+import { FIT, printed } from "@/model/palette";
 import { DEMO, freshAddress } from "../support/http";
 
 const SHOTS = "test-results/screenshots";
@@ -90,7 +91,7 @@ describe("bad input in the case form", () => {
       await page.getByLabel(`Deck corner ${i + 1} y (mm)`, { exact: true }).fill(y);
     }
     await expect.poll(() => page.getByTestId("shape-issues").innerText()).toMatch(/deck outline: polygon edges 1 and 3 cross/);
-    expect(await page.getByTestId("shape-plan").locator('path[data-key="deck"]').getAttribute("stroke")).toBe("#b3362c");
+    expect(await page.getByTestId("shape-plan").locator('path[data-key="deck"]').getAttribute("stroke")).toBe(printed(FIT.interfere));
     await expect.poll(() => page.getByRole("group", { name: "Deck", exact: true }).getByRole("alert").first().innerText()).toMatch(/edges 1 and 3 cross/);
 
     await page.getByRole("button", { name: "Create" }).click();
