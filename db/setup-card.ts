@@ -1,10 +1,11 @@
 // The content of a job's bench setup card, built once from the plan snapshot so the printable page and
 // the PDF say exactly the same. Pure (no I/O); it only reads the core's result, never recomputes it.
-import { formatLength, type LengthUnits, type Verdict } from "@/geometry";
+import type { LengthUnits, Verdict } from "@/geometry";
 import { SETUP_CARD_CAUTIONS, TRIAL_CUT_READING, TRIAL_CUT_STEP } from "@/model/cautions";
 import { dateText, dateTimeText } from "@/model/dates";
 import { depthStopSentence, shimBreakdown } from "@/model/depth-stop-words";
 import { TERM } from "@/model/glossary";
+import { lengthLabel } from "@/model/units";
 import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
@@ -58,7 +59,7 @@ type JobLike = {
 /** Builds the card for one job from its plan; dates in the shop's time zone (UTC unless given). */
 export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: string, units: LengthUnits, opts: { printedAt?: Date; timeZone?: string } = {}): SetupCard {
   const zone = opts.timeZone ?? "UTC";
-  const L = (mm: number) => formatLength(mm, units);
+  const L = (mm: number) => lengthLabel(mm, units);
   const kitIndex = Math.max(0, plan.result.kits.findIndex((k) => k.kitId === plan.kitId));
   const k = plan.result.kits[kitIndex];
   const cut = k.cut;
@@ -222,7 +223,9 @@ export function setupCardDrawings(plan: PlanSnapshot, kitIndex: number, units: L
   try {
     // The card states each drawing's scale itself, so the plan's own corner note is left out.
     drawings = [planDrawing(plan.study, plan.result, kitIndex, units, { scaleNote: null }), sectionDrawing(plan.study, plan.result, kitIndex, units)];
-  } catch {
+  } catch (error) {
+    // The figures are the card; the drawings only illustrate them, so the card is still printed without them.
+    console.warn("setup card: the plan could not be drawn; the card is printed without its drawings.", error);
     return [];
   }
   const barMm = units === "in" ? 50.8 : 50;
