@@ -5,7 +5,7 @@
 // (geometry/alignment.ts). Every expected figure is worked by hand beside the check.
 import { describe, expect, it } from "vitest";
 import { evaluateStudy, type StudyInput } from "../../geometry/index";
-import { parse, planeReadings, roundStudyInput } from "./fixtures";
+import { offCentreStudyInput, parse, planeReadings, roundStudyInput } from "./fixtures";
 
 function tiltedStudy(kit: Partial<StudyInput["kits"][number]>, cut?: StudyInput["cut"]): StudyInput {
   const s = roundStudyInput();
@@ -118,5 +118,57 @@ describe("one kit's figures, level holder", () => {
     expect(d.stock).toBeCloseTo(stock, 9);
     expect(d.change).toBeCloseTo(kit - stock, 9);
     expect(d).toMatchObject({ kitRounded: 73, stockRounded: 49 });
+  });
+});
+
+describe("the kit's studs on the case", () => {
+  // ISO 262:1998, Table 1: the coarse pitch of M8 is 1.25 mm, so "M8" is M8×1.25 and M8×1 is a fine thread.
+  const withThreads = (caseThread?: string, kitThread?: string): StudyInput => {
+    const s = roundStudyInput();
+    return { ...s, case: { ...s.case, studThread: caseThread }, kits: [{ ...s.kits[0], studThread: kitThread }] };
+  };
+  const codes = (input: StudyInput) => evaluateStudy(parse(input)).kits[0].warnings.map((w) => w.code);
+
+  it("a kit on the case's own pattern and thread: matched, no warning about either", () => {
+    const k = evaluateStudy(parse(withThreads("M8", "M8x1.25"))).kits[0];
+    expect(k.studMatch.ok).toBe(true);
+    expect(k.studMatch.thread).toEqual({ case: "M8x1.25", kit: "M8x1.25", ok: true });
+    expect(codes(withThreads("M8", "M8x1.25"))).not.toContain("stud-pattern-mismatch");
+    expect(codes(withThreads("M8", "M8x1.25"))).not.toContain("kit-thread-differs");
+  });
+
+  it("a kit thread that differs from the case's warns in words", () => {
+    const k = evaluateStudy(parse(withThreads("M8", "M8x1"))).kits[0];
+    expect(k.studMatch.thread).toEqual({ case: "M8x1.25", kit: "M8x1", ok: false });
+    expect(k.warnings.filter((w) => w.code === "kit-thread-differs")).toHaveLength(1);
+  });
+
+  it("a thread is compared only when both the case and the kit give one", () => {
+    expect(evaluateStudy(parse(withThreads("M8", undefined))).kits[0].studMatch.thread).toBeNull();
+    expect(evaluateStudy(parse(withThreads(undefined, "M8"))).kits[0].studMatch.thread).toBeNull();
+  });
+});
+
+describe("the cut against the skirt when the deck is where the axis strays most", () => {
+  it("a pattern 1 mm off toward −x with the holder leaning to +x: the skirt is checked at the deck", () => {
+    // Pattern centre (−1, 0), holder h = 0.04·x + 2.04, so h₀ = 2 at the bearing: the axis sits at
+    // −1 + (2 + z)·0.04, 0.92 off at the deck and 0.068 off at the skirt's end (z = 24.7). Against a Ø55 cut
+    // the Ø54 skirt reaches 27 − (27.5 − 0.92) = 0.42 past it toward +x, at the deck.
+    const s = offCentreStudyInput([-1, 0]);
+    const k = evaluateStudy(parse({ ...s, cut: { diameterMm: 55, depthMm: 25.5 }, readings: planeReadings(s.case.studs, 0.04, 0, 2.04) })).kits[0];
+    expect(k.alignment?.worstAxisOffsetMm).toBeCloseTo(0.92, 9);
+    expect(k.interference.vsCut?.deepestMm).toBeCloseTo(0.42, 9);
+    expect(k.interference.vsCut?.angleDeg).toBeCloseTo(0, 9);
+  });
+});
+
+describe("a clearance exactly at the minimum, with the core's own tolerance", () => {
+  it("fits as is", () => {
+    // (46 − 45)/2 = 0.5 = the minimum, exactly.
+    const input = roundStudyInput();
+    input.kits[0].skirtDiameterReadingsMm = [45];
+    const k = evaluateStudy(parse(input)).kits[0];
+    expect(k.verdict).toBe("fits-as-is");
+    expect(k.cut).toBeNull();
   });
 });
