@@ -155,7 +155,7 @@ export const VERDICT_COLOURS: Readonly<Record<Verdict, Meaning>> = {
   },
 };
 
-/** The page's neutral surfaces and ink, the brand accent (graphite, no fit colour) and the caution boxes. */
+/** The page's neutral surfaces and ink, the brand accent (graphite, no fit colour), the caution boxes and plain success and error. */
 export const SURFACE = {
   paper: { light: "#f6f3ec", dark: "#1f2224" },
   "paper-2": { light: "#eeeae0", dark: "#272b2e" },
@@ -170,6 +170,10 @@ export const SURFACE = {
   focus: { light: "#2f3a44", dark: "#dfe6ec" },
   caution: { light: "#4a4036", dark: "#e3d9c6" },
   "caution-soft": { light: "#ece6d9", dark: "#33302b" },
+  // Plain good and bad news that is no fit (a save, an import, a traced photo): a deep green-grey and a wine
+  // red, each apart from every colour of the fit code, always with words beside them.
+  success: { light: "#30594a", dark: "#b4dcc0" },
+  error: { light: "#902040", dark: "#ffb3a8" },
 } as const satisfies Record<string, Pair>;
 
 /** The glyph of a caution box (the box itself is neutral: graphite edge, warm grey ground). */
