@@ -36,7 +36,7 @@ export default async function ShopLayout({ children }: { children: React.ReactNo
         </div>
       </header>
       {!caller.emailVerified ? (
-        <div className="border-b border-rule bg-tight-soft px-6 py-2 text-center text-sm">
+        <div className="border-b border-caution bg-caution-soft px-6 py-2 text-center text-sm">
           Confirm your e-mail address: the link is in your inbox.
         </div>
       ) : null}

@@ -182,7 +182,7 @@ export function DrawingImport({ onApply, roles: allowed = ["deck", "mouth", "pas
           <svg viewBox={`${box.x} ${box.y} ${box.w} ${box.h}`} className="aspect-square w-full rounded-md border border-rule bg-paper" role="img" aria-label={`The drawing's ${view.shapes.length} closed shapes`}>
             {view.shapes.map((s) => {
               const role = roles[s.id] ?? "unused";
-              const color = hover === s.id ? "var(--color-tight)" : role === "unused" ? "var(--color-ink-3)" : "var(--color-accent)";
+              const color = hover === s.id ? "var(--color-caution)" : role === "unused" ? "var(--color-ink-3)" : "var(--color-accent)";
               const w = box.w / 300;
               return s.shape.kind === "circle" ? (
                 <circle key={s.id} cx={s.shape.center[0]} cy={-s.shape.center[1]} r={s.shape.radius} fill="none" stroke={color} strokeWidth={hover === s.id ? 3 * w : w} />
@@ -199,7 +199,7 @@ export function DrawingImport({ onApply, roles: allowed = ["deck", "mouth", "pas
               </thead>
               <tbody>
                 {view.shapes.map((s, i) => (
-                  <tr key={s.id} onMouseEnter={() => setHover(s.id)} onMouseLeave={() => setHover(null)} className={hover === s.id ? "bg-tight-soft" : undefined}>
+                  <tr key={s.id} onMouseEnter={() => setHover(s.id)} onMouseLeave={() => setHover(null)} className={hover === s.id ? "bg-caution-soft" : undefined}>
                     <td className="py-1 pr-2">{s.source}</td>
                     <td className="py-1">
                       <label className="sr-only" htmlFor={`drawing-role-${s.id}`}>What shape {i + 1} ({s.source}) is</label>

@@ -91,7 +91,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
           </TraceSurface>
           {traced ? <TracedReadout shapes={traced.shapes} units={units} words={words} /> : null}
           {traced?.problems.length ? (
-            <ul className="text-sm text-interfere" role="alert">
+            <ul className="text-sm text-error" role="alert">
               {traced.problems.map((p) => <li key={p}>{p} Not put into the form until it is fixed.</li>)}
             </ul>
           ) : null}
@@ -99,7 +99,7 @@ export function PhotoTrace({ onApply, caseId = null, units = "mm", shapesFor = "
             <button type="button" className="btn" onClick={apply} disabled={!traced || nothingTraced || traced.problems.length > 0}>
               Put the traced shapes into the form
             </button>
-            {applied ? <span role="status" className="text-sm text-clear">{applied}</span> : null}
+            {applied ? <span role="status" className="text-sm text-success">{applied}</span> : null}
           </div>
         </>
       ) : null}

@@ -64,7 +64,7 @@ export function ReferenceFields({ refer, units, onMode }: { refer: TraceReferenc
       {reference && "error" in reference ? (
         <p className="field-error" role="alert">{reference.error}</p>
       ) : reference ? (
-        <div className={reference.fits ? "text-sm text-clear" : "caution"} role="status" data-testid="trace-fit">
+        <div className={reference.fits ? "text-sm text-success" : "caution"} role="status" data-testid="trace-fit">
           {reference.summary}
         </div>
       ) : null}

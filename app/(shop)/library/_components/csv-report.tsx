@@ -9,14 +9,14 @@ export function CsvReportTable({ report }: { report: CsvReport }) {
         <HeadRow className="sticky top-0 bg-paper-2 text-left" cellClassName="px-3 py-1.5 font-medium" columns={["Line", "Name", "Result"]} />
         <tbody>
           {report.rows.map((r) => (
-            <tr key={r.line} className={`border-t border-rule ${r.ok ? "" : "bg-interfere-soft/50"}`}>
+            <tr key={r.line} className={`border-t border-rule ${r.ok ? "" : "bg-caution-soft"}`}>
               <td className="px-3 py-1.5 num">{r.line}</td>
               <td className="px-3 py-1.5">{r.name ?? "—"}</td>
               <td className="px-3 py-1.5">
                 {r.ok ? (
-                  <span className="text-clear">✓ good</span>
+                  <span className="text-success">✓ good</span>
                 ) : (
-                  <ul className="text-interfere">
+                  <ul className="text-error">
                     {Object.entries(r.errors ?? {}).map(([col, msg]) => (
                       <li key={col}>
                         <span className="num">{col}</span>: {msg}

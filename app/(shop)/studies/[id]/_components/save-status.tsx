@@ -5,12 +5,12 @@ import { useShopTimeZone } from "../../../../_ui/query/settings/use-shop-setting
 import type { SaveStatus } from "./use-autosave";
 
 const LOOK: Record<SaveStatus, { text: string; cls: string; dot: string }> = {
-  saved: { text: "All changes saved", cls: "text-ink-2", dot: "bg-clear" },
-  unsaved: { text: "Unsaved changes", cls: "text-ink", dot: "bg-tight" },
+  saved: { text: "All changes saved", cls: "text-ink-2", dot: "bg-success" },
+  unsaved: { text: "Unsaved changes", cls: "text-ink", dot: "bg-caution" },
   saving: { text: "Saving…", cls: "text-ink-2", dot: "bg-accent animate-pulse" },
-  invalid: { text: "Not saved: fix the marked fields", cls: "text-interfere", dot: "bg-interfere" },
-  conflict: { text: "Not saved: someone else changed this study", cls: "text-interfere", dot: "bg-interfere" },
-  error: { text: "Not saved", cls: "text-interfere", dot: "bg-interfere" },
+  invalid: { text: "Not saved: fix the marked fields", cls: "text-error", dot: "bg-error" },
+  conflict: { text: "Not saved: someone else changed this study", cls: "text-error", dot: "bg-error" },
+  error: { text: "Not saved", cls: "text-error", dot: "bg-error" },
 };
 
 /** Where the study stands: saved, unsaved, saving, or refused. */

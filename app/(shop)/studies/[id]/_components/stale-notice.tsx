@@ -47,7 +47,7 @@ export function StaleNotice({ errors, values, basis, units }: { errors: FieldErr
   const paths = errorPaths(errors).filter((p) => p !== "name" && p !== "notes");
   if (!basis) return null;
   return (
-    <div className="rounded-md border border-tight bg-tight-soft px-4 py-3 text-sm" role="status" data-testid="stale-results">
+    <div className="rounded-md border border-caution bg-caution-soft px-4 py-3 text-sm" role="status" data-testid="stale-results">
       <p className="font-medium">The results below are based on the last valid values, not on what the marked fields read now:</p>
       <ul className="mt-1 list-disc pl-5">
         {paths.map((p) => (
