@@ -1,4 +1,4 @@
-import { formatFractionalInches, inToMm, mmToIn, toFractionalInches, type LengthUnits } from "@/geometry";
+import { formatFractionalInches, inToMm, mmToIn, toFractionalInches, type LengthUnits } from "@/geometry/units";
 
 // The one place that turns the core's millimetres into text and typed text back into millimetres.
 // Names say what they hold: `…Mm` a number in mm, `…Text` what was typed or what a field shows,

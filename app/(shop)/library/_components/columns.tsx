@@ -1,6 +1,6 @@
 "use client";
 
-import { formatMoney } from "@/model/money";
+import { formatMoney } from "@/model/money-text";
 import type { LengthUnits } from "@/geometry";
 import { dateText } from "@/model/dates";
 import { diameterLabel, lengthLabel } from "@/model/units";
