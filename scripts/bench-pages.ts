@@ -56,6 +56,10 @@ const HEAVY_MARKS: { name: string; test: (code: string) => boolean }[] = [
   { name: "react-three-fiber", test: (c) => c.includes("R3F: Hooks can only be used within the Canvas component") },
   { name: "polygon booleans", test: (c) => c.includes("polygon-clipping") || c.includes("SweepEvent") || c.includes("Flatten.Polygon") },
   { name: "PDF writer", test: (c) => c.includes("PDFDocument") || c.includes("pdfkit") },
+  // The core's fit evaluation (geometry/), known by one of its error texts (its own code is minified).
+  { name: "fit evaluation", test: (c) => c.includes("the depth-stop search lost the stack") },
+  // Not heavy, but worth knowing: the core's input schemas (zod) on a page.
+  { name: "(core schemas)", test: (c) => c.includes("chamfered-rect") },
 ];
 
 function flag(name: string): boolean {
@@ -72,7 +76,7 @@ const kB = (bytes: number) => `${(bytes / 1000).toFixed(0)} kB`;
 
 // ── First-load JavaScript from the build's manifests ────────────────────────────────────────────
 
-type PageSize = { route: string; light: boolean; files: number; bytes: number; gzipBytes: number; heavy: string[] };
+type PageSize = { route: string; light: boolean; files: number; bytes: number; gzipBytes: number; ownBytes: number; heavy: string[] };
 
 /**
  * The entry scripts of one app route, from the client reference manifest the build writes beside the
@@ -97,9 +101,10 @@ function rootFiles(distDir: string): string[] {
   return manifest.rootMainFiles ?? [];
 }
 
-function measurePages(distDir: string): PageSize[] {
+function measurePages(distDir: string): { sizes: PageSize[]; rootBytes: number } {
   const base = rootFiles(distDir);
   const sizes: PageSize[] = [];
+  let rootBytes = 0;
   const cache = new Map<string, { bytes: number; gzipBytes: number; heavy: string[] }>();
   const chunk = (f: string) => {
     let c = cache.get(f);
@@ -112,6 +117,7 @@ function measurePages(distDir: string): PageSize[] {
     }
     return c;
   };
+  for (const f of base.filter((f) => f.endsWith(".js"))) rootBytes += chunk(f).bytes;
   for (const page of SIZED_PAGES) {
     const own = routeEntryFiles(distDir, page.route);
     if (own === null) continue;
@@ -125,19 +131,20 @@ function measurePages(distDir: string): PageSize[] {
       gzipBytes += c.gzipBytes;
       for (const h of c.heavy) heavy.add(h);
     }
-    sizes.push({ route: page.route, light: page.light, files: files.length, bytes, gzipBytes, heavy: [...heavy] });
+    sizes.push({ route: page.route, light: page.light, files: files.length, bytes, gzipBytes, ownBytes: bytes - rootBytes, heavy: [...heavy] });
   }
-  return sizes;
+  return { sizes, rootBytes };
 }
 
-function printSizes(sizes: PageSize[]) {
+function printSizes(sizes: PageSize[], rootBytes: number) {
   console.log(`\nFirst-load JavaScript per page (from ${DIST}/ manifests: root scripts + the page's entry chunks)\n`);
-  console.log("page".padEnd(30) + "files".padStart(7) + "bytes".padStart(10) + "gzip".padStart(10) + "   heavy code in it");
+  console.log("page".padEnd(30) + "files".padStart(7) + "bytes".padStart(10) + "gzip".padStart(10) + "beyond root".padStart(13) + "   heavy code in it");
   for (const s of sizes) {
     const over = s.light && s.bytes > LIGHT_PAGE_AIM_BYTES ? "  (over the 300 kB aim)" : "";
-    console.log(s.route.padEnd(30) + String(s.files).padStart(7) + kB(s.bytes).padStart(10) + kB(s.gzipBytes).padStart(10) + `   ${s.heavy.join(", ") || "none"}${over}`);
+    console.log(s.route.padEnd(30) + String(s.files).padStart(7) + kB(s.bytes).padStart(10) + kB(s.gzipBytes).padStart(10) + kB(s.ownBytes).padStart(13) + `   ${s.heavy.join(", ") || "none"}${over}`);
   }
-  console.log("Aim: pages without 3D (sign-in, home, library, jobs, settings, studies list) at most 300 kB uncompressed, none of three.js, the polygon booleans or the PDF writer.");
+  console.log(`The build's root scripts (React DOM, the router, the bundler's runtime), on every page: ${kB(rootBytes)}.`);
+  console.log("Aim: pages without 3D (sign-in, home, library, jobs, settings, studies list) at most 300 kB uncompressed, none of three.js, the polygon booleans, the fit evaluation or the PDF writer.");
 }
 
 // ── Lighthouse ───────────────────────────────────────────────────────────────────────────────────
@@ -213,9 +220,9 @@ async function main() {
   const runs = numberArg("runs", 1);
   if (!flag("no-build") && buildIsStale()) run("npx", ["next", "build"]);
   const distDir = join(root, DIST);
-  const sizes = measurePages(distDir);
-  printSizes(sizes);
-  const out: Record<string, unknown> = { at: new Date().toISOString(), distDir: DIST, sizes };
+  const { sizes, rootBytes } = measurePages(distDir);
+  printSizes(sizes, rootBytes);
+  const out: Record<string, unknown> = { at: new Date().toISOString(), distDir: DIST, rootBytes, sizes };
   const save = () => {
     mkdirSync(join(root, "bench-results"), { recursive: true });
     writeFileSync(join(root, "bench-results", "pages.json"), `${JSON.stringify(out, null, 2)}\n`);
