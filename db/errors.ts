@@ -12,6 +12,8 @@ const STATUS = {
   wrong_status: 409,
   plan_fixed: 409,
   quote_fixed: 409,
+  quote_changed: 409,
+  quote_stale: 409,
   no_plan: 409,
   no_cut: 422,
   paid: 409,

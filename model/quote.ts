@@ -63,6 +63,13 @@ export type QuoteRates = { currency: CurrencyCode; labourRateMinor: number | nul
 export type StoredQuote = {
   currency: CurrencyCode;
   kit: { label: string; unitMinor: number } | null;
+  /** The library kit the kit line prices (the job's planned kit when the quote was written). */
+  kitId?: string | null;
+  /**
+   * Set when the job was re-planned with another kit whose price the library does not give in the shop's
+   * currency: the old kit line is taken out and the quote waits for the shop to price the new kit.
+   */
+  kitStale?: { previous: string; kitName: string; reason: string } | null;
   parts: { label: string; quantity: number; unitMinor: number }[];
   machiningHours: number;
   others: { label: string; amountMinor: number }[];
@@ -125,3 +132,16 @@ export const emptyTotals = (currency: CurrencyCode): QuoteTotals => ({
 /** The body of PUT /api/v1/jobs/{id}/quote. */
 export const QuotePutSchema = QuoteDraftSchema.extend({ version: z.number({ error: "Send the version you last read." }).int().min(1) });
 export type QuotePut = z.infer<typeof QuotePutSchema>;
+
+/** The body of POST /api/v1/consult/{id}/approve: the fingerprint of the quote the customer read (null: they saw none). */
+export const ApproveSchema = z.strictObject({
+  quoteFingerprint: z
+    .string({ error: "Send the fingerprint of the quote you read." })
+    .regex(/^[0-9a-f]{16}$/, "Send the fingerprint of the quote you read, as the job gives it.")
+    .nullable()
+    .optional(),
+});
+export type Approve = z.infer<typeof ApproveSchema>;
+
+/** What the customer is told when the quote changed between reading it and approving it. */
+export const QUOTE_CHANGED = "The price changed since you opened this page — read it again.";

@@ -9,5 +9,5 @@ export { createJob, updateJob } from "./writes";
 export { moveJob } from "./moves";
 export { recordReadings } from "./readings";
 export { askQuestion, shareJob } from "./sharing";
-export { quoteFor, saveQuote } from "./quote";
-export { parseQuote, quoteView, type QuoteView } from "./quote-view";
+export { checkApprovedQuote, quoteFor, saveQuote } from "./quote";
+export { parseQuote, quoteFingerprint, quoteView, type QuoteView } from "./quote-view";

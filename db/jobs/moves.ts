@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { and, eq, isNull } from "drizzle-orm";
 import { decideMove, STATUS_LABEL, type JobStatus } from "@/model/job-status";
 import { AccessError, type Caller } from "../access";
 import { getDb } from "../client";
@@ -27,8 +27,9 @@ function summaryOf(caller: Caller, record: jobs.JobRecord, to: JobStatus, why: s
 }
 
 /** Moves the job to another status, when the status machine allows it for this caller. */
-export async function moveJob(caller: Caller, id: string, to: JobStatus, reason?: string): Promise<JobView> {
+export async function moveJob(caller: Caller, id: string, to: JobStatus, reason?: string, check?: (record: jobs.JobRecord) => void): Promise<JobView> {
   const { record, latest } = await loadFor(caller, id);
+  check?.(record);
   const from = record.status as JobStatus;
   const facts = moveFacts(record, latest);
   const decision = decideMove({ from, to, actor: { role: caller.role, isJobCustomer: isJobCustomer(caller, record) }, reason, facts });
@@ -62,7 +63,9 @@ export async function moveJob(caller: Caller, id: string, to: JobStatus, reason?
   if (from === "verified" && to === "machined") Object.assign(set, { verifyOverrideReason: null, verifyOverrideById: null, verifyOverrideByName: null, verifyOverrideAt: null });
   const db = await getDb();
   await db.transaction(async (tx) => {
-    const done = await tx.update(j).set(set).where(and(eq(j.id, id), eq(j.status, from))).returning({ id: j.id });
+    // An approval takes the quote that was read: none written meanwhile, none changed.
+    const sameQuote = to === "approved" ? (record.quoteJson === null ? isNull(j.quoteJson) : eq(j.quoteJson, record.quoteJson)) : undefined;
+    const done = await tx.update(j).set(set).where(and(eq(j.id, id), eq(j.status, from), sameQuote)).returning({ id: j.id });
     if (done.length === 0) throw new DataError("conflict", "The job moved on since you opened it. Reload to see where it is now.");
     await addEvent(tx, id, me, "status", summaryOf(caller, record, to, why, override), { from, to });
   });

@@ -1,4 +1,5 @@
 import "server-only";
+import { createHash } from "node:crypto";
 import { formatMoney } from "@/model/money";
 import { quoteTotals, type QuoteTotals, type StoredQuote } from "@/model/quote";
 import type { Caller } from "../access";
@@ -19,14 +20,32 @@ export function parseQuote(json: string | null): StoredQuote | null {
   }
 }
 
-export type QuoteView = { quote: StoredQuote; totals: QuoteTotals };
+/**
+ * The quote's figures as one short hash: every line (its kind, words, quantity, unit and amount), the
+ * subtotal, tax, total and deposit, in its currency. The customer's approval names it; any change of a
+ * figure or a line's words gives another one. Who wrote it and when are not figures and are left out.
+ */
+export function quoteFingerprint(totals: QuoteTotals): string {
+  const figures = {
+    lines: totals.lines.map((l) => [l.kind, l.label, l.quantity, l.unit?.amountMinor ?? null, l.amount.amountMinor, l.amount.currency]),
+    subtotal: totals.subtotal,
+    tax: totals.tax,
+    total: totals.total,
+    deposit: totals.deposit,
+  };
+  return createHash("sha256").update(JSON.stringify(figures)).digest("hex").slice(0, 16);
+}
+
+/** The quote, its figures and their fingerprint (what an approval names). */
+export type QuoteView = { quote: StoredQuote; totals: QuoteTotals; fingerprint: string };
 
 /** The quote and its figures for a caller; a customer does not see why an owner changed the deposit. */
 export function quoteView(caller: Caller, json: string | null): QuoteView | null {
   const q = parseQuote(json);
   if (!q) return null;
   const shown = SHOP_STAFF.includes(caller.role) || !q.depositOverride ? q : { ...q, depositOverride: { ...q.depositOverride, reason: "" } };
-  return { quote: shown, totals: quoteTotals(q) };
+  const totals = quoteTotals(q);
+  return { quote: shown, totals, fingerprint: quoteFingerprint(totals) };
 }
 
 /** The history words for an approval that takes the quote with the plan. */

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { formatMoney, money, type Money } from "@/model/money";
-import { quoteTotals, type QuotePut, type StoredQuote } from "@/model/quote";
+import { QUOTE_CHANGED, quoteTotals, type Approve, type QuotePut, type StoredQuote } from "@/model/quote";
 import { AccessError, type Caller } from "../access";
 import { getDb } from "../client";
 import { DataError } from "../errors";
@@ -10,7 +10,7 @@ import type * as jobs from "../schema-jobs";
 import { shopPricing } from "../settings";
 import { addEvent } from "./events";
 import { getJob } from "./reads";
-import { parseQuote, quoteView, type QuoteView } from "./quote-view";
+import { parseQuote, quoteFingerprint, quoteView, type QuoteView } from "./quote-view";
 import { assertStaff, isStaff, j, loadFor, parsePlan, type JobView } from "./view";
 
 // A job's quote: the shop writes it (a builder may draft it, an owner alone sets a deposit other than the
@@ -76,6 +76,8 @@ export async function saveQuote(caller: Caller, id: string, put: QuotePut): Prom
   const quote: StoredQuote = {
     currency: pricing.currency,
     kit,
+    kitId: kit ? record.kitId : null,
+    kitStale: null,
     parts: put.parts,
     machiningHours: put.machiningHours,
     others: put.others,
@@ -106,5 +108,66 @@ export async function saveQuote(caller: Caller, id: string, put: QuotePut): Prom
     const why = depositOverride ? ` (the owner's deposit: ${depositOverride.reason})` : "";
     await addEvent(tx, id, { id: caller.userId, name: caller.name }, "quote", `${previous ? "changed" : "wrote"} the quote: total ${formatMoney(totals.total)}, deposit ${formatMoney(totals.deposit)}${why}`);
   });
-  return { job: await getJob(caller, id), quote: { quote, totals } };
+  return { job: await getJob(caller, id), quote: { quote, totals, fingerprint: quoteFingerprint(totals) } };
+}
+
+/**
+ * Refuses a customer's approval of a quote other than the one they read: `approve.quoteFingerprint` is the
+ * fingerprint of the quote on their page (null: the page showed none). A job with no quote takes no body.
+ */
+export function checkApprovedQuote(record: jobs.JobRecord, approve: Approve): void {
+  const stored = parseQuote(record.quoteJson);
+  if (stored?.kitStale)
+    throw new DataError("quote_stale", `The shop is pricing the new kit (${stored.kitStale.kitName}) for this plan; the price can be approved once the shop has written it.`);
+  const now = stored ? quoteFingerprint(quoteTotals(stored)) : null;
+  if (approve.quoteFingerprint === undefined) {
+    if (now === null) return;
+    throw new DataError("invalid_input", "Some fields are not valid.", { quoteFingerprint: "Send the fingerprint of the quote you read: the plan and the price are approved together." });
+  }
+  if (approve.quoteFingerprint !== now) throw new DataError("quote_changed", QUOTE_CHANGED);
+}
+
+/**
+ * The quote after the job is re-planned with another kit: the kit line priced from the library's price
+ * for the new kit, or, when the library gives none in the shop's currency, the old line taken out and the
+ * quote marked as waiting for the new kit's price (the job page says so; the customer cannot approve it).
+ * Null when there is no quote or its kit line already prices this kit.
+ */
+export async function requoteForKit(
+  shopId: string,
+  record: jobs.JobRecord,
+  plan: { kitId: string; kitName: string } | null,
+): Promise<{ quoteJson: string; depositAmount: number; summary: string } | null> {
+  const previous = parseQuote(record.quoteJson);
+  // No quote, or one the shop wrote without a kit line: nothing to re-price.
+  if (!previous || (!previous.kit && !previous.kitStale)) return null;
+  const kitId = plan?.kitId ?? null;
+  const pricedFor = previous.kitId === undefined ? record.kitId : previous.kitId;
+  if (kitId === pricedFor && !previous.kitStale) return null;
+  let next: StoredQuote;
+  let summary: string;
+  const library = plan ? await libraryKitPrice(shopId, { ...record, kitId: plan.kitId, planJson: null }) : null;
+  const label = plan?.kitName ?? library?.label ?? "";
+  if (!plan) {
+    next = { ...previous, kit: null, kitId: null, kitStale: null };
+    summary = previous.kit ? `took the kit line (${previous.kit.label}) out of the quote with the plan` : "";
+  } else if (library && library.price.currency === previous.currency) {
+    next = { ...previous, kit: { label, unitMinor: library.price.amountMinor }, kitId: plan.kitId, kitStale: null };
+    summary = `priced the new kit in the quote from the library: ${label} ${formatMoney(library.price)}${previous.kit ? ` (was ${previous.kit.label} ${formatMoney(money(previous.kit.unitMinor, previous.currency))})` : ""}`;
+  } else {
+    const reason = library
+      ? `The library prices ${label} in ${library.price.currency}; the quote is in ${previous.currency}. Type the kit's price in ${previous.currency}.`
+      : `The library gives no price for ${label}: type the kit's price, or add it to the kit in the library.`;
+    const was = previous.kitStale?.previous ?? previous.kit?.label ?? "";
+    next = { ...previous, kit: null, kitId: plan.kitId, kitStale: { previous: was, kitName: label, reason } };
+    summary = `took the old kit line${was ? ` (${was})` : ""} out of the quote: ${reason}`;
+  }
+  const totals = quoteTotals(next);
+  const depositOverride = next.depositOverride && next.depositOverride.amountMinor > totals.total.amountMinor ? null : next.depositOverride;
+  if (depositOverride !== next.depositOverride) {
+    next = { ...next, depositOverride };
+    summary += "; the owner's deposit was more than the new total and gave way to the shop's share";
+  }
+  const deposit = quoteTotals(next).deposit.amountMinor;
+  return { quoteJson: JSON.stringify(next), depositAmount: record.ownEngine ? 0 : deposit, summary };
 }

@@ -11,6 +11,7 @@ import * as jobs from "../schema-jobs";
 import { addEvent, type Tx } from "./events";
 import { shopPricing } from "../settings";
 import { checkPlan, planOverrideColumns, snapshotPlan } from "./plan";
+import { requoteForKit } from "./quote";
 import { getJob } from "./reads";
 import { assertStaff, j, loadFor, planVerdict, type JobView } from "./view";
 
@@ -124,6 +125,8 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
   const override = plan && status === "planned" && !backToIntake ? checkPlan(caller, plan, patch.planOverrideReason) : null;
   const emailChanged = patch.customerEmail !== undefined && patch.customerEmail !== record.customerEmail.toLowerCase();
   const customerUserId = emailChanged ? await customerMemberId(caller.shopId, patch.customerEmail ?? "") : record.customerUserId;
+  // Another kit re-prices the quote's kit line (or takes it out, saying why): the old kit never stays silently.
+  const requote = replan ? await requoteForKit(caller.shopId, record, plan ?? null) : null;
   const db = await getDb();
   await db.transaction(async (tx) => {
     const set: Partial<jobs.JobRecord> = {
@@ -144,6 +147,7 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
       set.planJson = plan ? JSON.stringify(plan) : null;
       Object.assign(set, planOverrideColumns(caller, override));
       if ((!plan || backToIntake) && status === "planned") set.status = "intake";
+      if (requote && record.paidAt === null) Object.assign(set, { quoteJson: requote.quoteJson, depositAmount: requote.depositAmount });
     }
     const done = await tx
       .update(j)
@@ -156,6 +160,7 @@ export async function updateJob(caller: Caller, id: string, patch: JobPatch): Pr
       const how = override ? ` although the study says it cannot fit safely, on the owner's override: ${override.reason}` : "";
       const waits = backToIntake ? "; the study says it cannot fit safely, so the job is back at intake until the owner plans it" : "";
       await addEvent(tx, id, me, "plan", plan ? `took the plan: ${plan.kitName} from "${plan.studyName}"${how}${waits}` : "removed the plan");
+      if (requote?.summary && record.paidAt === null) await addEvent(tx, id, me, "quote", requote.summary);
     } else await addEvent(tx, id, me, "edit", "changed the job's details");
   });
   return getJob(caller, id);

@@ -8,20 +8,25 @@ import { insertExampleStudy, jobBody, me } from "./jobs-support";
 
 type Money = { amountMinor: number; currency: string };
 type Totals = { lines: { kind: string; amount: Money }[]; subtotal: Money; tax: Money; total: Money; deposit: Money; depositShare: Money };
-type QuoteView = { quote: { depositOverride: { amountMinor: number; reason: string } | null; kit: { unitMinor: number } | null }; totals: Totals };
+type QuoteView = {
+  quote: { depositOverride: { amountMinor: number; reason: string } | null; kit: { label: string; unitMinor: number } | null; kitStale?: { kitName: string; reason: string } | null };
+  totals: Totals;
+  fingerprint: string;
+};
 type Job = { id: string; status: string; version: number; deposit: { amount: number; currency: string; paid: boolean }; quote: QuoteView | null; approvedQuote: QuoteView | null };
 type Err = { error: { code: string; message: string; fields?: Record<string, string> } };
 
 let owner: Http;
 let shopId: string;
 let studyId: string;
+let kitIds: string[];
 
 /** A fresh shop of its own (its prices are this file's to set), with the shipped example study. */
 beforeAll(async () => {
   owner = await signUp("Quote Owner", uniqueEmail("quote-owner"));
   const o = await me(owner);
   shopId = o.shopId;
-  ({ studyId } = await insertExampleStudy(o.shopId, o.userId, `Quote study ${Date.now()}`));
+  ({ studyId, kitIds } = await insertExampleStudy(o.shopId, o.userId, `Quote study ${Date.now()}`));
 });
 
 async function setPricing(http: Http, pricing: Record<string, unknown>) {
@@ -36,6 +41,21 @@ async function newJob(http: Http, over: Record<string, unknown> = {}): Promise<J
 }
 
 const putQuote = (http: Http, job: { id: string; version: number }, body: Record<string, unknown>) => http.send("PUT", `/api/v1/jobs/${job.id}/quote`, { version: job.version, ...body });
+
+/** Shares the job with its customer, who joins the shop from the mail; returns the customer signed in. */
+async function shareWithCustomer(job: { id: string }, name: string): Promise<Http> {
+  const customerEmail = ((await owner.get(`/api/v1/jobs/${job.id}`)).json as { job: { customer: { email: string } } }).job.customer.email;
+  expect((await owner.post(`/api/v1/jobs/${job.id}/share`)).status).toBe(200);
+  const mail = await waitForMail(customerEmail, /shares the plan/);
+  const invitationId = mail.links.find((l) => l.includes("/invite/"))!.split("/invite/")[1];
+  const customer = await signUp(name, customerEmail);
+  await confirmEmail(customer, customerEmail);
+  expect((await customer.post("/api/auth/organization/accept-invitation", { invitationId })).status).toBe(200);
+  await customer.post("/api/auth/organization/set-active", { organizationId: shopId });
+  return customer;
+}
+
+const jobOf = async (http: Http, id: string) => ((await http.get(`/api/v1/jobs/${id}`)).json as { job: Job }).job;
 
 describe("the shop's prices", () => {
   it("are kept as money and percentages, and a bad value is refused at its field with nothing changed", async () => {
@@ -96,7 +116,7 @@ describe("a job's quote", () => {
     expect(seen.quote?.totals.total.amountMinor).toBe(48_480);
     expect(seen.approvedQuote).toBeNull();
     // One approval takes the plan and the quote together; both are recorded.
-    const approved = await customer.post(`/api/v1/consult/${job.id}/approve`);
+    const approved = await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: seen.quote?.fingerprint });
     expect(approved.status, approved.text).toBe(200);
     const item = (approved.json as { item: Job }).item;
     expect(item.status).toBe("approved");
@@ -185,5 +205,95 @@ describe("a job's quote", () => {
     expect(card.status).toBe(200);
     const text = card.text.replace(/<[^>]+>/g, " ");
     expect(text).not.toMatch(/EUR|€|319[.,]99|300[.,]00|deposit/i);
+  });
+
+  it("is approved only as the customer read it: a quote changed after the page was opened is refused with 409 and nothing is approved", async () => {
+    const job = await newJob(owner);
+    const first = await putQuote(owner, job, { parts: [{ label: "Base gasket", quantity: 1, unitMinor: 1250 }], machiningHours: 1 });
+    expect(first.status, first.text).toBe(200);
+    const customer = await shareWithCustomer(job, "Rowan Pike");
+    // The customer opens the page: the quote they read, with its fingerprint.
+    const read = await jobOf(customer, job.id);
+    expect(read.quote?.fingerprint).toMatch(/^[0-9a-f]{16}$/);
+
+    // The shop changes the machining time meanwhile: 1 h → 2 h at 60.00 moves the total.
+    const shop = await jobOf(owner, job.id);
+    const edited = await putQuote(owner, shop, { parts: [{ label: "Base gasket", quantity: 1, unitMinor: 1250 }], machiningHours: 2 });
+    expect(edited.status, edited.text).toBe(200);
+    const now = (edited.json as { quote: QuoteView }).quote;
+    expect(now.fingerprint).not.toBe(read.quote?.fingerprint);
+
+    const stale = await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: read.quote?.fingerprint });
+    expect(stale.status, stale.text).toBe(409);
+    expect((stale.json as Err).error).toMatchObject({ code: "quote_changed", message: "The price changed since you opened this page — read it again." });
+    // Without naming the quote read, a job with a quote is not approved either.
+    const bare = await customer.post(`/api/v1/consult/${job.id}/approve`);
+    expect(bare.status).toBe(400);
+    expect((bare.json as Err).error.fields).toHaveProperty("quoteFingerprint");
+    const after = await jobOf(owner, job.id);
+    expect(after.status).toBe("planned");
+    expect(after.approvedQuote).toBeNull();
+    const history = ((await owner.get(`/api/v1/jobs/${job.id}`)).json as { history: { summary: string }[] }).history.map((h) => h.summary);
+    expect(history.some((s) => s.startsWith("approved"))).toBe(false);
+
+    // Read again, approved: the quote approved is the one the customer read the second time.
+    const again = await jobOf(customer, job.id);
+    const ok = await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: again.quote?.fingerprint });
+    expect(ok.status, ok.text).toBe(200);
+    // 289.00 + 12.50 + 2 h × 60.00 = 421.50; tax 20 % = 84.30; total 505.80
+    expect((ok.json as { item: Job }).item.approvedQuote?.totals.total.amountMinor).toBe(50_580);
+  });
+
+  it("follows a re-plan with another kit: the kit line takes the library's price, or is taken out and marked until the shop prices it", async () => {
+    const job = await newJob(owner, { kitId: kitIds[0] });
+    const saved = await putQuote(owner, job, { parts: [{ label: "Base gasket", quantity: 2, unitMinor: 1250 }] });
+    expect(saved.status, saved.text).toBe(200);
+    const before = (saved.json as { job: Job }).job;
+    // 289.00 + 25.00 = 314.00 before tax
+    expect(before.quote?.totals.subtotal.amountMinor).toBe(31_400);
+
+    // The other kit of the example study: priced 349 in the study file, 34 900 cents in EUR in the library.
+    const replanned = await owner.send("PATCH", `/api/v1/jobs/${job.id}`, { version: before.version, kitId: kitIds[1], planOverrideReason: "the customer asks for the long-skirt kit" });
+    expect(replanned.status, replanned.text).toBe(200);
+    const moved = (replanned.json as { item: Job }).item;
+    const line = moved.quote?.totals.lines.find((l) => l.kind === "kit");
+    expect(line?.amount).toEqual({ amountMinor: 34_900, currency: "EUR" });
+    expect(moved.quote?.quote.kit?.label).toMatch(/50 mm/);
+    // 349.00 + 25.00 = 374.00; tax 20 % = 74.80; total 448.80; deposit 30 % = 134.64, and the job's deposit follows.
+    expect(moved.quote?.totals.total.amountMinor).toBe(44_880);
+    expect(moved.quote?.totals.deposit.amountMinor).toBe(13_464);
+    expect(moved.deposit.amount).toBe(13_464);
+
+    // The first kit loses its library price; planning it again takes the old kit line out and says why.
+    const db = testDb();
+    try {
+      const row = await db.execute({ sql: "select data_json from cylinder_kit where id = ?", args: [kitIds[0]] });
+      const data = JSON.parse(String(row.rows[0].data_json));
+      delete data.price;
+      await db.execute({ sql: "update cylinder_kit set data_json = ? where id = ?", args: [JSON.stringify(data), kitIds[0]] });
+    } finally {
+      db.close();
+    }
+    const back = await owner.send("PATCH", `/api/v1/jobs/${job.id}`, { version: moved.version, kitId: kitIds[0] });
+    expect(back.status, back.text).toBe(200);
+    const unpriced = (back.json as { item: Job }).item;
+    expect(unpriced.quote?.totals.lines.some((l) => l.kind === "kit")).toBe(false);
+    expect(unpriced.quote?.quote.kitStale?.reason).toMatch(/no price/);
+    // 25.00 left; the customer cannot approve a quote that waits for the kit's price.
+    expect(unpriced.quote?.totals.subtotal.amountMinor).toBe(2500);
+    const customer = await shareWithCustomer(job, "Sorrel Quince");
+    const read = await jobOf(customer, job.id);
+    const refused = await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: read.quote?.fingerprint });
+    expect(refused.status).toBe(409);
+    expect((refused.json as Err).error.code).toBe("quote_stale");
+    const history = ((await owner.get(`/api/v1/jobs/${job.id}`)).json as { history: { summary: string }[] }).history.map((h) => h.summary);
+    expect(history.some((s) => /took the old kit line .* out of the quote/.test(s))).toBe(true);
+
+    // The shop types the kit's price: the mark is gone and the customer may approve.
+    const typed = await putQuote(owner, await jobOf(owner, job.id), { kit: { label: "Example 47 mm five-port kit", unitMinor: 29_500 }, parts: [{ label: "Base gasket", quantity: 2, unitMinor: 1250 }] });
+    expect(typed.status, typed.text).toBe(200);
+    expect((typed.json as { quote: QuoteView }).quote.quote.kitStale ?? null).toBeNull();
+    const fresh = await jobOf(customer, job.id);
+    expect((await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: fresh.quote?.fingerprint })).status).toBe(200);
   });
 });

@@ -17,6 +17,7 @@ import { QuoteTable } from "../../jobs/_components/quote-table";
 import { StatusBadge, money } from "../../jobs/_components/status-badge";
 import { ConsultActions } from "./_components/consult-actions";
 import { FitForCustomer } from "./_components/fit";
+import { VerdictMark } from "@/app/_ui/studio/verdict-mark";
 
 export const metadata: Metadata = { title: "Your plan" };
 
@@ -76,8 +77,8 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
                   <p className="font-semibold">{k.name}{k.kitId === plan.kitId ? " — the shop's choice" : ""}</p>
                   <p>Displacement <span className="num">{k.displacementCc.stockRounded} cc → {k.displacementCc.kitRounded} cc</span>.</p>
                   <p>{k.cut ? <>The case mouth must be cut to <span className="num">{L(k.cut.diameterMm)}</span> across, <span className="num">{L(k.cut.depthMm)}</span> deep.</> : "No cutting needed."}</p>
-                  <p className={k.verdict === "cannot-fit" ? "text-interfere" : k.verdict === "fits-as-is" ? "text-clear" : ""}>
-                    Risk: {VERDICT_WORDS[k.verdict]}
+                  <p>
+                    Risk: <VerdictMark verdict={k.verdict} words={VERDICT_WORDS[k.verdict]} />
                     {k.thinnestWall && k.verdict !== "cannot-fit" ? <> The thinnest wall left is <span className="num">{L(k.thinnestWall.minWallMm)}</span>.</> : null}
                   </p>
                 </li>
@@ -104,6 +105,7 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
             {quote ? (
               <>
                 <p className="text-lg">What the shop charges for this plan, line by line. You approve the plan and this price together{job.approvedQuote ? "; both are approved." : "."}</p>
+                {quote.quote.kitStale ? <p className="caution text-lg" data-testid="quote-pending">The shop is pricing the kit for this plan ({quote.quote.kitStale.kitName}); the price below is not complete yet, and you can approve once the shop has written it.</p> : null}
                 <QuoteTable large totals={quote.totals} taxPercent={quote.quote.taxPercent} depositPercent={quote.quote.depositPercent} overridden={Boolean(quote.quote.depositOverride)} />
               </>
             ) : (

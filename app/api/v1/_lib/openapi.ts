@@ -36,7 +36,7 @@ import {
   QuestionSchema,
   ReadingsBodySchema,
 } from "@/model/schemas";
-import { QuotePutSchema } from "@/model/quote";
+import { ApproveSchema, QuotePutSchema } from "@/model/quote";
 import { CasePhotoPatchSchema, CasePhotoRequestSchema } from "../cases/[id]/photos/schema";
 import { CheckoutSchema, MePatchSchema, MeSchema, NewShopSchema, ShopsSchema } from "./account-schemas";
 
@@ -155,7 +155,7 @@ function jobOperations(): Operation[] {
     { method: "post", path: `${photo}/complete`, summary: "Marks a photo's upload as done once the object store holds it", roles: "staff", ok: ok(200, "Completed"), errors: [401, 403, 404, 409, 415] },
     { method: "get", path: `${job}/setup-card.pdf`, summary: "The job's setup card as a PDF", roles: "staff", ok: { status: 200, contentType: "application/pdf", description: "The setup card" }, errors: [401, 403, 404, 409] },
     { method: "get", path: "/api/v1/consult", summary: "The jobs shared with the calling customer", roles: "customer", ok: ok(200, "The jobs"), errors: [401, 403] },
-    { method: "post", path: "/api/v1/consult/{id}/approve", summary: "The customer approves the shared plan", roles: "customer", ok: ok(200, "Approved"), errors: [401, 403, 404, 409, 415] },
+    { method: "post", path: "/api/v1/consult/{id}/approve", summary: "The customer approves the shared plan and its quote (the body names the quote's fingerprint; none for a job with no quote)", roles: "customer", body: ApproveSchema, ok: ok(200, "Approved"), errors: [400, 401, 403, 404, 409, 413, 415] },
     { method: "post", path: "/api/v1/payments/checkout", summary: "Starts (or resumes) the hosted checkout of a job's deposit; answers its address", roles: "customer", body: CheckoutSchema, ok: ok(201, "The checkout", z.object({ url: z.string(), sessionId: z.string() })), errors: [400, 401, 403, 404, 409, 415, 502, 503] },
     { method: "post", path: "/api/v1/payments/webhook", summary: "Events from the payment service, signed over the raw body", roles: "signed", body: anyObject, ok: ok(200, "Received", z.object({ received: z.boolean(), duplicate: z.boolean().optional(), applied: z.boolean().optional() })), errors: [400, 413, 415, 503] },
   ];

@@ -24,9 +24,14 @@ export function ConsultActions({ job, checkout, zone }: { job: JobView; checkout
 
   async function approve() {
     setBusy("approve");
-    const res = await callApi(`/api/v1/consult/${job.id}/approve`, { body: {} });
+    // The approval names the quote this page shows; a quote changed since is refused, and the page reloads it.
+    const res = await callApi(`/api/v1/consult/${job.id}/approve`, { body: { quoteFingerprint: job.quote?.fingerprint ?? null } });
     setBusy(null);
-    if (!res.ok) return setNotice({ tone: "error", text: res.error.message });
+    if (!res.ok) {
+      setNotice({ tone: "error", text: res.error.message });
+      if (res.status === 409) router.refresh();
+      return;
+    }
     setNotice({ tone: "ok", text: job.quote ? "Thank you — the plan and the price are approved." : "Thank you — the plan is approved." });
     router.refresh();
   }
@@ -59,6 +64,8 @@ export function ConsultActions({ job, checkout, zone }: { job: JobView; checkout
         <p className="text-lg" data-testid="approved-line">
           {job.approvedQuote ? "The plan and the price were approved" : "The plan was approved"} by {job.approval.by.name} on {dateTimeText(job.approval.at, zone)}.
         </p>
+      ) : job.status === "planned" && job.quote?.quote.kitStale ? (
+        <p className="text-lg" data-testid="approve-waits">The shop is still pricing the kit; you can approve the plan and the price once it is written.</p>
       ) : job.status === "planned" ? (
         <div className="flex flex-wrap items-center gap-3">
           <button className="btn text-lg" type="button" disabled={busy !== null} onClick={approve}>{busy === "approve" ? "Approving…" : job.quote ? "Approve the plan and the price" : "Approve this plan"}</button>

@@ -34,7 +34,7 @@ export function quoteTexts(quote: StoredQuote | null, libraryKit: { label: strin
     };
   }
   return {
-    kitLabel: quote.kit?.label ?? libraryKit?.label ?? "",
+    kitLabel: quote.kit?.label ?? libraryKit?.label ?? quote.kitStale?.kitName ?? "",
     kitPrice: quote.kit ? a(quote.kit.unitMinor) : "",
     parts: quote.parts.map((p) => ({ label: p.label, quantity: String(p.quantity), unit: a(p.unitMinor) })),
     hours: quote.machiningHours ? String(quote.machiningHours) : "",

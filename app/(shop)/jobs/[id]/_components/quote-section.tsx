@@ -10,6 +10,12 @@ export function QuoteSection({ job, data, role, when }: { job: JobView; data: Qu
   return (
     <section className="card flex flex-col gap-3 p-4" aria-labelledby="quote-h" data-testid="quote-section">
       <h2 id="quote-h" className="text-xl font-semibold">The quote</h2>
+      {data.quote?.quote.kitStale ? (
+        <p role="status" className="caution text-sm" data-testid="quote-kit-stale">
+          The plan now takes {data.quote.quote.kitStale.kitName}
+          {data.quote.quote.kitStale.previous ? `; the old kit line (${data.quote.quote.kitStale.previous}) was taken out of the quote` : ""}. {data.quote.quote.kitStale.reason} Until the quote is saved again the customer cannot approve it.
+        </p>
+      ) : null}
       {data.editable && "pricing" in data && data.pricing ? (
         <QuoteForm
           key={data.version}
