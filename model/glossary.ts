@@ -47,6 +47,15 @@ export const TERM = {
   holderRock: term("Holder rocking", "Rocking", "Wobble of the machine"),
   axisShift: term("Axis shift at the cut's bottom", "Axis shift", "Drift at the bottom of the opening"),
   tiltCost: term("What the tilt costs", "Tilt cost", "Room lost to tilt"),
+  // ——— The quote ———
+  quoteKit: term("Cylinder kit", "Kit", "The cylinder kit"),
+  quoteParts: term("Gaskets and parts", "Parts", "Gaskets and parts"),
+  quoteMachining: term("Machining", "Machining", "The shop's work"),
+  quoteOther: term("Other", "Other", "Other costs"),
+  quoteSubtotal: term("Sum before tax", "Before tax", "Price before tax"),
+  quoteTax: term("Tax", "Tax", "Tax"),
+  quoteTotal: term("Total, tax included", "Total", "Total price, tax included"),
+  quoteDeposit: term("Deposit on approval", "Deposit", "Deposit you pay when you approve"),
 } as const satisfies Record<string, Term>;
 
 export type TermKey = keyof typeof TERM;

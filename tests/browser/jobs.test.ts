@@ -1,6 +1,8 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { TERM } from "@/model/glossary";
+import { QUOTE_CHANGED } from "@/model/quote";
 import { DEMO, signIn, uniqueEmail, waitForMail } from "../support/http";
 import { insertExampleStudy, me, readPdf } from "../integration/jobs-support";
 import { measurePdf } from "../integration/jobs-pdf-measure";
@@ -40,16 +42,16 @@ describe("a job in the browser, from the study to verified", () => {
 
     // ── The builder drafts the quote: the kit's price from the library, two gaskets, machining at the shop's rate.
     const quote = bench.getByRole("form", { name: "The quote" });
-    expect(await quote.getByLabel("Kit price").inputValue()).toBe("289.00");
+    expect(await quote.getByLabel(`${TERM.quoteKit.short} price`).inputValue()).toBe("289.00");
     await quote.getByRole("button", { name: "Add a part" }).click();
     await quote.getByLabel("Part", { exact: true }).fill("Base gasket");
     await quote.getByLabel("Quantity").fill("2");
     await quote.getByLabel("Each").fill("12.50");
-    await quote.getByLabel("Machining time").fill("1.3");
+    await quote.getByLabel(`${TERM.quoteMachining.label} time`).fill("1.3");
     await quote.getByRole("button", { name: "Save as the job's quote" }).click();
     await expect.poll(() => quote.getByText(/to the quarter hour \(0\.25/).count(), { timeout: 10_000 }).toBe(1);
     expect(await quote.getByLabel("Each").inputValue()).toBe("12.50");
-    await quote.getByLabel("Machining time").fill("1.5");
+    await quote.getByLabel(`${TERM.quoteMachining.label} time`).fill("1.5");
     await quote.getByRole("button", { name: "Save as the job's quote" }).click();
     await expect.poll(() => bench.getByTestId("deposit-state").textContent(), { timeout: 10_000 }).toMatch(/145\.44/);
     // 289.00 + 2 × 12.50 + 1.5 h × 60.00 = 404.00; tax 20 % = 80.80; total 484.80; deposit 30 % = 145.44 (the demo shop's rates).
@@ -58,6 +60,9 @@ describe("a job in the browser, from the study to verified", () => {
     expect((await figures.getByTestId("quote-tax").textContent())?.replace(/\s/g, " ")).toBe("EUR 80.80");
     expect((await figures.getByTestId("quote-total").textContent())?.replace(/\s/g, " ")).toBe("EUR 484.80");
     expect((await figures.getByTestId("quote-deposit").textContent())?.replace(/\s/g, " ")).toBe("EUR 145.44");
+    // The shop reads the glossary's names of the quote's lines.
+    for (const t of [TERM.quoteSubtotal, TERM.quoteTotal]) expect(await figures.getByText(t.label, { exact: true }).count()).toBe(1);
+    expect(await figures.getByText(`${TERM.quoteKit.label}:`).count()).toBe(1);
     // A builder drafts; the deposit of their own is the owner's, so the builder is not offered one.
     expect(await quote.getByText(/Ask a deposit other than/).count()).toBe(0);
     for (const width of [1440, 390]) {
@@ -131,7 +136,20 @@ describe("a job in the browser, from the study to verified", () => {
       await sofa.setViewportSize({ width, height: 900 });
       await screenshot(sofa, `jobs-02a-consult-quote-${width}`);
     }
+    // The customer reads the glossary's plain words for the quote's lines.
+    const price = sofa.getByRole("region", { name: "The price" });
+    for (const t of [TERM.quoteTotal, TERM.quoteSubtotal]) expect(await price.getByText(t.plain, { exact: true }).count()).toBe(1);
     await sofa.setViewportSize({ width: 1180, height: 900 });
+    // The shop renames a line while the customer has the page open: the approval of the old quote is refused, and said so.
+    const builderApi = await signIn(DEMO.builder.email, DEMO.builder.password);
+    const current = (await builderApi.get(`/api/v1/jobs/${jobId}`)).json as { job: { version: number } };
+    const renamed = await builderApi.send("PUT", `/api/v1/jobs/${jobId}/quote`, { version: current.job.version, parts: [{ label: "Base gasket, paper", quantity: 2, unitMinor: 1250 }], machiningHours: 1.5 });
+    expect(renamed.status, renamed.text).toBe(200);
+    await sofa.getByRole("button", { name: "Approve the plan and the price" }).click();
+    await expect.poll(() => sofa.getByText(QUOTE_CHANGED).count(), { timeout: 10_000 }).toBe(1);
+    expect(await sofa.getByTestId("approved-line").count()).toBe(0);
+    // Read again (the page shows the renamed line), then approved.
+    await expect.poll(() => price.getByText("Base gasket, paper", { exact: false }).count(), { timeout: 10_000 }).toBe(1);
     await sofa.getByRole("button", { name: "Approve the plan and the price" }).click();
     await expect.poll(() => sofa.getByTestId("approved-line").count(), { timeout: 10_000 }).toBe(1);
     const approvedLine = (await sofa.getByTestId("approved-line").textContent()) ?? "";

@@ -1,5 +1,6 @@
 "use client";
 
+import { TERM } from "@/model/glossary";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { formatMoney, type CurrencyCode } from "@/model/money";
@@ -61,12 +62,12 @@ export function QuoteForm({ jobId, version, quote, pricing, libraryKit, role }: 
         {owner ? " — change them in Shop settings." : " — the shop's owner sets them in Shop settings."}
       </p>
       <div className="grid gap-3 sm:grid-cols-[1fr_10rem]">
-        <Field name="kitLabel" id="quote-kit-label" label="Kit" value={t.kitLabel} onChange={(e) => set({ kitLabel: e.target.value })} />
-        <Field name="kitPrice" id="quote-kit-price" label="Kit price" unit={currency} inputMode="decimal" className="field-input num" value={t.kitPrice} error={errors["kit.unitMinor"] ?? errors.kit}
+        <Field name="kitLabel" id="quote-kit-label" label={TERM.quoteKit.short} value={t.kitLabel} onChange={(e) => set({ kitLabel: e.target.value })} />
+        <Field name="kitPrice" id="quote-kit-price" label={`${TERM.quoteKit.short} price`} unit={currency} inputMode="decimal" className="field-input num" value={t.kitPrice} error={errors["kit.unitMinor"] ?? errors.kit}
           hint={kitFromLibrary ? "From the library; blank for no kit." : "The library gives no price; blank for no kit."} onChange={(e) => set({ kitPrice: e.target.value })} />
       </div>
       <LineList
-        title="Gaskets and parts"
+        title={TERM.quoteParts.label}
         cols="sm:grid-cols-[1fr_6rem_9rem_auto]"
         addLabel="Add a part"
         rows={t.parts}
@@ -81,10 +82,10 @@ export function QuoteForm({ jobId, version, quote, pricing, libraryKit, role }: 
         )}
       />
       <div className="max-w-xs">
-        <Field name="hours" id="quote-hours" label="Machining time" unit="h" inputMode="decimal" className="field-input num" value={t.hours} error={errors.machiningHours} hint="To the quarter hour: 1.25, 1.5 …" onChange={(e) => set({ hours: e.target.value })} />
+        <Field name="hours" id="quote-hours" label={`${TERM.quoteMachining.label} time`} unit="h" inputMode="decimal" className="field-input num" value={t.hours} error={errors.machiningHours} hint="To the quarter hour: 1.25, 1.5 …" onChange={(e) => set({ hours: e.target.value })} />
       </div>
       <LineList
-        title="Other lines"
+        title={`${TERM.quoteOther.label} lines`}
         cols="sm:grid-cols-[1fr_9rem_auto]"
         addLabel="Add a line"
         rows={t.others}
@@ -105,7 +106,7 @@ export function QuoteForm({ jobId, version, quote, pricing, libraryKit, role }: 
           </label>
           {t.overrideOn ? (
             <div className="grid gap-3 sm:grid-cols-[10rem_1fr]">
-              <Field name="overrideAmount" id="quote-deposit" label="Deposit" unit={currency} inputMode="decimal" className="field-input num" value={t.overrideAmount} error={errors["depositOverride.amountMinor"]} onChange={(e) => set({ overrideAmount: e.target.value })} />
+              <Field name="overrideAmount" id="quote-deposit" label={TERM.quoteDeposit.short} unit={currency} inputMode="decimal" className="field-input num" value={t.overrideAmount} error={errors["depositOverride.amountMinor"]} onChange={(e) => set({ overrideAmount: e.target.value })} />
               <Field name="overrideReason" id="quote-deposit-reason" label="Why (kept with the quote)" value={t.overrideReason} error={errors["depositOverride.reason"]} onChange={(e) => set({ overrideReason: e.target.value })} />
             </div>
           ) : null}
