@@ -4,6 +4,8 @@
 import { eq, inArray } from "drizzle-orm";
 import type { drizzle } from "drizzle-orm/libsql";
 import { StudySchema, evaluateStudy, type Study, type StudyResult } from "../geometry";
+import { formatMoney } from "../model/money";
+import { quoteTotals, type StoredQuote } from "../model/quote";
 import type { PlanSnapshot } from "./jobs";
 import * as schema from "./schema";
 import * as jobs from "./schema-jobs";
@@ -72,6 +74,36 @@ export function demoAfterCutReadings(study: Study, result: StudyResult, kitId: s
 
 const STATUSES = ["intake", "planned", "approved", "machined", "verified", "closed"] as const;
 
+/** The demo shop's prices (its settings row): euros, 60.00 an hour, 20 % tax, 30 % deposit. */
+export const DEMO_PRICING = { currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 } as const;
+
+/**
+ * The demo quote for a planned job: the kit at its library price, two base gaskets and a set of stud nuts,
+ * an hour and a half of machining at the shop's rate, tax and the deposit share.
+ */
+export function demoQuote(kitId: string, kitName: string, at: Date, by: Person): StoredQuote {
+  const price = DEMO_KITS.find((k) => k.id === kitId)?.data.price;
+  if (!price || price.currency !== DEMO_PRICING.currency) throw new Error(`the demo kit ${kitId} has no price in ${DEMO_PRICING.currency}`);
+  return {
+    currency: DEMO_PRICING.currency,
+    kit: { label: kitName, unitMinor: price.amountMinor },
+    kitId,
+    kitStale: null,
+    parts: [
+      { label: "Base gasket", quantity: 2, unitMinor: 1250 },
+      { label: "Stud nuts, set of four", quantity: 1, unitMinor: 840 },
+    ],
+    machiningHours: 1.5,
+    others: [],
+    labourRateMinor: DEMO_PRICING.labourRateMinor,
+    taxPercent: DEMO_PRICING.taxPercent,
+    depositPercent: DEMO_PRICING.depositPercent,
+    depositOverride: null,
+    updatedAt: at.toISOString(),
+    updatedBy: { id: by.id, name: by.name },
+  };
+}
+
 /** Inserts the demo jobs where missing; returns how many jobs it wrote. Needs the demo library in place. */
 export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Person; builder: Person; customer: Person }): Promise<number> {
   const { study, name: studyName, chosenKitId } = demoStudy();
@@ -99,6 +131,12 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
     "Marlet 50 club racer, 47 mm conversion",
   ];
   const ids = STATUSES.map((s) => `demo-job-${s}`);
+  // Every planned demo job carries the same quote, written when the plan was taken; the approved ones keep it as approved.
+  const quote = demoQuote(kit.kitId, kit.name, at(2, 11), people.builder);
+  const quoteJson = JSON.stringify(quote);
+  const figures = quoteTotals(quote);
+  const deposit = figures.deposit.amountMinor;
+  const quoteWords = `the plan and the quote (total ${formatMoney(figures.total)}, deposit ${formatMoney(figures.deposit)})`;
   let written = 0;
   await db.transaction(async (tx) => {
     const have = new Set((await tx.select({ id: jobs.job.id }).from(jobs.job).where(inArray(jobs.job.id, ids))).map((r) => r.id));
@@ -110,8 +148,8 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
       const c = contacts[i];
       const planned = i >= 1;
       const approved = i >= 2;
-      const event = (n: number, kind: string, summary: string, by: Person | null, move?: [string, string]) => ({
-        id: `${id}-e${n}`,
+      const event = (n: number, kind: string, summary: string, by: Person | null, move?: [string, string], key = String(n)) => ({
+        id: `${id}-e${key}`,
         jobId: id,
         at: at(1 + n, 10 + i),
         byId: by?.id ?? null,
@@ -136,7 +174,9 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
         kitId: planned ? plan.kitId : null,
         planJson: planned ? JSON.stringify(plan) : null,
         status,
-        depositAmount: 5000,
+        quoteJson: planned ? quoteJson : null,
+        approvedQuoteJson: approved ? quoteJson : null,
+        depositAmount: planned ? deposit : 5000,
         currency: "eur",
         paidAt: approved ? at(4, 12) : null,
         sharedAt: planned ? at(3) : null,
@@ -150,10 +190,11 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
       });
       const events = [event(0, "created", `opened the job for ${c.name}`, people.builder)];
       if (planned) events.push(event(1, "status", `planned with ${kit.name} from the study "${studyName}"`, people.builder, ["intake", "planned"]));
+      if (planned) events.push(event(2, "quote", `wrote the quote: total ${formatMoney(figures.total)}, deposit ${formatMoney(figures.deposit)}`, people.builder, undefined, "2q"));
       if (planned) events.push(event(2, "share", `shared the plan with ${c.name}`, people.builder));
       if (approved) {
-        events.push(event(3, "status", i === 2 ? "approved the plan" : "approved the plan for the customer: approved by phone", i === 2 ? people.customer : people.owner, ["planned", "approved"]));
-        events.push(event(4, "payment", "deposit paid: 50.00 EUR", null));
+        events.push(event(3, "status", i === 2 ? `approved ${quoteWords}` : `approved ${quoteWords} for the customer: approved by phone`, i === 2 ? people.customer : people.owner, ["planned", "approved"]));
+        events.push(event(4, "payment", `deposit paid: ${formatMoney(figures.deposit)}`, null));
       }
       if (i >= 3) events.push(event(5, "status", "moved the job from approved to machined", people.builder, ["approved", "machined"]));
       if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the cut, trial fit)", people.builder));
@@ -164,7 +205,7 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
       if (i === 5) events.push(event(8, "status", "moved the job from verified to closed", people.owner, ["verified", "closed"]));
       await tx.insert(jobs.jobEvent).values(events);
       if (approved) {
-        await tx.insert(jobs.jobPayment).values({ id: `${id}-deposit`, jobId: id, checkoutSessionId: `cs_demo_${id}`, amount: 5000, currency: "eur", status: "paid", createdAt: at(4, 11), createdById: c.userId ?? people.owner.id, paidAt: at(4, 12) });
+        await tx.insert(jobs.jobPayment).values({ id: `${id}-deposit`, jobId: id, checkoutSessionId: `cs_demo_${id}`, amount: deposit, currency: "eur", status: "paid", createdAt: at(4, 11), createdById: c.userId ?? people.owner.id, paidAt: at(4, 12) });
       }
       if (i >= 3) {
         const r = i === 3 ? failing : passing;

@@ -7,7 +7,7 @@ import { fileURLToPath } from "node:url";
 import { databaseConfig } from "./config";
 import { loadLocalEnv } from "./env";
 import * as schema from "./schema";
-import { seedJobs } from "./seed-jobs";
+import { DEMO_PRICING, seedJobs } from "./seed-jobs";
 import { seedLibrary } from "./seed-library";
 
 export const DEMO_SHOP = { id: "demo-shop", name: "Quillfern Engine Works", slug: "quillfern-engine-works" };
@@ -27,7 +27,7 @@ export async function seedDemo(db: SeedDb): Promise<number> {
     const shop = await tx.query.organization.findFirst({ where: eq(schema.organization.id, DEMO_SHOP.id) });
     if (!shop) {
       await tx.insert(schema.organization).values({ ...DEMO_SHOP, createdAt: new Date() });
-      await tx.insert(schema.shopSettings).values({ organizationId: DEMO_SHOP.id, currency: "EUR", labourRateMinor: 6000, taxPercent: 20, depositPercent: 30 });
+      await tx.insert(schema.shopSettings).values({ organizationId: DEMO_SHOP.id, ...DEMO_PRICING });
       written += 2;
     }
     for (const person of DEMO_PEOPLE) {
