@@ -4,6 +4,7 @@ import { memo, useMemo } from "react";
 import type { Study, StudyResult } from "@/geometry";
 import { sectionDrawing } from "@/scene/drawing/section";
 import { fitState, governingClearanceMm } from "@/scene/fit";
+import { formatMoney, type Money } from "@/model/money";
 import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
 import { BORDER, REASON_TEXT, SOFT_BG, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
@@ -16,10 +17,12 @@ interface Props {
   readonly chosenKitId?: string;
   readonly units: "mm" | "in";
   readonly onPick: (i: number) => void;
+  /** The library's kit prices by kit id, shown beside each kit; display only, the core never reads them. */
+  readonly prices?: Readonly<Record<string, Money | undefined>>;
 }
 
 /** The kit switcher: every kit of the study with its verdict and clearance; the chosen kit marked. */
-export const KitSwitcher = memo(function KitSwitcher({ study, result, kitIndex, chosenKitId, units, onPick }: Props) {
+export const KitSwitcher = memo(function KitSwitcher({ result, kitIndex, chosenKitId, units, onPick, prices }: Props) {
   return (
     <fieldset className="card p-3">
       <legend className="px-1 text-sm font-medium">Kit on show</legend>
@@ -37,7 +40,8 @@ export const KitSwitcher = memo(function KitSwitcher({ study, result, kitIndex, 
                   <span className={`font-medium ${VERDICT_COLOR[k.verdict]}`}>{VERDICT_TEXT[k.verdict]}</span>
                   {k.verdict === "cannot-fit" && k.reasons.length > 1 ? ` — ${REASON_TEXT[k.reasons[k.reasons.length - 1]]}` : ""}
                   {k.cut ? ` · cut ${diameterLabel(k.cut.diameterMm, units)}` : ""}
-                  {study.kits[i].price !== undefined ? ` · price ${study.kits[i].price}` : ""}
+                  {/* A price shows only as money with its currency (a bare number in a study file shows nothing). */}
+                  {prices?.[k.kitId] ? ` · price ${formatMoney(prices[k.kitId]!)}` : ""}
                 </span>
               </span>
               <span className={`num text-right font-semibold ${TEXT_COLOR[s]}`}>

@@ -1,5 +1,6 @@
 "use client";
 
+import type { Money } from "@/model/money";
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
 import type { FitCanvasApi } from "@/scene/three/fit-canvas";
@@ -29,10 +30,12 @@ export interface StudioProps {
   readonly chosenKitId?: string;
   /** Customer mode with no way out: no bench-view toggle and so never the cut controls (the consult page). */
   readonly lockCustomerMode?: boolean;
+  /** The library's kit prices by kit id, for the kit switcher (display only). */
+  readonly kitPrices?: Readonly<Record<string, Money | undefined>>;
 }
 
 /** The fit studio: the 3D view, the results in words, the cut controls with the walls, rig set-up and tilt they give, the kit lineup and the drawings. */
-export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false }: StudioProps) {
+export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false, kitPrices }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
   const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
   // The panels may lag behind a drag (deferred); the kit pickers follow `snap` itself, or a clicked radio would
@@ -105,12 +108,12 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
             <div className={compare === "side" ? "hidden" : "h-full w-full"}>
               <FitView store={store} view={fullView} onReady={onReady} />
             </div>
-            {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+            {compare === "side" && <SmallMultiples study={settled.study} result={settled.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} prices={kitPrices} />}
           </div>
         </div>
         <aside className="flex min-w-0 flex-col gap-3 lg:col-start-2 lg:row-span-2 lg:row-start-1">
           <ResultsPanel result={live.result} kitIndex={live.kitIndex} mouthDiameterMm={mouthDiameterMm} units={units} large={customer} />
-          {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} />}
+          {multi && <KitSwitcher study={live.study} result={live.result} kitIndex={snap.kitIndex} chosenKitId={chosenKitId} units={units} onPick={setKit} prices={kitPrices} />}
           <Legend result={live.result} units={units} large={customer} />
         </aside>
         {/* On a phone the results come right under the view, before the cut and the bench figures. */}

@@ -1,10 +1,12 @@
 import type { KitResult, StudyResult } from "@/geometry";
+import type { Money } from "@/model/money";
 
 export type LineupRow = {
   kitId: string;
   name: string;
   kit: KitResult;
-  price: number | null;
+  /** The library kit's price, for display and sorting only. */
+  price: Money | null;
   /** The least cut this kit needs, from the core's proposal (null: no cut needed). */
   needDiameterMm: number | null;
   needDepthMm: number | null;
@@ -17,7 +19,7 @@ export type LineupRow = {
 const WHERE = { stud: "at stud", pocket: "to", outline: "to the outside" } as const;
 
 /** One lineup row per kit, from the evaluation in which the core proposed each kit's own cut. */
-export function lineupRows(needed: StudyResult, prices: Record<string, number | undefined>): LineupRow[] {
+export function lineupRows(needed: StudyResult, prices: Readonly<Record<string, Money | undefined>>): LineupRow[] {
   return needed.kits.map((k) => {
     const w = k.thinnestWall;
     const rig = k.rig;

@@ -6,6 +6,8 @@ import { useMemo } from "react";
 import { EmptyState } from "../../../../_ui/empty-state";
 import { DataTable } from "../../../../_ui/table/data-table";
 import { lengthLabel } from "@/model/units";
+import { formatMoney, type Money } from "@/model/money";
+import { VerdictGlyph } from "@/app/_ui/studio/verdict-mark";
 import { TONE_TEXT, VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
@@ -49,6 +51,7 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
             const why = blockingReason(row.original.kit);
             return (
               <span className={`font-medium ${TONE_TEXT[v.tone]}`}>
+                <VerdictGlyph verdict={row.original.kit.verdict} />
                 {v.words}
                 {why ? <span className="block text-xs font-normal text-ink-2">{why}</span> : null}
               </span>
@@ -94,15 +97,16 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
           header: TERM.displacement.label,
           cell: ({ row }) => (
             <span className="num">
-              {row.original.kit.displacementCc.kitRounded} cc{row.original.kit.displacementCc.crossesClasses.length ? <span className="text-tight"> ⚑ class</span> : null}
+              {row.original.kit.displacementCc.kitRounded} cc{row.original.kit.displacementCc.crossesClasses.length ? <span className="text-caution"> ⚑ class</span> : null}
             </span>
           ),
         }),
         h.accessor("price", {
           id: "price",
           header: "Price",
-          sortingFn: nullsLast((r) => r.price),
-          cell: (c) => <span className="num">{c.getValue() === null ? "—" : (c.getValue() as number).toFixed(2)}</span>,
+          // Prices sort by amount; the kits of one study are priced in one currency as a rule.
+          sortingFn: nullsLast((r) => r.price?.amountMinor ?? null),
+          cell: (c) => <span className="num">{c.getValue() === null ? "—" : formatMoney(c.getValue() as Money)}</span>,
         }),
       ] as ColumnDef<LineupRow, unknown>[],
     [units, chosen, onChoose],

@@ -1,6 +1,7 @@
 "use client";
 
 import type { LengthUnits } from "@/geometry";
+import type { Money } from "@/model/money";
 import type { CaseRow } from "../../../../_ui/query/types";
 import type { Evaluation } from "./assemble";
 import { caseFromRow } from "./assemble";
@@ -19,7 +20,7 @@ export function LineupView({
 }: {
   shown: Extract<Evaluation, { ok: true }> | null;
   units: LengthUnits;
-  prices: Record<string, number | undefined>;
+  prices: Readonly<Record<string, Money | undefined>>;
   chosen: string;
   onChoose: (kitId: string) => void;
   mouthRow: CaseRow | null;

@@ -1,5 +1,6 @@
 "use client";
 
+import type { Money } from "@/model/money";
 import { useFormContext } from "react-hook-form";
 import type { LengthUnits } from "@/model/units";
 import { CutPanel } from "./cut-panel";
@@ -17,6 +18,8 @@ type Props = {
   values: StudyFormValues;
   units: LengthUnits;
   kitNames: Record<string, string>;
+  /** The library's kit prices, shown beside each kit in the studio's switcher. */
+  prices?: Readonly<Record<string, Money | undefined>>;
   studs: string[];
   shopLimits: Record<string, unknown>;
   loading: boolean;
@@ -26,13 +29,13 @@ type Props = {
  * The plan: the fit studio across the page (the view, the results beside it, the cut and what it gives at the
  * bench), then the inputs that drive it. Each result is shown once, in the studio.
  */
-export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLimits, loading }: Props) {
+export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLimits, loading, prices }: Props) {
   const form = useFormContext<StudyFormValues>();
   const shownKit = shown?.result.kits.find((k) => k.kitId === (values.chosenKitId || values.kitIds[0])) ?? null;
   return (
     <>
       {shown ? (
-        <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} />
+        <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} prices={prices} />
       ) : (
         <p className="text-ink-2">{loading ? "Loading the case and kits…" : "Results appear once the inputs are complete."}</p>
       )}

@@ -1,6 +1,6 @@
 "use client";
 
-import { minorDigits } from "@/model/money";
+import { money } from "@/model/money";
 import type { LengthUnits } from "@/geometry";
 import { useCallback, useState } from "react";
 import { FormProvider } from "react-hook-form";
@@ -22,7 +22,8 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
   const choose = useCallback((kitId: string) => form.setValue("chosenKitId", kitId, { shouldDirty: true }), [form]);
 
   const kitNames = Object.fromEntries([...rows.kitRows.map((k) => [k.id, k.name]), ...(rows.caseRow ? [[rows.caseRow.id, rows.caseRow.name]] : [])]);
-  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price ? k.data.price.amountMinor / 10 ** minorDigits(k.data.price.currency) : undefined]));
+  // The library's prices as money with their currency, for the lineup and the kit switcher (display only).
+  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price ? money(k.data.price.amountMinor, k.data.price.currency) : undefined]));
   const studs = rows.caseRow?.data.studs.map((s) => s.label) ?? [];
 
   return (
@@ -32,7 +33,7 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
         <StudyNotices save={save} onReloaded={onReloaded} failed={rows.failed} evaluation={evaluation} stale={stale} basis={shownInputs} values={values} units={units} />
         <StudyTabs tab={tab} onTab={setTab} />
         {tab === "plan" ? (
-          <PlanTab studyId={detail.item.id} shown={shown} values={values} units={units} kitNames={kitNames} studs={studs} shopLimits={shopLimits ?? {}} loading={rows.loading} />
+          <PlanTab prices={prices} studyId={detail.item.id} shown={shown} values={values} units={units} kitNames={kitNames} studs={studs} shopLimits={shopLimits ?? {}} loading={rows.loading} />
         ) : (
           <LineupView shown={shown} units={units} prices={prices} chosen={values.chosenKitId} onChoose={choose} mouthRow={rows.caseRow} />
         )}
