@@ -6,9 +6,8 @@ import { sectionDrawing } from "@/scene/drawing/section";
 import { fitState, governingClearanceMm } from "@/scene/fit";
 import { formatMoney, type Money } from "@/model/money";
 import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
-import { BORDER, REASON_TEXT, SOFT_BG, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
-
-const VERDICT_COLOR = { "fits-as-is": "text-clear", "fits-after-cut": "text-clear", "cannot-fit": "text-interfere" } as const;
+import { VerdictMark } from "./verdict-mark";
+import { BORDER, REASON_TEXT, SOFT_BG, STATE_TEXT, TEXT_COLOR } from "./words";
 
 interface Props {
   readonly study: Study;
@@ -37,7 +36,7 @@ export const KitSwitcher = memo(function KitSwitcher({ result, kitIndex, chosenK
                 <span className="font-medium">{k.name}</span>
                 {chosen && <span className="ml-2 rounded bg-accent px-1.5 py-0.5 text-xs text-paper">the choice</span>}
                 <span className="block text-xs text-ink-2">
-                  <span className={`font-medium ${VERDICT_COLOR[k.verdict]}`}>{VERDICT_TEXT[k.verdict]}</span>
+                  <VerdictMark verdict={k.verdict} className="font-medium" />
                   {k.verdict === "cannot-fit" && k.reasons.length > 1 ? ` — ${REASON_TEXT[k.reasons[k.reasons.length - 1]]}` : ""}
                   {k.cut ? ` · cut ${diameterLabel(k.cut.diameterMm, units)}` : ""}
                   {/* A price shows only as money with its currency (a bare number in a study file shows nothing). */}
@@ -76,7 +75,7 @@ export const SmallMultiples = memo(function SmallMultiples({ study, result, kitI
                 {STATE_TEXT[s]} {signedLengthLabel(governingClearanceMm(k), units)}
               </span>
               <span className="text-ink-2">
-                {VERDICT_TEXT[k.verdict]}
+                <VerdictMark verdict={k.verdict} />
                 {k.thinnestWall ? ` · wall ${lengthLabel(k.thinnestWall.minWallMm, units)}` : ""}
                 {k.kitId === chosenKitId ? " · the choice" : ""}
               </span>

@@ -6,6 +6,8 @@ import { fitState, governingClearanceMm } from "@/scene/fit";
 import { defaultedLimitsText, TERM, type Term } from "@/model/glossary";
 import { areaLabel, diameterLabel, fixedText, lengthLabel, messageInUnits, signedLengthLabel, volumeLabel } from "@/model/units";
 import { blockingReasons } from "@/model/verdict";
+import { FIT } from "@/model/palette";
+import { VerdictGlyph, VERDICT_CLASS } from "./verdict-mark";
 import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
 interface Props {
@@ -64,14 +66,20 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, mouth
     <section aria-label="Fit results" aria-live="polite" className={`card flex flex-col gap-3 p-4 ${large ? "text-lg" : "text-sm"}`} data-testid="kit-results">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 className={`${large ? "text-3xl" : "text-xl"} font-semibold`}>{k.name}</h2>
-        <p className={`font-semibold ${k.verdict === "cannot-fit" ? TEXT_COLOR.interfere : TEXT_COLOR[state]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict} data-cut={k.cut ? k.cut.diameterMm.toFixed(2) : "none"}>
+        {/* The verdict in its colour with its glyph; the clearance beside it keeps its band's colour and glyph. */}
+        <p className={`font-semibold ${VERDICT_CLASS[k.verdict]} ${large ? "text-2xl" : "text-base"}`} data-testid="verdict" data-state={state} data-verdict={k.verdict} data-cut={k.cut ? k.cut.diameterMm.toFixed(2) : "none"}>
+          <VerdictGlyph verdict={k.verdict} />
           {k.verdict === "cannot-fit" && deciding ? (
             <>
               {VERDICT_TEXT[k.verdict]}: {deciding}
             </>
           ) : (
             <>
-              {VERDICT_TEXT[k.verdict]} · {STATE_TEXT[state]} <span className="num">{signedLengthLabel(c, units)}</span>
+              {VERDICT_TEXT[k.verdict]} ·{" "}
+              <span className={TEXT_COLOR[state]} data-testid="verdict-clearance">
+                <span aria-hidden="true">{FIT[state].icon} </span>
+                {STATE_TEXT[state]} <span className="num">{signedLengthLabel(c, units)}</span>
+              </span>
             </>
           )}
         </p>
