@@ -23,7 +23,8 @@ export function useZoom(viewport: RefObject<HTMLElement | SVGElement | null>) {
   useGesture(
     {
       onWheel: ({ event, delta: [, dy] }) => {
-        if (dy === 0) return;
+        // Scrolling down over a picture shown whole scrolls the page on; anything else zooms.
+        if (dy === 0 || (dy > 0 && view.zoom <= 1)) return;
         event.preventDefault();
         const [sx, sy] = fraction(event.clientX, event.clientY);
         setView((v) => zoomAt(v, Math.exp(-dy * 0.002), sx, sy));

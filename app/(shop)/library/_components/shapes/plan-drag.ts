@@ -2,10 +2,9 @@
 
 import { useDrag } from "@use-gesture/react";
 import type { RefObject } from "react";
-import { flushSync } from "react-dom";
 import type { LengthUnits } from "@/geometry";
 import { parseLengthText } from "@/model/units";
-import { dragPatch, type DragPatch, type EditShapes, type Frame } from "@/scene/drawing/plan-edit";
+import { dragPatch, type DragPatch, type EditShapes } from "@/scene/drawing/plan-edit";
 import { pointText, type ShapeStore } from "./shape-store";
 import type { ShapeWords } from "./plan-editor";
 
@@ -58,10 +57,10 @@ type DragOptions = {
   shapes: EditShapes;
   units: LengthUnits;
   words: ShapeWords;
-  frame: Frame;
-  /** A point is taken hold of: it keeps the focus when the drawing is replaced. */
+  /** A point is taken hold of: nothing redraws the plan until it is let go (the pressed element stays on the page). */
   onGrab: (key: string) => void;
-  setFrame: (f: Frame | null) => void;
+  /** The point is let go: it is the one picked for the keys. */
+  onRelease: (key: string) => void;
   onCommit: () => void;
   pan: (dxPx: number, dyPx: number) => void;
 };
@@ -86,11 +85,6 @@ export function usePlanDrag(o: DragOptions) {
     if (!at || (kind !== "corner" && kind !== "stud" && kind !== "radius")) return null;
     const p = pointOf(el);
     o.onGrab(key);
-    // Drawn at once without the edges' targets and with the point picked, so the patches below land on what is shown.
-    flushSync(() => {
-      o.setFrame(o.frame);
-      o.store.setState({ selected: key, hover: key });
-    });
     return { kind, key, offset: [p[0] - at[0], p[1] - at[1]], base: o.shapes, raw: null, snap: true };
   };
 
@@ -122,7 +116,7 @@ export function usePlanDrag(o: DragOptions) {
       if (last) {
         // One write of the store: one step of undo, one validation, one live result.
         if (grip.raw) o.store.getState().act.movePoint(grip.key, grip.raw, grip.snap);
-        o.setFrame(null);
+        o.onRelease(grip.key);
         o.onCommit();
       }
       return grip;
