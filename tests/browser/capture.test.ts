@@ -5,6 +5,7 @@
 import { mkdirSync } from "node:fs";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
+import { INK } from "@/scene/drawing/svg";
 import { DEMO, freshAddress } from "../support/http";
 
 const SHOTS = "test-results/screenshots";
@@ -116,7 +117,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
     await page.getByLabel("Stud 1 x (mm)").fill("5");
     await page.getByLabel("Stud 1 y (mm)").fill("5");
     await expect.poll(() => page.getByTestId("shape-issues").innerText()).toContain("stud 1 is inside the mouth");
-    expect(await page.getByTestId("shape-plan").locator('circle[data-key="studs.0"]').first().getAttribute("stroke")).toBe("#b3362c");
+    expect(await page.getByTestId("shape-plan").locator('circle[data-key="studs.0"]').first().getAttribute("stroke")).toBe(INK.interfere);
     await plan.getByRole("button", { name: "Undo" }).click();
     await plan.getByRole("button", { name: "Undo" }).click();
     await expect.poll(() => page.getByLabel("Stud 1 x (mm)").inputValue()).toBe("-28");
@@ -159,6 +160,39 @@ describe("a case profile entered from measurements, on its drawing", () => {
     await page.getByTestId("shape-plan").locator('[data-key="deck:0"]').focus();
     await page.keyboard.press("ArrowUp");
     await expect.poll(async () => (await fieldCorners(page, "Deck"))[0]).toEqual([55, -37.9]);
+
+    // Zoomed in with the wheel over deck corner 2, about that corner: the scale on screen is read from two
+    // handles' distance apart and their fields, not from the drawing's own transform.
+    const scale = async () => {
+      const [a, b] = [await page.getByTestId("shape-plan").locator('[data-key="deck:0"]').boundingBox(), await page.getByTestId("shape-plan").locator('[data-key="deck:4"]').boundingBox()];
+      if (!a || !b) throw new Error("deck corners 1 and 5 are not drawn");
+      const [p0, p4] = [(await fieldCorners(page, "Deck"))[0], (await fieldCorners(page, "Deck"))[4]];
+      return Math.hypot(b.x + b.width / 2 - (a.x + a.width / 2), b.y + b.height / 2 - (a.y + a.height / 2)) / Math.hypot(p4[0] - p0[0], p4[1] - p0[1]);
+    };
+    const fitScale = await scale();
+    const corner2 = page.getByTestId("shape-plan").locator('[data-key="deck:1"]');
+    const c2 = await corner2.boundingBox();
+    if (!c2) throw new Error("deck corner 2 is not drawn");
+    await page.mouse.move(c2.x + c2.width / 2, c2.y + c2.height / 2);
+    await page.mouse.wheel(0, -400);
+    await expect.poll(async () => (await scale()) / fitScale).toBeGreaterThan(1.5);
+    const zoomed = await scale();
+    // Under the pointer it zoomed about, corner 2 is still on screen within the plan.
+    const z = await corner2.boundingBox();
+    const planBox = await page.getByTestId("shape-plan").boundingBox();
+    if (!z || !planBox) throw new Error("deck corner 2 is not drawn after zooming");
+    expect(z.x).toBeGreaterThan(planBox.x);
+    expect(z.x + z.width).toBeLessThan(planBox.x + planBox.width);
+    expect(Math.abs(z.x + z.width / 2 - (c2.x + c2.width / 2))).toBeLessThan(2);
+    expect(zoomed / fitScale).toBeGreaterThan(1.5);
+    // The keys: 0 fits the whole plan again, + zooms in one step of 1.5, the button zooms back out.
+    await page.getByTestId("shape-plan").locator('[data-key="deck:0"]').focus();
+    await page.keyboard.press("0");
+    await expect.poll(async () => (await scale()) / fitScale).toBeCloseTo(1, 2);
+    await page.keyboard.press("+");
+    await expect.poll(async () => (await scale()) / fitScale).toBeCloseTo(1.5, 2);
+    await page.getByRole("button", { name: "Zoom out of the plan" }).click();
+    await expect.poll(async () => (await scale()) / fitScale).toBeCloseTo(1, 2);
 
     // The passage mirrored to the other side: a copy across the y axis, (x, y) → (−x, y), in reverse order.
     await page.getByRole("button", { name: "Add a copy of Passage 1 mirrored across the y axis" }).click();

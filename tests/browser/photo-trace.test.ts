@@ -160,6 +160,44 @@ describe("trace a deck from a photo", () => {
     await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
   });
 
+  it("places each point on the photo's pixel under the pointer when the photo is zoomed in", async () => {
+    await page.close();
+    page = await context.newPage();
+    page.on("pageerror", (e) => pageErrors.push(e.message));
+    const panel = await openPanel();
+    const surface = panel.getByTestId("trace-surface");
+    await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
+    await panel.getByRole("button", { name: "Start over" }).click();
+    await panel.getByLabel(/Four studs of a measured pattern/).check();
+    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
+    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    // + zooms in one step of 1.5 about the middle: the window shown starts at 0.5 − 0.5 / 1.5 of the photo
+    // across and down, and is 1 / 1.5 of it wide and tall.
+    await surface.focus();
+    await page.keyboard.press("+");
+    await expect.poll(() => surface.getAttribute("data-zoom")).toBe("1.5");
+    const zoom = 1.5, left = 0.5 - 0.5 / zoom;
+    for (const p of STUDS) {
+      await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
+      const before = Number(await surface.getAttribute("data-points"));
+      const box = await surface.boundingBox();
+      if (!box) throw new Error("the photo is not shown");
+      const [x, y] = project(CAMERA, p);
+      await surface.click({ position: { x: (x / CAMERA.widthPx - left) * zoom * box.width, y: (y / CAMERA.heightPx - left) * zoom * box.height } });
+      await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
+    }
+    await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a (56(\.0+)? mm × 56(\.0+)? mm|2\.205 in × 2\.205 in) rectangle within/);
+    const readout = panel.getByTestId("trace-readout");
+    await expect.poll(async () => JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}").studs?.length ?? 0).toBe(4);
+    const shapes = JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}") as { studs: { positionMm: Mm }[] };
+    const studErrors = STUDS.map((s) => Math.min(...shapes.studs.map((t) => Math.hypot(t.positionMm[0] - s[0], t.positionMm[1] - s[1]))));
+    expect(Math.max(...studErrors)).toBeLessThanOrEqual(0.2);
+    // 0 shows the whole photo again.
+    await surface.focus();
+    await page.keyboard.press("0");
+    await expect.poll(() => surface.getAttribute("data-zoom")).toBe("1");
+  });
+
   it("imports the same deck from a DXF drawing, each shape picked by its layer", async () => {
     await page.goto(`/library/cases/${caseId}`);
     const opener = page.locator("summary", { hasText: "Import a drawing" });
