@@ -118,3 +118,24 @@ describe("polygon orientation", () => {
     expect(Math.abs(a - clippedInterference([0, 1], 21, ccw))).toBeLessThan(areaTol(21));
   });
 });
+
+describe("a skirt touching the opening, and one outside it", () => {
+  // Plain circle geometry, worked by hand: clearance = R − r − |c − C|.
+  const mouth: Outline = { kind: "circle", diameterMm: 46 };
+
+  it("a Ø46 skirt in a Ø46 opening touches it: clearance 0 and no interference, with or without a tolerance", () => {
+    expect(skirtClearance([0, 0], 23, mouth, 0)).toEqual({ clearanceMm: 0, interference: null });
+    expect(skirtClearance([0, 0], 23, mouth, TOL)).toEqual({ clearanceMm: 0, interference: null });
+  });
+
+  it("a skirt centred outside the opening reaches deepest on its far side", () => {
+    // Centre (30, 0), 7 mm outside the Ø46 edge: clearance −7 − 10 = −17; the deepest point is the skirt's edge
+    // away from the opening, (40, 0), at 0°.
+    const c = skirtClearance([30, 0], 10, mouth, TOL);
+    expect(c.clearanceMm).toBeCloseTo(-17, 12);
+    expect(c.interference?.deepestMm).toBeCloseTo(17, 12);
+    expect(c.interference?.atMm[0]).toBeCloseTo(40, 12);
+    expect(c.interference?.atMm[1]).toBeCloseTo(0, 12);
+    expect(c.interference?.angleDeg).toBeCloseTo(0, 12);
+  });
+});

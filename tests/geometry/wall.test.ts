@@ -76,3 +76,13 @@ describe("wall edges", () => {
     expect(maxCutDiameterMm(featureReaches([0, 0], small, 20, req, TOL))).toBeCloseTo(2 * (32 - 2), 9);
   });
 });
+
+describe("a pocket starting exactly at the cut's depth", () => {
+  it("is not reached, even with no tolerance", () => {
+    const cs = parse(polygonStudyInput()).case;
+    const pockets = cs.pockets.map((p) => ({ ...p, startDepthMm: 25 }));
+    const reaches = featureReaches([0, 0], { ...cs, pockets }, 25, req, 0);
+    expect(reaches.filter((f) => f.kind === "pocket").map((f) => f.reached)).toEqual([false, false, false, false]);
+    expect(featureReaches([0, 0], { ...cs, pockets }, 25.5, req, 0).filter((f) => f.kind === "pocket").every((f) => f.reached)).toBe(true);
+  });
+});
