@@ -45,6 +45,13 @@ export function caseFromRow(row: CaseRowPart): CaseInput {
   return profile;
 }
 
+/** The core's kit from a kit row: its id and name, and its data without the price (money the core never reads). */
+export function kitFromRow(k: KitRowPart): KitInput {
+  const data: Record<string, unknown> = { ...k.data };
+  delete data.price;
+  return { ...data, id: k.id, name: k.name } as KitInput;
+}
+
 /**
  * The core's Study from a study's rows. The shop's limits come first and the study's own limits override
  * them one by one; limits are left out when neither gives any.
@@ -52,11 +59,7 @@ export function caseFromRow(row: CaseRowPart): CaseInput {
 export function assembleStudy(rows: StudyRows, shopLimits: StudyInput["limits"] | null): AssembledStudy {
   const study: AssembledStudy = {
     name: rows.name,
-    kits: rows.kits.map((k) => {
-      const data: Record<string, unknown> = { ...k.data };
-      delete data.price;
-      return { ...data, id: k.id, name: k.name } as KitInput;
-    }),
+    kits: rows.kits.map(kitFromRow),
   };
   if (rows.case) study.case = caseFromRow(rows.case);
   if (rows.rig) study.rig = { ...rows.rig.data, name: rows.rig.name } as RigInput;

@@ -60,3 +60,18 @@ describe("assembling a study", { timeout: 60_000 }, () => {
     expect(compared).toBeGreaterThan(0);
   });
 });
+
+describe("a kit row for the core", () => {
+  it("keeps the row's id and name and leaves its price (money) behind, so the core's schema takes it", async () => {
+    const { kitFromRow } = await import("../../model/study-assembly");
+    const { safeParseStudy } = await import("../../geometry");
+    const { DEMO_CASES, DEMO_KITS } = await import("../../db/seed-library");
+    const row = DEMO_KITS.find((k) => k.data.price !== undefined)!;
+    expect(row, "a demo kit with a price").toBeDefined();
+    const kit = kitFromRow({ id: row.id, name: row.name, data: row.data });
+    expect(kit).toMatchObject({ id: row.id, name: row.name, boreMm: row.data.boreMm });
+    expect("price" in kit).toBe(false);
+    const parsed = safeParseStudy({ case: { ...DEMO_CASES[0].data, name: DEMO_CASES[0].name }, kits: [kit] });
+    expect(parsed.ok, parsed.ok ? "" : parsed.issues[0]?.message).toBe(true);
+  });
+});

@@ -1,6 +1,7 @@
 "use client";
 
 import { CaseProfileSchema, evaluateStudy, safeParseStudy, type CaseProfile, type LengthUnits } from "@/geometry";
+import { kitFromRow } from "@/model/study-assembly";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { useDeferredValue, useMemo, useRef, useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
@@ -19,7 +20,7 @@ const MAX_KITS = 2;
 
 /** The least cut for the kit on this case, then the walls that cut leaves, by the same core the study runs. */
 function trial(c: CaseProfile, row: KitRow, units: LengthUnits): Trial {
-  const kit = { ...row.data, id: row.id, name: row.name };
+  const kit = kitFromRow(row);
   const first = safeParseStudy({ case: c, kits: [kit] });
   if (!first.ok) return { name: row.name, text: first.issues[0]?.message ?? "cannot be tried on this case", wall: null, ok: false };
   try {
