@@ -157,7 +157,10 @@ type PageFigures = {
   lcpMs: number;
   fcpMs: number;
   longestTaskMs: number;
+  longestTaskIn: string;
   longTasks: number;
+  /** The scripts that cost the main thread most (Lighthouse's bootup-time: evaluation + parse/compile), file and ms. */
+  heaviestScripts: { file: string; scriptingMs: number }[];
   unusedJsBytes: number;
   scriptBytes: number;
   benchmarkIndex: number;
@@ -173,7 +176,14 @@ async function lighthousePage(name: string, url: string, port: number, headers: 
   const final = new URL(lhr.finalDisplayedUrl);
   if (final.pathname !== new URL(url).pathname) throw new Error(`${url} ended at ${final.pathname} (not signed in?)`);
   const audit = (id: string) => lhr.audits[id] as Audit | undefined;
-  const tasks = (audit("long-tasks")?.details?.items ?? []).map((i) => Number(i.duration) || 0);
+  const taskItems = audit("long-tasks")?.details?.items ?? [];
+  const tasks = taskItems.map((i) => Number(i.duration) || 0);
+  const fileOf = (u: unknown) => String(u ?? "").split("/").pop() || String(u ?? "");
+  const longest = taskItems.reduce<Record<string, unknown> | null>((a, i) => (a === null || Number(i.duration) > Number(a.duration) ? i : a), null);
+  const heaviestScripts = (audit("bootup-time")?.details?.items ?? [])
+    .map((i) => ({ file: fileOf(i.url), scriptingMs: Math.round(Number(i.scripting) + Number(i.scriptParseCompile)) }))
+    .sort((a, b) => b.scriptingMs - a.scriptingMs)
+    .slice(0, 3);
   const scripts = (audit("resource-summary")?.details?.items ?? []).find((i) => i.resourceType === "script");
   return {
     name,
@@ -183,7 +193,9 @@ async function lighthousePage(name: string, url: string, port: number, headers: 
     lcpMs: audit("largest-contentful-paint")?.numericValue ?? NaN,
     fcpMs: audit("first-contentful-paint")?.numericValue ?? NaN,
     longestTaskMs: tasks.length ? Math.max(...tasks) : 0,
+    longestTaskIn: longest ? fileOf(longest.url) : "–",
     longTasks: tasks.length,
+    heaviestScripts,
     unusedJsBytes: audit("unused-javascript")?.details?.overallSavingsBytes ?? 0,
     scriptBytes: Number(scripts?.transferSize ?? 0),
     benchmarkIndex: lhr.environment.benchmarkIndex,
@@ -210,6 +222,9 @@ function printFigures(rows: PageFigures[][]) {
     ];
     console.log(rows[0][p].name.padEnd(22) + cells.join(""));
   }
+  const last = rows[rows.length - 1];
+  console.log("\nWhere the main thread goes (last run): the longest task's script, and the three costliest scripts (evaluation + compile)");
+  for (const p of last) console.log(`  ${p.name.padEnd(20)} longest task in ${p.longestTaskIn}; ${p.heaviestScripts.map((h) => `${h.file} ${h.scriptingMs} ms`).join(", ")}`);
   console.log("Aim: /try and the study page score at least 90, TBT at most 200 ms, no task over 50 ms during load.");
   console.log("TBT, LCP and task lengths are Lighthouse's simulation of a mid-range phone (4× CPU slow-down) from what this machine measured: a busy machine inflates them; the sign-in row is the baseline.");
 }
