@@ -1,5 +1,14 @@
+import { createClient } from "@libsql/client";
+import { drizzle } from "drizzle-orm/libsql";
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 import { inject } from "vitest";
+import { applyMigrations } from "../../db/migrate";
+import * as schema from "../../db/schema";
+import { seedEverything } from "../../db/seed";
+import { quoteTotals, type StoredQuote } from "../../model/quote";
 import { confirmEmail, DEMO, Http, signIn, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
 import { insertExampleStudy, jobBody, me } from "./jobs-support";
 
@@ -296,4 +305,50 @@ describe("a job's quote", () => {
     const fresh = await jobOf(customer, job.id);
     expect((await customer.post(`/api/v1/consult/${job.id}/approve`, { quoteFingerprint: fresh.quote?.fingerprint })).status).toBe(200);
   });
+});
+
+describe("the demo's jobs", () => {
+  it("carry a quote once planned (kit, gaskets and parts, machining, tax, deposit), approved ones keep it as approved, and a second seed writes nothing", async () => {
+    // A database of its own: the shared test database has the demo shop but not its library and jobs.
+    const dir = mkdtempSync(join(tmpdir(), "borewright-quote-seed-"));
+    const url = `file:${join(dir, "seed.db")}`;
+    const client = createClient({ url });
+    try {
+      await applyMigrations({ ...process.env, DATABASE_URL: url });
+      const db = drizzle(client, { schema });
+      expect(await seedEverything(db)).toBeGreaterThan(0);
+      const rows = await client.execute("select id, status, quote_json, approved_quote_json, deposit_amount from job where id like 'demo-job-%' order by id");
+      const byId = new Map(rows.rows.map((r) => [String(r.id), r]));
+      expect(byId.get("demo-job-intake")?.quote_json).toBeNull();
+
+      const planned = byId.get("demo-job-planned")!;
+      const q = JSON.parse(String(planned.quote_json)) as StoredQuote;
+      const t = quoteTotals(q);
+      expect(t.lines.map((l) => l.kind)).toEqual(["kit", "part", "part", "machining"]);
+      // The demo's chosen kit is priced 289.00 EUR in the demo library (db/seed-library.ts).
+      expect(t.lines[0].amount).toEqual({ amountMinor: 28_900, currency: "EUR" });
+      // 289.00 + 2 × 12.50 + 8.40 + 1.5 h × 60.00 = 289.00 + 25.00 + 8.40 + 90.00 = 412.40
+      expect(t.subtotal.amountMinor).toBe(41_240);
+      // tax 20 % of 412.40 = 82.48; total 494.88; deposit 30 % of 494.88 = 148.464 → 148.46
+      expect(t.tax.amountMinor).toBe(8248);
+      expect(t.total.amountMinor).toBe(49_488);
+      expect(t.deposit.amountMinor).toBe(14_846);
+      expect(Number(planned.deposit_amount)).toBe(14_846);
+      expect(planned.approved_quote_json).toBeNull();
+
+      for (const id of ["demo-job-approved", "demo-job-machined", "demo-job-verified", "demo-job-closed"]) {
+        const r = byId.get(id)!;
+        expect(r.approved_quote_json, id).toBe(r.quote_json);
+        expect(Number(r.deposit_amount), id).toBe(14_846);
+      }
+      const paid = await client.execute("select amount from job_payment where job_id = 'demo-job-approved'");
+      expect(Number(paid.rows[0].amount)).toBe(14_846);
+
+      // Only missing rows are seeded: the second run changes nothing.
+      expect(await seedEverything(db)).toBe(0);
+    } finally {
+      client.close();
+      rmSync(dir, { recursive: true, force: true });
+    }
+  }, 60_000);
 });
