@@ -8,7 +8,8 @@
 // - the bare floor: a node:http handler (a child process) that reads the same rows through the same data
 //   layer and libSQL client, without the framework and the session check.
 // Prints requests/s, p50 and p99 of each, and the app's share of each floor. A benchmark, not a test: it
-// reports, and fails only when a request fails. `--cpu-prof DIR` writes the app server's CPU profile there.
+// reports timeouts, refused connections and non-2xx answers as figures, and exits non-zero only when the
+// server fails: an answer 5xx, or no answer at all to a single warm-up request. `--cpu-prof DIR` writes the app server's CPU profile there.
 //
 // Run with tsx's react-server condition (the data layer is server-only):
 //   tsx --conditions=react-server scripts/bench-api.ts
@@ -66,7 +67,19 @@ async function bareServer(port: number) {
 
 // ── The run ──────────────────────────────────────────────────────────────────────────────────────
 
-type Figures = { requestsPerSecond: number; p99Ms: number; p50Ms: number; non2xx: number; errors: number; cpuMsPerRequest: number | null };
+type Figures = {
+  requestsPerSecond: number;
+  p99Ms: number;
+  p50Ms: number;
+  non2xx: number;
+  /** Answers 5xx: the server failed. */
+  serverErrors: number;
+  /** Requests with no answer within autocannon's timeout (a loaded machine). */
+  timeouts: number;
+  /** Connection errors other than timeouts. */
+  errors: number;
+  cpuMsPerRequest: number | null;
+};
 
 /**
  * The CPU time a process and its descendants have used, in ms (Linux /proc; null elsewhere). On a shared
@@ -98,7 +111,9 @@ async function load(url: string, headers: Record<string, string>, connections: n
     p99Ms: r.latency.p99,
     p50Ms: r.latency.p50,
     non2xx: r.non2xx,
-    errors: r.errors + r.timeouts,
+    serverErrors: r["5xx"],
+    timeouts: r.timeouts,
+    errors: Math.max(0, r.errors - r.timeouts),
     cpuMsPerRequest: before !== null && after !== null && answered > 0 ? (after - before) / answered : null,
   };
 }
@@ -106,6 +121,12 @@ async function load(url: string, headers: Record<string, string>, connections: n
 function textArg(name: string): string | null {
   const i = process.argv.indexOf(`--${name}`);
   return i >= 0 && process.argv[i + 1] && !process.argv[i + 1].startsWith("--") ? process.argv[i + 1] : null;
+}
+
+/** The tail of a quiet server's output, to read beside a failure. */
+function serverLog(server: ChildProcess): string {
+  const log = (server as ChildProcess & { log?: () => string }).log?.();
+  return log ? `\nThe server said:\n${log.slice(-4000)}` : "";
 }
 
 const percent = (part: number, whole: number) => `${((part / Math.max(1, whole)) * 100).toFixed(0)} %`;
@@ -174,7 +195,7 @@ async function main() {
     const texts: Record<string, string> = {};
     for (const r of routes) {
       const res = await fetch(`${base}${r.path}`, { headers });
-      if (res.status !== 200) throw new Error(`${r.path} answered ${res.status}: ${await res.text()}`);
+      if (res.status !== 200) throw new Error(`${r.path} answered ${res.status}: ${await res.text()}${serverLog(server)}`);
       texts[r.floor.split("/").pop() as string] = await res.text();
     }
     writeFileSync(floorFile, JSON.stringify(texts));
@@ -189,7 +210,17 @@ async function main() {
     const bareBase = `http://127.0.0.1:${barePort}`;
     await waitFor(`${bareBase}/`, 30_000, bare);
 
-    // A short warm-up of each, so the first compilations are not measured.
+    // One request to each must be answered, and not with a 5xx; then a short warm-up of each, so the first
+    // compilations are not measured.
+    for (const r of routes) {
+      for (const url of [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`]) {
+        const res = await fetch(url, { headers, signal: AbortSignal.timeout(60_000) }).catch((e: unknown) => {
+          throw new Error(`${url} did not answer a single warm-up request: ${e instanceof Error ? e.message : String(e)}`);
+        });
+        if (res.status >= 500) throw new Error(`${url} answered a warm-up request with ${res.status}: ${await res.text()}`);
+        await res.arrayBuffer();
+      }
+    }
     for (const r of routes) {
       for (const url of [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`]) await autocannon({ url, headers, connections: 4, amount: 200 });
     }
@@ -210,9 +241,9 @@ async function main() {
       const cells = [r.app, r.floor, r.bare].flatMap((f) => [String(f.requestsPerSecond).padStart(12), `${f.p50Ms} ms`.padStart(10), `${f.p99Ms} ms`.padStart(10)]);
       console.log(r.name.padEnd(16) + cells.join("") + percent(r.app.requestsPerSecond, r.floor.requestsPerSecond).padStart(10) + percent(r.app.requestsPerSecond, r.bare.requestsPerSecond).padStart(10));
       for (const [what, f] of [["app", r.app], ["floor", r.floor], ["bare", r.bare]] as const) {
-        if (f.non2xx || f.errors) {
-          failed = true;
-          console.error(`  ${r.name}, ${what}: ${f.non2xx} non-2xx, ${f.errors} errors or timeouts`);
+        if (f.serverErrors) failed = true;
+        if (f.non2xx || f.timeouts || f.errors) {
+          console.log(`  ${r.name}, ${what}: ${f.non2xx} non-2xx (${f.serverErrors} 5xx), ${f.timeouts} timeouts, ${f.errors} connection errors`);
         }
       }
     }
@@ -228,7 +259,10 @@ async function main() {
     console.log("Aim: at least 80 % of the framework floor for both routes (app/floor: requests/s, and the floor's CPU time over the app's); list studies p99 at most 100 ms.");
     mkdirSync(join(root, "bench-results"), { recursive: true });
     writeFileSync(join(root, "bench-results", "api.json"), `${JSON.stringify({ at: new Date().toISOString(), seconds, connections, rows }, null, 2)}\n`);
-    if (failed) process.exitCode = 1;
+    if (failed) {
+      console.error("The server answered 5xx under load: see the figures above.");
+      process.exitCode = 1;
+    }
   } finally {
     await stop();
   }
