@@ -35,7 +35,7 @@ export function Field({ label, name, error, hint, unit, id, ...input }: FieldPro
 
 /** A message above a form: what went wrong as a whole, or that it worked. */
 export function FormNotice({ tone, children }: { tone: "error" | "ok"; children: ReactNode }) {
-  const cls = tone === "error" ? "border-interfere bg-interfere-soft" : "border-clear bg-clear-soft";
+  const cls = tone === "error" ? "border-error bg-paper-2" : "border-success bg-paper-2";
   return (
     <div role={tone === "error" ? "alert" : "status"} className={`rounded-md border-l-4 px-4 py-3 text-sm ${cls}`}>
       {children}

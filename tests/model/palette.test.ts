@@ -67,7 +67,7 @@ describe("contrast of every pair that carries text (WCAG 2.1 AA)", () => {
 
     it(`${t}: the ink, the accent's links, a button's label and a caution read at 4.5:1 or more`, () => {
       for (const g of GROUNDS) {
-        for (const ink of ["ink", "ink-2", "ink-3", "accent", "caution"] as const) {
+        for (const ink of ["ink", "ink-2", "ink-3", "accent", "caution", "success", "error"] as const) {
           expect(contrast(SURFACE[ink][t], SURFACE[g][t]), `${ink} on ${g}`).toBeGreaterThanOrEqual(AA_TEXT);
         }
       }

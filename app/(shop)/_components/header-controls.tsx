@@ -48,7 +48,7 @@ export function HeaderControls({ shops, activeShopId, units }: { shops: Shop[]; 
         Sign out
       </button>
       {problem ? (
-        <span role="alert" className="text-interfere">
+        <span role="alert" className="text-error">
           {problem}
         </span>
       ) : null}

@@ -18,7 +18,7 @@ export default async function HomePage({ searchParams }: { searchParams: Promise
   ];
   return (
     <div className="flex flex-col gap-8">
-      {verified ? <p className="rounded-md border-l-4 border-clear bg-clear-soft px-4 py-3 text-sm">Your e-mail address is confirmed.</p> : null}
+      {verified ? <p className="rounded-md border-l-4 border-success bg-paper-2 px-4 py-3 text-sm">Your e-mail address is confirmed.</p> : null}
       <div>
         <h1 className="text-3xl font-semibold">Workbench</h1>
         <p className="mt-2 max-w-prose text-ink-2">

@@ -7,8 +7,8 @@ import type { Traced, TracedPoints } from "./trace-shapes";
 // rectangle they stand for), the studs, and each outline, in the warning colour while it is not valid.
 
 const OK = "var(--color-accent)";
-const BAD = "var(--color-interfere)";
-const REF = "var(--color-tight)";
+const BAD = "var(--color-error)";
+const REF = "var(--color-accent)";
 
 type Sizes = { r: number; stroke: number };
 

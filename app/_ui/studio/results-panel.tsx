@@ -85,7 +85,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, mouth
         </p>
       </div>
       {problems.length > 0 && (
-        <ul className="list-disc pl-5 text-interfere">
+        <ul className="list-disc pl-5 text-verdict-cannot">
           {problems.map((r) => (
             <li key={r}>{REASON_TEXT[r]}</li>
           ))}

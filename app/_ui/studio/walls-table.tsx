@@ -20,7 +20,7 @@ export function WallsTable({ walls, units }: { walls: WallResult[]; units: Lengt
       <tbody>
         {walls.map((w) => {
           const broken = w.minWallMm < 0;
-          const state = !w.reached ? ["not reached", "text-ink-3"] : w.ok ? ["ok", "text-clear"] : broken ? ["breaks through", "text-interfere"] : ["too thin", "text-tight"];
+          const state = !w.reached ? ["not reached", "text-ink-3"] : w.ok ? ["ok", "text-ink-2"] : broken ? ["breaks through", "text-wall-low font-semibold"] : ["too thin", "text-wall-low"];
           return (
             <tr key={`${w.kind}-${w.label}`} className="border-t border-rule">
               <td className="py-1">

@@ -21,7 +21,7 @@ export function RowActions({
       </button>
       <button
         type="button"
-        className="btn-quiet text-interfere"
+        className="btn-quiet text-error"
         disabled={busy}
         onClick={() => {
           if (window.confirm(`Delete “${row.name}” for good? Archiving keeps it out of the way and can be undone.`)) onDelete();

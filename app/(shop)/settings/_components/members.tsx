@@ -80,7 +80,7 @@ export function InvitationRow({ id, email, role, expires }: { id: string; email:
         {email} · {role} · <span className="text-ink-2">until <span className="num">{expires}</span></span>
       </span>
       <span className="flex items-center gap-2">
-        {problem ? <span className="text-interfere">{problem}</span> : null}
+        {problem ? <span className="text-error">{problem}</span> : null}
         <button type="button" className="btn-quiet" disabled={busy} onClick={() => run("/api/auth/organization/cancel-invitation", { invitationId: id })}>
           Withdraw
         </button>
@@ -93,7 +93,7 @@ export function MemberActions({ memberId, name }: { memberId: string; name: stri
   const { problem, busy, run } = useAction();
   return (
     <span className="flex items-center justify-end gap-2">
-      {problem ? <span className="text-interfere">{problem}</span> : null}
+      {problem ? <span className="text-error">{problem}</span> : null}
       <button
         type="button"
         className="btn-quiet"

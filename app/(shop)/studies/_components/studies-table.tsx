@@ -47,7 +47,7 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
           id: "choice",
           header: "Choice made",
           enableSorting: false,
-          cell: ({ row }) => (row.original.chosenKitId ? <span className="text-clear">✓ yes</span> : <span className="text-ink-3">not yet</span>),
+          cell: ({ row }) => (row.original.chosenKitId ? <span className="text-success">✓ yes</span> : <span className="text-ink-3">not yet</span>),
         }),
         h.accessor("updatedAt", {
           id: "updatedAt",

@@ -92,7 +92,7 @@ export function CaseTrial({ store }: { store: ShapeStore }) {
         <ul className="flex flex-col gap-2" data-testid="case-trial">
           {results.map((t) => (
             <li key={t.name} className="text-sm">
-              <span className="font-medium">{t.name}</span>: <span className={t.ok ? "text-ink" : "text-interfere"}>{t.text}</span>
+              <span className="font-medium">{t.name}</span>: <span className={t.ok ? "text-ink" : "text-verdict-cannot"}>{t.text}</span>
               {t.wall ? <span className="block text-ink-2 num">{t.wall}</span> : null}
             </li>
           ))}

@@ -14,7 +14,7 @@ export function ConflictBanner({ message, onOverwrite, onReload }: { message: st
     }
   };
   return (
-    <div role="alert" data-testid="conflict" className="flex flex-col gap-2 rounded-md border-l-4 border-interfere bg-interfere-soft px-4 py-3 text-sm">
+    <div role="alert" data-testid="conflict" className="flex flex-col gap-2 rounded-md border-l-4 border-error bg-paper-2 px-4 py-3 text-sm">
       <p className="font-semibold">Someone else changed this study.</p>
       <p>{message}</p>
       <div className="flex flex-wrap gap-2">

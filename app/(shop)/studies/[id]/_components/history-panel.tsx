@@ -13,7 +13,7 @@ export function HistoryPanel({ id }: { id: string }) {
   return (
     <section className="card flex flex-col gap-2 p-4" aria-label="History">
       <h2 className="font-semibold">History</h2>
-      {history.isError ? <p className="text-sm text-interfere">The history could not be loaded: {errorText(history.error)}</p> : null}
+      {history.isError ? <p className="text-sm text-error">The history could not be loaded: {errorText(history.error)}</p> : null}
       {items.length === 0 && !history.isPending ? <p className="text-sm text-ink-2">No changes yet.</p> : null}
       <ol className="flex max-h-72 flex-col gap-1 overflow-auto text-sm" data-testid="history">
         {items.map((h, i) => (

@@ -77,7 +77,7 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
           cell: ({ row }) => {
             const w = row.original.kit.thinnestWall;
             if (!w) return <span className="text-ink-3">no cut</span>;
-            const cls = w.minWallMm < 0 ? "text-interfere" : w.ok ? "text-clear" : "text-tight";
+            const cls = w.minWallMm < 0 ? "text-wall-low font-semibold" : w.ok ? "text-ink" : "text-wall-low";
             return (
               <span data-testid="thinnest-wall">
                 <span className={`num ${cls}`}>{lengthLabel(w.minWallMm, units)}</span> <span className="text-ink-2">{row.original.thinnestWhere}</span>
@@ -89,7 +89,7 @@ export function LineupTable({ rows, units, chosen, onChoose }: { rows: LineupRow
           id: "rig",
           header: "Rig",
           cell: ({ row }) => (
-            <span className={row.original.rigOk === false ? "text-interfere" : row.original.rigOk ? "text-clear" : "text-ink-2"}>{row.original.rigText}</span>
+            <span className={row.original.rigOk === false ? "text-error" : row.original.rigOk ? "text-success" : "text-ink-2"}>{row.original.rigText}</span>
           ),
         }),
         h.accessor((r) => r.kit.displacementCc.kit, {

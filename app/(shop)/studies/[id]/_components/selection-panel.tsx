@@ -39,7 +39,7 @@ export function SelectionPanel({ kitNames }: { kitNames: Record<string, string> 
               </span>
               <button
                 type="button"
-                className="text-sm text-interfere disabled:opacity-40"
+                className="text-sm text-error disabled:opacity-40"
                 disabled={kitIds.length <= 1}
                 title={kitIds.length <= 1 ? "A study keeps at least one kit" : undefined}
                 onClick={() => {
