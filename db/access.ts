@@ -1,7 +1,7 @@
 import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { headers } from "next/headers";
-import { sessionOf } from "./auth";
+import { sessionAndShopOf, sessionOf } from "./auth";
 import { getDb } from "./client";
 import { isRole, type Role } from "./roles";
 import * as schema from "./schema";
@@ -37,21 +37,11 @@ export async function getSessionUser() {
   return session ?? null;
 }
 
-/** The caller in their active shop, or null when signed out or in no shop. */
+/** The caller in their active shop (else their first), or null when signed out or in no shop. */
 export async function getCaller(): Promise<Caller | null> {
-  const session = await getSessionUser();
-  if (!session) return null;
-  const db = await getDb();
-  const activeId = session.session.activeOrganizationId;
-  const memberships = await db
-    .select({ role: schema.member.role, shopId: schema.organization.id, shopName: schema.organization.name })
-    .from(schema.member)
-    .innerJoin(schema.organization, eq(schema.member.organizationId, schema.organization.id))
-    .where(eq(schema.member.userId, session.user.id))
-    .orderBy(asc(schema.member.createdAt));
-  // The active shop when the person still belongs to it, else their first.
-  const rows = [memberships.find((m) => m.shopId === activeId) ?? memberships[0]].filter((m) => m !== undefined);
-  const membership = rows[0];
+  const found = await sessionAndShopOf(await headers());
+  if (!found) return null;
+  const { session, membership } = found;
   if (!membership || !isRole(membership.role)) return null;
   const units = (session.user as { units?: string }).units === "in" ? "in" : "mm";
   return {

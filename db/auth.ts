@@ -4,7 +4,8 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { APIError } from "better-auth/api";
 import { organization } from "better-auth/plugins";
-import { and, asc, eq, isNull, sql } from "drizzle-orm";
+import { and, asc, eq, isNull, sql, type Placeholder, type SQL } from "drizzle-orm";
+import { alias, type SQLiteColumn } from "drizzle-orm/sqlite-core";
 import { PersonNameSchema } from "@/model/names";
 import { CLIENT_ADDRESS_HEADER, VerifiedCookies, cookieValue, refreshDue } from "./auth-guard";
 import { dbSync } from "./client";
@@ -153,31 +154,87 @@ export const auth = betterAuth({
 export type Session = typeof auth.$Infer.Session;
 
 const verifiedCookies = new VerifiedCookies();
+
+/** A person's shop and role in it, as read for a request. */
+export type Membership = { role: string; shopId: string; shopName: string };
+
+// The shop a request acts in: the session's active shop while the person still belongs to it, else the
+// shop they joined first. Two keyed subqueries (SQLite lets a subquery's WHERE, not its ORDER BY, name the
+// outer row), so the same choice is made inside the session's own read.
+const chosenMember = alias(schema.member, "chosen_member");
+const chosenShop = alias(schema.organization, "chosen_shop");
+type Operand = SQL | SQLiteColumn | Placeholder;
+function memberIdIn(userId: Operand, shopId: Operand | null) {
+  return dbSync()
+    .select({ id: chosenMember.id })
+    .from(chosenMember)
+    .innerJoin(chosenShop, eq(chosenShop.id, chosenMember.organizationId))
+    .where(shopId === null ? eq(chosenMember.userId, userId) : and(eq(chosenMember.userId, userId), eq(chosenMember.organizationId, shopId)))
+    .orderBy(asc(chosenMember.createdAt), asc(chosenMember.id))
+    .limit(1);
+}
+function chosenMemberId(userId: Operand, activeShopId: Operand) {
+  return sql`coalesce((${memberIdIn(userId, activeShopId)}), (${memberIdIn(userId, null)}))`;
+}
+
+const membershipColumns = { role: schema.member.role, shopId: schema.organization.id, shopName: schema.organization.name };
+
+/** The session row, its user and the chosen membership in one statement. */
 const sessionByToken = dbSync()
-  .select({ session: schema.session, user: schema.user })
+  .select({ session: schema.session, user: schema.user, membership: membershipColumns })
   .from(schema.session)
   .innerJoin(schema.user, eq(schema.user.id, schema.session.userId))
+  .leftJoin(schema.member, eq(schema.member.id, chosenMemberId(schema.session.userId, schema.session.activeOrganizationId)))
+  .leftJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
   .where(eq(schema.session.token, sql.placeholder("token")))
   .limit(1)
   .prepare();
 
+/** The chosen membership alone, for a session the library answered. */
+const membershipOfUser = dbSync()
+  .select(membershipColumns)
+  .from(schema.member)
+  .innerJoin(schema.organization, eq(schema.organization.id, schema.member.organizationId))
+  .where(eq(schema.member.id, chosenMemberId(sql.placeholder("userId"), sql.placeholder("activeShopId"))))
+  .limit(1)
+  .prepare();
+
+type Found = { session: Session; membership: Membership | null };
+
 /**
- * The signed-in person of a request, or null: the library's getSession, except that a cookie whose
- * signature the library already accepted in this process is answered by one read of the session row and
- * its user. A session that is gone, expired or due for the library's refresh goes to the library again.
+ * The session of a request and the shop it acts in, or null: the library's getSession, except that a
+ * cookie whose signature the library already accepted in this process is answered by one read of the
+ * session row, its user and the membership. A session that is gone, expired or due for the library's
+ * refresh goes to the library again (and its membership is read after it).
  */
-export async function sessionOf(headers: Headers): Promise<Session | null> {
+async function lookUp(headers: Headers): Promise<{ session: Session; membership?: Membership | null } | null> {
   const name = (await auth.$context).authCookies.sessionToken.name;
   const cookie = cookieValue(headers.get("cookie"), name);
   const token = cookie === null ? undefined : verifiedCookies.tokenOf(cookie);
   if (cookie !== null && token !== undefined) {
     const [found] = await sessionByToken.execute({ token });
     if (found && found.session.expiresAt.getTime() > Date.now() && !refreshDue(found.session.expiresAt, SESSION_EXPIRES_IN_S, SESSION_UPDATE_AGE_S)) {
-      return found as Session;
+      const { membership, ...session } = found;
+      const { role, shopId, shopName } = membership ?? {};
+      return { session: session as Session, membership: role && shopId && shopName !== null && shopName !== undefined ? { role, shopId, shopName } : null };
     }
     verifiedCookies.forget(cookie);
   }
   const session = await auth.api.getSession({ headers });
   if (session && cookie !== null) verifiedCookies.remember(cookie, session.session.token);
-  return session;
+  return session ? { session } : null;
+}
+
+/** The signed-in person of a request, or null. */
+export async function sessionOf(headers: Headers): Promise<Session | null> {
+  return (await lookUp(headers))?.session ?? null;
+}
+
+/** The signed-in person of a request and the membership of the shop the request acts in (null when in none). */
+export async function sessionAndShopOf(headers: Headers): Promise<Found | null> {
+  const found = await lookUp(headers);
+  if (!found) return null;
+  if (found.membership !== undefined) return { session: found.session, membership: found.membership };
+  const [membership] = await membershipOfUser.execute({ userId: found.session.user.id, activeShopId: found.session.session.activeOrganizationId ?? null });
+  return { session: found.session, membership: membership ?? null };
 }

@@ -1,6 +1,7 @@
 // The session lookup on every request: a cookie the server has already verified is answered from the
 // session row, so a session ended by sign-out, by revoking it from another device, or by deleting its row
-// (as another server process would) is refused on the very next request. Also: the benchmark's framework
+// (as another server process would) is refused on the very next request; the membership read with it
+// follows a role lowered, a shop switched or a membership ended on the very next request too. Also: the benchmark's framework
 // floor does not exist on a server started without its flag, and the studies list reads its page, kits
 // and total in one statement, past the last page included.
 import { describe, expect, it } from "vitest";
@@ -62,6 +63,51 @@ describe("a verified session cookie", () => {
     forged.cookies.set(name!, encodeURIComponent(`${token}.${"A".repeat(43)}=`));
     expect((await forged.get("/api/v1/me")).status).toBe(401);
     expect((await http.get("/api/v1/me")).status).toBe(200);
+  });
+});
+
+/** Runs statements against the server's database behind its back, as another server process would. */
+async function behindTheServer(statements: { sql: string; args: string[] }[]): Promise<void> {
+  const db = testDb();
+  try {
+    for (const statement of statements) await db.execute(statement);
+  } finally {
+    db.close();
+  }
+}
+
+type Me = { me: { shopId: string; shopName: string; role: string } };
+
+describe("the membership read with a verified session cookie", () => {
+  it("follows a role lowered behind the server's back on the very next request", async () => {
+    const email = uniqueEmail("lookup-role");
+    const http = await signUp("Role Lowered", email);
+    expect((await http.get("/api/v1/studies")).status).toBe(200);
+    expect((await http.get("/api/v1/studies")).status).toBe(200);
+    await behindTheServer([{ sql: "update member set role = 'customer' where user_id = (select id from user where email = ?)", args: [email] }]);
+    const refused = await http.get("/api/v1/studies");
+    expect(refused.status).toBe(403);
+    expect(refused.json).toMatchObject({ error: { code: "forbidden" } });
+    expect(ok<Me>(await http.get("/api/v1/me")).me.role).toBe("customer");
+  });
+
+  it("acts in the active shop while the person belongs to it, in their first shop once they leave it, and in none after", async () => {
+    const email = uniqueEmail("lookup-shops");
+    const http = await signUp("Two Shops", email);
+    const first = ok<Me>(await http.get("/api/v1/me")).me;
+    expect(first.role).toBe("owner");
+    const second = { id: `lookup-shop-${first.shopId}`, name: `Second shop of ${email}` };
+    await behindTheServer([
+      { sql: "insert into organization (id, name, slug) values (?, ?, ?)", args: [second.id, second.name, second.id] },
+      { sql: "insert into member (id, organization_id, user_id, role) values (?, ?, (select id from user where email = ?), 'builder')", args: [`${second.id}-m`, second.id, email] },
+      { sql: "update session set active_organization_id = ? where user_id = (select id from user where email = ?)", args: [second.id, email] },
+    ]);
+    expect(ok<Me>(await http.get("/api/v1/me")).me).toMatchObject({ shopId: second.id, shopName: second.name, role: "builder" });
+    await behindTheServer([{ sql: "delete from member where id = ?", args: [`${second.id}-m`] }]);
+    expect(ok<Me>(await http.get("/api/v1/me")).me).toMatchObject({ shopId: first.shopId, role: "owner" });
+    await behindTheServer([{ sql: "delete from member where user_id = (select id from user where email = ?)", args: [email] }]);
+    expect((await http.get("/api/v1/studies")).status).toBe(401);
+    expect((await http.get("/api/v1/me")).status).toBe(401);
   });
 });
 
