@@ -210,20 +210,23 @@ export async function evaluateStoredStudy(shopId: string, id: string): Promise<{
 const RESULTS_KEPT = 500;
 const resultsCache = new Map<string, { fingerprint: string; body: string }>();
 
-/** The versions a study's results depend on, in one query; null when the study is not the shop's. */
+/**
+ * The versions a study's results depend on, as one text made by one statement whose text never changes:
+ * the study's, its case's, its rig's, the shop settings' and each kit's id and version in the study's order.
+ * No row is read but by its key; null when the study is not the shop's.
+ */
+const FINGERPRINT_SQL = `select s.version || '|' || c.version || '|' || ifnull(r.version, 0) || '|' || ifnull(ss.version, 0) || '|' ||
+    ifnull((select group_concat(sk.kit_id || ':' || k.version, ',' order by sk.position)
+      from study_kit sk join cylinder_kit k on k.id = sk.kit_id where sk.study_id = s.id), '') as fingerprint
+  from study s join case_profile c on c.id = s.case_id left join boring_rig r on r.id = s.rig_id
+    left join shop_settings ss on ss.organization_id = s.organization_id
+  where s.id = ? and s.organization_id = ?`;
+
 async function resultsFingerprint(shopId: string, id: string): Promise<string | null> {
   const client = await getClient();
-  const r = await client.execute({
-    sql: `select s.version as sv, c.version as cv, ifnull(r.version, 0) as rv, ifnull(ss.version, 0) as setv,
-            (select group_concat(k.id || ':' || k.version, ',') from (select k.id, k.version from study_kit sk join cylinder_kit k on k.id = sk.kit_id
-              where sk.study_id = s.id order by sk.position) k) as kv
-          from study s join case_profile c on c.id = s.case_id left join boring_rig r on r.id = s.rig_id
-            left join shop_settings ss on ss.organization_id = s.organization_id
-          where s.id = ? and s.organization_id = ?`,
-    args: [id, shopId],
-  });
-  const row = r.rows[0];
-  return row ? `${row.sv}|${row.cv}|${row.rv}|${row.setv}|${row.kv ?? ""}` : null;
+  const r = await client.execute({ sql: FINGERPRINT_SQL, args: [id, shopId] });
+  const fingerprint = r.rows[0]?.fingerprint;
+  return typeof fingerprint === "string" ? fingerprint : null;
 }
 
 /** The results as the JSON text the API answers, computed once per set of row versions. */
