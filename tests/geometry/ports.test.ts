@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { type StudyInput, evaluateStudy, lineSpans, portSteps } from "../../geometry/index";
+import { type StudyInput, evaluateStudy, lineSpans, matchedPassageReachMm, outlineCentroid, passageUnderPort, portSteps } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
 import { propertyRuns } from "./runs";
 
@@ -105,5 +105,115 @@ describe("the matched passage in the study result", { timeout: 60_000 }, () => {
     expect(k.ports[0].matchedWallMm).toBeNull();
     expect(k.ports[0].ok).toBeNull();
     expect(evaluateStudy(parse(roundStudyInput())).kits[0].ports).toEqual([]);
+  });
+});
+
+// Hand-computed plane geometry (no published source) for the building blocks, each on figures small enough to
+// check with pencil and paper.
+describe("the port overlay's building blocks", () => {
+  const circle = (centerMm: [number, number], diameterMm: number) => ({ kind: "circle" as const, centerMm, diameterMm });
+  const poly = (pointsMm: [number, number][]) => ({ kind: "polygon" as const, pointsMm });
+
+  it("the area centroid of a triangle is the mean of its corners, whichever way it is wound; a circle's is its centre", () => {
+    // Triangle (0,0) (6,0) (0,3): centroid ((0+6+0)/3, (0+0+3)/3) = (2, 1).
+    for (const t of [poly([[0, 0], [6, 0], [0, 3]]), poly([[0, 0], [0, 3], [6, 0]])]) {
+      const g = outlineCentroid(t);
+      expect(g[0]).toBeCloseTo(2, 12);
+      expect(g[1]).toBeCloseTo(1, 12);
+    }
+    // L-shape: square 0..4 × 0..4 less 2..4 × 2..4 (area 12) = rectangle 0..4 × 0..2 (area 8, centre (2,1)) plus
+    // 0..2 × 2..4 (area 4, centre (1,3)): centroid ((8·2 + 4·1)/12, (8·1 + 4·3)/12) = (5/3, 5/3).
+    const l = outlineCentroid(poly([[0, 0], [4, 0], [4, 2], [2, 2], [2, 4], [0, 4]]));
+    expect(l[0]).toBeCloseTo(5 / 3, 12);
+    expect(l[1]).toBeCloseTo(5 / 3, 12);
+    expect(outlineCentroid(circle([5, -3], 8))).toEqual([5, -3]);
+  });
+
+  it("a line's chord through a circle, a line that misses it and a tangent line", () => {
+    // Circle centre (3, 4), radius 5, the x axis from the origin: (x − 3)² + 16 = 25 → x = 0 and x = 6.
+    expect(lineSpans([0, 0], [1, 0], circle([3, 4], 10))).toEqual([{ from: 0, to: 6 }]);
+    // Along (0.6, 0.8) from the origin the line runs through the centre (at t = 5): the diameter, t = 0 … 10.
+    const [s] = lineSpans([0, 0], [0.6, 0.8], circle([3, 4], 10));
+    expect(s.from).toBeCloseTo(0, 12);
+    expect(s.to).toBeCloseTo(10, 12);
+    // The line y = 10 lies 6 mm from the centre (> 5): no chord; y = 9 touches it (5 mm): a tangent has no inside.
+    expect(lineSpans([0, 10], [1, 0], circle([3, 4], 10))).toEqual([]);
+    expect(lineSpans([0, 9], [1, 0], circle([3, 4], 10))).toEqual([]);
+  });
+
+  it("a line across a U-shaped polygon has two stretches, sorted along the line whichever way it runs", () => {
+    // U: 0..10 × 0..10 with the notch 3..7 × 3..10 open at the top.
+    const u = poly([[0, 0], [10, 0], [10, 10], [7, 10], [7, 3], [3, 3], [3, 10], [0, 10]]);
+    // y = 5 from (−2, 5) along +x crosses x = 0, 3, 7, 10 → t = 2, 5, 9, 12.
+    expect(lineSpans([-2, 5], [1, 0], u)).toEqual([{ from: 2, to: 5 }, { from: 9, to: 12 }]);
+    // x = 5 from (5, 1) along −y crosses y = 3 (t = −2) and y = 0 (t = 1): inside from −2 to 1.
+    expect(lineSpans([5, 1], [0, -1], u)).toEqual([{ from: -2, to: 1 }]);
+  });
+
+  // Port: circle centre g = (30, 40), radius 5, so |g| = 50, the radial line u = (0.6, 0.8) (53.1301° = atan(4/3))
+  // and the square line v = (−0.8, 0.6); the port's stretch on both is t = −5 … 5.
+  const port = circle([30, 40], 10);
+  const at = (a: number, b: number): [number, number] => [30 + 0.6 * a - 0.8 * b, 40 + 0.8 * a + 0.6 * b]; // g + a·u + b·v
+
+  it("steps to a round passage off the port's centre along both section lines", () => {
+    // Passage radius 4 centred at g + 1·u + 0.5·v. Radial line: foot at t = 1, off the line 0.5 → half chord
+    // √(16 − 0.25) = √15.75; stretch 1 ∓ √15.75. Square line: foot at t = 0.5, off 1 → half chord √15.
+    const o = portSteps(port, circle(at(1, 0.5), 8), 1e-9);
+    expect(o.centroidMm).toEqual([30, 40]);
+    expect(o.directionDeg).toBeCloseTo((Math.atan(4 / 3) * 180) / Math.PI, 9);
+    expect(o.steps.innerMm).toBeCloseTo(1 - Math.sqrt(15.75) + 5, 9); // q₁ − p₁ = 2.0314
+    expect(o.steps.outerMm).toBeCloseTo(5 - (1 + Math.sqrt(15.75)), 9); // p₂ − q₂ = 0.0314
+    expect(o.steps.cwMm).toBeCloseTo(0.5 - Math.sqrt(15) + 5, 9); // near (clockwise) side: 1.6270
+    expect(o.steps.ccwMm).toBeCloseTo(5 - (0.5 + Math.sqrt(15)), 9); // far (counter-clockwise) side: 0.6270
+  });
+
+  it("a passage that overlaps the port by less than the tolerance does not count", () => {
+    // Passage radius 5 centred 9.7 out along u: its stretch 4.7 … 14.7 overlaps the port's (to 5) by 0.3 mm.
+    expect(portSteps(port, circle(at(9.7, 0), 10), 0.5).steps).toEqual({ innerMm: null, outerMm: null, ccwMm: null, cwMm: null });
+    expect(portSteps(port, circle(at(-9.7, 0), 10), 0.5).steps.innerMm).toBeNull();
+    // Overlapping by 0.7 mm (> 0.5) it does: inner 4.3 − (−5) = 9.3, outer 5 − 14.3 = −9.3.
+    const s = portSteps(port, circle(at(9.3, 0), 10), 0.5).steps;
+    expect(s.innerMm).toBeCloseTo(9.3, 9);
+    expect(s.outerMm).toBeCloseTo(-9.3, 9);
+    expect(s.ccwMm).toBeNull(); // the square line through g lies 9.3 mm from its centre, beyond its radius
+    const n = portSteps(port, circle(at(-9.3, 0), 10), 0.5).steps;
+    expect(n.innerMm).toBeCloseTo(-14.3 + 5, 9);
+    expect(n.outerMm).toBeCloseTo(5 + 4.3, 9);
+  });
+
+  it("a port centred on the bore axis takes +x as its radial line", () => {
+    const o = portSteps(circle([0, 0], 10), circle([1, 0], 10), 1e-9);
+    expect(o.directionDeg).toBe(0);
+    expect(o.steps.innerMm).toBeCloseTo(1, 9); // passage −4 … 6 on the x axis, port −5 … 5
+    expect(o.steps.outerMm).toBeCloseTo(-1, 9);
+  });
+
+  it("the passage under a port: the one holding its centroid, else the nearest that overlaps it, else none", () => {
+    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d) });
+    const w = { label: "port", outline: port };
+    const far = pocket("far", [-30, -40], 10);
+    const holding = pocket("holding", at(1, 0), 6);
+    // Radius 2, 6 mm out along u: stretch 4 … 8 overlaps the port's; 4 mm from g to its edge.
+    const outward = pocket("outward", at(6, 0), 4);
+    // Radius 2, 6.5 mm in along u: stretch −8.5 … −4.5 overlaps; 4.5 mm from g.
+    const inward = pocket("inward", at(-6.5, 0), 4);
+    // Radius 2, 6 mm along v: only the square line meets it.
+    const beside = pocket("beside", at(0, 6), 4);
+    expect(passageUnderPort(w, [far, outward, holding], 1e-9)?.label).toBe("holding");
+    expect(passageUnderPort(w, [far, inward, outward], 1e-9)?.label).toBe("outward");
+    expect(passageUnderPort(w, [outward, inward], 1e-9)?.label).toBe("outward");
+    expect(passageUnderPort(w, [far, beside], 1e-9)?.label).toBe("beside");
+    expect(passageUnderPort(w, [far], 1e-9)).toBeNull();
+    // A pocket whose edge runs 0.5 mm short of g holds it within a 1 mm tolerance, not within 0.1 mm.
+    const short = pocket("short", at(3.5, 0), 6);
+    expect(passageUnderPort(w, [outward, short], 1)?.label).toBe("short");
+    expect(passageUnderPort(w, [inward, short], 0.1)?.label).toBe("short"); // nearer (0.5 mm) of two overlapping
+  });
+
+  it("the reach to a passage opened to the port is the nearer of the two", () => {
+    // From the origin: port edge 50 − 5 = 45 mm; passage centred (0, 20) radius 5: 15 mm; centred (0, 60): 55 mm.
+    expect(matchedPassageReachMm([0, 0], null, port, 1e-9)).toBeCloseTo(45, 12);
+    expect(matchedPassageReachMm([0, 0], circle([0, 20], 10), port, 1e-9)).toBeCloseTo(15, 12);
+    expect(matchedPassageReachMm([0, 0], circle([0, 60], 10), port, 1e-9)).toBeCloseTo(45, 12);
   });
 });
