@@ -29,8 +29,12 @@ const config = {
   ignorePatterns: ["data", "test-results", "bench-results", "reports", ".next*", "public/uploads"],
   concurrency: 1,
   dryRunTimeoutMinutes: 30,
-  timeoutMS: 60_000,
-  timeoutFactor: 3,
+  // A mutant's time limit is timeoutFactor × the net time of the tests that cover it (measured in the initial run,
+  // under the same load) + timeoutMS + the runner's overhead. A mutant that turns a loop endless (a binary search's
+  // `lo < hi` → `lo <= hi`, a bound → `true` in geometry/depth-stop.ts) then ends as "Timeout" (counted as detected)
+  // after about ten seconds instead of a minute, and a test that is only slow still has twice its time and more.
+  timeoutMS: 10_000,
+  timeoutFactor: 2,
   coverageAnalysis: "perTest",
   reporters: ["clear-text", "progress", "html", "json"],
   htmlReporter: { fileName: "reports/mutation/index.html" },
