@@ -26,6 +26,13 @@ describe("a job in the browser, from the study to verified", () => {
     const shop = await newPerson(browser, { width: 1280, height: 900 });
     const bench = await shop.newPage();
     await signInThroughForm(bench, DEMO.builder.email, DEMO.builder.password);
+    // The study page shows the library's kit prices as money with their currency (289 and 349 EUR in the example), in the studio's kit switcher and the lineup.
+    await bench.goto(`/studies/${studyId}`);
+    const kitOnShow = bench.getByRole("group", { name: "Kit on show" });
+    await expect.poll(() => kitOnShow.getByText(/price EUR\s289\.00/).count(), { timeout: 30_000 }).toBe(1);
+    expect(await kitOnShow.getByText(/price EUR\s349\.00/).count()).toBe(1);
+    await bench.getByRole("tab", { name: "Lineup" }).click();
+    await expect.poll(() => bench.getByTestId("lineup").getByText(/^EUR\s289\.00$/).count(), { timeout: 10_000 }).toBe(1);
     await bench.goto(`/jobs/new?studyId=${studyId}`);
     await bench.getByLabel("Title").fill("Harrow's 50 cc scooter, big bore");
     await bench.getByLabel("Customer's name").fill("Wren Calloway");
