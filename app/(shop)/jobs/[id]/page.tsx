@@ -114,7 +114,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
         <h2 className="text-xl font-semibold">Plan against actual</h2>
         {readings ? <PlanVsActual verification={readings.verification} at={readings.at} /> : <p className="text-ink-2">No after-cut readings yet.</p>}
         {job.verification?.override ? (
-          <p className="rounded-md border-l-4 border-interfere bg-interfere-soft px-4 py-2 text-sm" data-testid="verify-override">
+          <p className="rounded-md border-l-4 border-error bg-paper-2 px-4 py-2 text-sm" data-testid="verify-override">
             Verified although the readings are outside the plan, on {job.verification.override.by.name}&apos;s override ({dateText(job.verification.override.at, zone)}): {job.verification.override.reason}
           </p>
         ) : null}

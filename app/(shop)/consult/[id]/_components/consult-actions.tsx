@@ -78,7 +78,7 @@ export function ConsultActions({ job, checkout, zone }: { job: JobView; checkout
           <span className="text-ink-2">By card, on the payment service&apos;s secure page.</span>
         </div>
       ) : job.deposit.paid ? (
-        <p className="text-lg text-clear" data-testid="deposit-paid">Deposit paid. Thank you.</p>
+        <p className="text-lg text-success" data-testid="deposit-paid">Deposit paid. Thank you.</p>
       ) : null}
       <form onSubmit={ask} className="flex flex-col gap-2" noValidate>
         <label htmlFor="consult-question" className="field-label">Ask the shop a question</label>

@@ -88,7 +88,7 @@ export function Photos({ jobId, canEdit, initial }: { jobId: string; canEdit: bo
   return (
     <section className="flex flex-col gap-3" aria-label="Photos">
       <h2 className="text-xl font-semibold">Photos</h2>
-      {initial === null ? <p className="text-sm text-interfere">Photo storage is not available on this server right now.</p> : null}
+      {initial === null ? <p className="text-sm text-error">Photo storage is not available on this server right now.</p> : null}
       {ready.length === 0 ? <p className="text-sm text-ink-2">{canEdit ? "No photos yet. Add the case before and after the cut, the readings and the trial fit." : "The shop has shared no photos yet."}</p> : null}
       <ul className="grid grid-cols-2 gap-3 sm:grid-cols-4 lg:grid-cols-6" data-testid="photo-grid">
         {ready.map((p) => (
@@ -111,7 +111,7 @@ export function Photos({ jobId, canEdit, initial }: { jobId: string; canEdit: bo
         ))}
       </ul>
       {canEdit && refused.length ? (
-        <ul className="text-sm text-interfere">
+        <ul className="text-sm text-error">
           {refused.map((p) => (
             <li key={p.id}>A file was refused: {p.refusedReason}</li>
           ))}

@@ -2,14 +2,14 @@ import type { Verification } from "@/db/verification";
 import { shopTimeZone } from "@/db/settings";
 import { dateTimeText } from "@/model/dates";
 
-const STATE = { ok: ["within", "text-clear"], fail: ["outside", "text-interfere"], missing: ["missing", "text-tight"] } as const;
+const STATE = { ok: ["within", "text-success"], fail: ["outside", "text-error"], missing: ["missing", "text-caution"] } as const;
 
 /** The after-cut readings beside the plan, line by line, with by how much a line is outside. */
 export function PlanVsActual({ verification, at }: { verification: Verification; at: string }) {
   const verdict = verification.verdict;
   return (
     <div className="flex flex-col gap-2">
-      <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-clear bg-clear-soft" : verdict === "fail" ? "border-interfere bg-interfere-soft" : "border-tight bg-tight-soft"}`} data-testid="verdict">
+      <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-success bg-paper-2" : verdict === "fail" ? "border-error bg-paper-2" : "border-caution bg-caution-soft"}`} data-testid="verdict">
         {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {dateTimeText(at, shopTimeZone())}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
       </p>
       <div className="card relative overflow-x-auto">
