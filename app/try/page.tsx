@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { evaluateStudy, safeParseStudy } from "@/geometry";
+import example from "@/public/examples/study.json";
 import { Mark } from "../_ui/mark";
 import { TryStudio } from "./try-studio";
 
@@ -8,8 +10,16 @@ export const metadata: Metadata = {
   description: "An example case and two big-bore kits in the fit studio: drag the cut and watch the skirt clear.",
 };
 
-/** A public page: the fit studio on the example study, no account needed. */
+/** The example study (the same file the site serves at /examples/study.json), read and evaluated on the server. */
+function exampleFit() {
+  const parsed = safeParseStudy(example);
+  if (!parsed.ok) return { error: `The example study could not be read: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}` };
+  return { study: parsed.study, result: evaluateStudy(parsed.study) };
+}
+
+/** A public page: the fit studio on the example study, no account needed; the plan and the figures are in the first HTML. */
 export default function TryPage() {
+  const fit = exampleFit();
   return (
     <div className="mx-auto flex max-w-[96rem] flex-col gap-4 px-4 py-6">
       <header className="flex flex-wrap items-center justify-between gap-3">
@@ -29,7 +39,13 @@ export default function TryPage() {
             Nothing here is saved.
           </p>
         </div>
-        <TryStudio />
+        {"error" in fit ? (
+          <p className="field-error" role="alert">
+            {fit.error}
+          </p>
+        ) : (
+          <TryStudio study={fit.study} result={fit.result} />
+        )}
       </main>
     </div>
   );
