@@ -16,6 +16,7 @@ const arc = (r: number, from: number, to: number) =>
   });
 const slot = { kind: "polygon" as const, pointsMm: [...arc(30, -15, 15), ...arc(36, 15, -15)] };
 const port = { kind: "polygon" as const, pointsMm: [[29, -10], [35, -10], [35, 10], [29, 10]] as [number, number][] };
+const rectanglePort = port; // the same window, for the building blocks below (where `port` is a circle)
 
 describe("steps between a port window and the passage under it", () => {
   it("a rectangle port over an arc-slot passage: steps at the inner, outer and side edges", () => {
@@ -208,6 +209,80 @@ describe("the port overlay's building blocks", () => {
     const short = pocket("short", at(3.5, 0), 6);
     expect(passageUnderPort(w, [outward, short], 1)?.label).toBe("short");
     expect(passageUnderPort(w, [inward, short], 0.1)?.label).toBe("short"); // nearer (0.5 mm) of two overlapping
+  });
+
+  it("a slanted line across a square: the stretch between where it enters and leaves", () => {
+    // From (1, 1) along (0.6, 0.8): back to y = 0 at t = −1.25 (x = 0.25), on to y = 4 at t = 3.75 (x = 3.25).
+    const [s] = lineSpans([1, 1], [0.6, 0.8], poly([[0, 0], [4, 0], [4, 4], [0, 4]]));
+    expect(s.from).toBeCloseTo(-1.25, 12);
+    expect(s.to).toBeCloseTo(3.75, 12);
+  });
+
+  // A port centred on the bore axis: circle radius 5 about the origin, radial line +x, square line +y; stretch −5 … 5.
+  const centred = circle([0, 0], 10);
+
+  it("a passage that overlaps the port by exactly the tolerance does not count", () => {
+    // Radius 5 centred at x = ±9.5: the stretch −14.5 … −4.5 (or 4.5 … 14.5) meets the port's −5 … 5 by 0.5 mm.
+    for (const x of [-9.5, 9.5]) expect(portSteps(centred, circle([x, 0], 10), 0.5).steps.innerMm).toBeNull();
+  });
+
+  it("a passage crossed twice by a section line counts from its first stretch's start to its last one's end", () => {
+    // Port x ∈ [29, 35], y ∈ [−10, 10], centroid (32, 0). Passage: a C of x ∈ [26, 30] (its back, y ∈ [−8, 9])
+    // with arms x ∈ [30, 34] at y ∈ [−8, −2] and y ∈ [3, 9]. On x = 32 it has two stretches, −8 … −2 and 3 … 9,
+    // counted as −8 … 9 against the port's −10 … 10. On the x axis only its back, t = −6 … −2, against −3 … 3.
+    const c = poly([[26, -8], [34, -8], [34, -2], [30, -2], [30, 3], [34, 3], [34, 9], [26, 9]]);
+    const s = portSteps(rectanglePort, c, 1e-9).steps;
+    expect(s.cwMm).toBeCloseTo(-8 - -10, 9); // 2
+    expect(s.ccwMm).toBeCloseTo(10 - 9, 9); // 1
+    expect(s.innerMm).toBeCloseTo(-6 - -3, 9); // −3
+    expect(s.outerMm).toBeCloseTo(3 - -2, 9); // 5
+  });
+
+  // A port whose square line crosses it twice. Back x ∈ [31, 32], y ∈ [−5, 5] (area 10), prongs toward +x at
+  // y ∈ [−5, −4] to x = 37 (area 5) and y ∈ [1, 4] to x = 35 (area 9): y moments 0 − 22.5 + 22.5 = 0, so the
+  // centroid is on the x axis, at x = (10·31.5 + 5·34.5 + 9·33.5)/24 = 32.875 — between the prongs, outside the
+  // port. The square line x = 32.875 crosses the prongs at t = y: −5 … −4 and 1 … 4. With a middle prong
+  // y ∈ [−0.5, 0.5] to x = 35 (area 3, no y moment) the centroid is at x = (789 + 3·33.5)/27 = 32.944, inside it.
+  // The passage under both: the rectangle x ∈ [30, 40], y ∈ [−6, 6].
+  const box = poly([[30, -6], [40, -6], [40, 6], [30, 6]]);
+
+  it("a centroid outside the port: each section line takes the port's longest stretch", () => {
+    const f = poly([[31, -5], [37, -5], [37, -4], [32, -4], [32, 1], [35, 1], [35, 4], [32, 4], [32, 5], [31, 5]]);
+    const o = portSteps(f, box, 1e-9);
+    expect(o.centroidMm[0]).toBeCloseTo(32.875, 12);
+    expect(o.centroidMm[1]).toBeCloseTo(0, 12);
+    // Square line: the prong 1 … 4 (3 long, not the first, −5 … −4): passage −6 … 6.
+    expect(o.steps.cwMm).toBeCloseTo(-6 - 1, 9); // −7
+    expect(o.steps.ccwMm).toBeCloseTo(4 - 6, 9); // −2
+    // Radial line (the x axis): only the back, x = 31 … 32; the passage x = 30 … 40.
+    expect(o.steps.innerMm).toBeCloseTo(30 - 31, 9); // −1
+    expect(o.steps.outerMm).toBeCloseTo(32 - 40, 9); // −8
+  });
+
+  it("a centroid inside the port: the section line takes the stretch holding it, not a longer one", () => {
+    const e = poly([[31, -5], [37, -5], [37, -4], [32, -4], [32, -0.5], [35, -0.5], [35, 0.5], [32, 0.5], [32, 1], [35, 1], [35, 4], [32, 4], [32, 5], [31, 5]]);
+    const o = portSteps(e, box, 1e-9);
+    expect(o.centroidMm[0]).toBeCloseTo(889.5 / 27, 12);
+    // Square line: the middle prong −0.5 … 0.5 (1 long) holds the centroid; the top prong 1 … 4 is longer.
+    expect(o.steps.cwMm).toBeCloseTo(-6 - -0.5, 9); // −5.5
+    expect(o.steps.ccwMm).toBeCloseTo(0.5 - 6, 9); // −5.5
+    // Radial line: back and middle prong, x = 31 … 35; the passage x = 30 … 40.
+    expect(o.steps.innerMm).toBeCloseTo(30 - 31, 9);
+    expect(o.steps.outerMm).toBeCloseTo(35 - 40, 9);
+  });
+
+  it("of two passages holding the port's centroid the first listed is taken, a tie on distance keeps the first too", () => {
+    const w = { label: "port", outline: centred };
+    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d) });
+    // "edge" (radius 3 about (3.5, 0)) runs 0.5 mm short of the centroid: it holds it within a 0.5 mm tolerance,
+    // just; "deep" (radius 4 about the origin) holds it by 4 mm.
+    const edge = pocket("edge", [3.5, 0], 6);
+    const deep = pocket("deep", [0, 0], 8);
+    expect(passageUnderPort(w, [edge, deep], 0.5)?.label).toBe("edge");
+    expect(passageUnderPort(w, [edge, deep], 0.4)?.label).toBe("deep");
+    // Radius 2 about (±6, 0): both 4 mm from the centroid, both overlap the port on the x axis.
+    expect(passageUnderPort(w, [pocket("right", [6, 0], 4), pocket("left", [-6, 0], 4)], 1e-9)?.label).toBe("right");
+    expect(passageUnderPort(w, [pocket("left", [-6, 0], 4), pocket("right", [6, 0], 4)], 1e-9)?.label).toBe("left");
   });
 
   it("the reach to a passage opened to the port is the nearer of the two", () => {
