@@ -259,6 +259,15 @@ describe("the port overlay's building blocks", () => {
     expect(o.steps.outerMm).toBeCloseTo(32 - 40, 9); // −8
   });
 
+  it("the same port mirrored across the x axis: the longest stretch is now the first along the square line", () => {
+    // Mirrored: the prongs at y ∈ [−4, −1] (3 long) and y ∈ [4, 5]; the centroid stays at (32.875, 0).
+    const f = poly([[31, 5], [37, 5], [37, 4], [32, 4], [32, -1], [35, -1], [35, -4], [32, -4], [32, -5], [31, -5]].reverse() as [number, number][]);
+    const o = portSteps(f, box, 1e-9);
+    expect(o.centroidMm[0]).toBeCloseTo(32.875, 12);
+    expect(o.steps.cwMm).toBeCloseTo(-6 - -4, 9); // −2
+    expect(o.steps.ccwMm).toBeCloseTo(-1 - 6, 9); // −7
+  });
+
   it("a centroid inside the port: the section line takes the stretch holding it, not a longer one", () => {
     const e = poly([[31, -5], [37, -5], [37, -4], [32, -4], [32, -0.5], [35, -0.5], [35, 0.5], [32, 0.5], [32, 1], [35, 1], [35, 4], [32, 4], [32, 5], [31, 5]]);
     const o = portSteps(e, box, 1e-9);
