@@ -127,4 +127,3 @@ describe("polygon validity by sweep", { timeout: 60_000 }, () => {
     expect(r.error?.issues.map((i) => i.message)).toContain(`the deck, mouth and pockets have ${4 * MAX_OUTLINE_CORNERS} corners together; at most ${MAX_CASE_CORNERS}`);
   });
 });
-
