@@ -46,15 +46,14 @@ function whenQuiet(then: () => void): () => void {
   return stop;
 }
 
-/** The plan drawing of what is on show, as one still image filling the view box. */
+/** The plan drawing of what is on show, filling the view box; drawn in the page's HTML so it paints with the first paint. */
 function PlanStill({ store, units }: { store: FitCanvasProps["store"]; units: FitCanvasProps["view"]["units"] }) {
   const snap = useDeferredValue(useSyncExternalStore(store.subscribe, store.get, store.get));
-  const src = useMemo(() => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(planDrawing(snap.study, snap.result, snap.kitIndex, units).svg)}`, [snap.study, snap.result, snap.kitIndex, units]);
+  const svg = useMemo(() => planDrawing(snap.study, snap.result, snap.kitIndex, units).svg, [snap.study, snap.result, snap.kitIndex, units]);
   return (
     <div className="relative h-full w-full" data-testid="view-still">
       {/* The view box itself is the labelled image; the still is decoration until the 3D view arrives. */}
-      {/* eslint-disable-next-line @next/next/no-img-element */}
-      <img src={src} alt="" className="h-full w-full object-contain p-3" />
+      <div aria-hidden="true" className="h-full w-full p-3 [&>svg]:h-full [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: svg }} />
       <p className="absolute bottom-2 left-3 text-xs text-ink-2">Plan at the deck; the 3D view is on its way…</p>
     </div>
   );
