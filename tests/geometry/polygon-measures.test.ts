@@ -74,8 +74,9 @@ describe("polygon measures on hand-checked figures", () => {
   it("equidistant edges: the first counter-clockwise wins, and a later one must be closer by more than the tolerance", () => {
     // The centre (2, 2) is 2 from all four edges. Counter-clockwise from (0, 0) the first edge is the bottom one;
     // the clockwise list is walked backwards, from its last corner (4, 0) up the right edge.
-    expect(pointToPolygonBoundary([2, 2], ccw, 0).nearestMm).toEqual([2, 0]);
-    expect(pointToPolygonBoundary([2, 2], cw, 0).nearestMm).toEqual([4, 2]);
+    // (Fresh copies: the winding is kept per array, and these must find it themselves.)
+    expect(pointToPolygonBoundary([2, 2], [...ccw], 0).nearestMm).toEqual([2, 0]);
+    expect(pointToPolygonBoundary([2, 2], [...cw], 0).nearestMm).toEqual([4, 2]);
     // (2.05, 2): the right edge (1.95) is nearer than the bottom (2) by 0.05 — enough with no tolerance, not with 0.1.
     const exact = pointToPolygonBoundary([2.05, 2], ccw, 0);
     expect(exact.nearestMm).toEqual([4, 2]);
@@ -83,6 +84,40 @@ describe("polygon measures on hand-checked figures", () => {
     const tolerant = pointToPolygonBoundary([2.05, 2], ccw, 0.1);
     expect(tolerant.nearestMm).toEqual([2.05, 0]);
     expect(tolerant.distanceMm).toBe(2);
+  });
+
+  it("a right triangle: points on, inside and outside its slanted edge; a point on the top edge of a square", () => {
+    // Triangle (0,0) (4,0) (0,4): the hypotenuse x + y = 4. (3, 3) lies outside it, though within its edge's box.
+    const t: P[] = [[0, 0], [4, 0], [0, 4]];
+    for (const tri of [t, [...t].reverse()]) {
+      for (const f of [(p: P) => pointInPolygon(p, tri), (p: P) => pointToPolygonBoundary(p, [...tri], 0).inside]) {
+        expect(f([2, 2])).toBe(true);
+        expect(f([1, 1])).toBe(true);
+        expect(f([3, 3])).toBe(false);
+        expect(f([-1, 1])).toBe(false);
+        expect(f([1, -1])).toBe(false);
+      }
+    }
+    // (2, 4) on the top edge: the ray to +x meets no edge that counts, so only the on-edge test makes it inside.
+    for (const sq of [ccw, cw]) expect(pointToPolygonBoundary([2, 4], [...sq], 0)).toEqual({ distanceMm: 0, nearestMm: [2, 4], inside: true });
+  });
+
+  it("a polygon inside a disk away from the origin", () => {
+    // Corners 1 from (10, 0), and 1 from (0, 10).
+    expect(polygonInsideDisk([[9, 0], [11, 0], [10, 1]], [10, 0], 1, 1e-9)).toBe(true);
+    expect(polygonInsideDisk([[0, 9], [0, 11], [1, 10]], [0, 10], 1, 1e-9)).toBe(true);
+  });
+
+  it("the area of a disk inside a polygon when an edge starts inside the circle, or its line cuts the circle off the edge", () => {
+    // The strip y ≥ 0.5 again, its bottom edge split at (0.2, 0.5), inside the unit circle: the same segment.
+    const split: P[] = [[-2, 0.5], [0.2, 0.5], [2, 0.5], [2, 2], [-2, 2]];
+    // The square 2..4 × −0.5..0.5: its edges' lines y = ±0.5 cut the unit circle at x = ±0.866, off the edges.
+    const off: P[] = [[2, -0.5], [4, -0.5], [4, 0.5], [2, 0.5]];
+    for (const w of [(p: P[]) => p, (p: P[]) => [...p].reverse()]) {
+      expect(diskPolygonArea([0, 0], 1, w(split))).toBeCloseTo(Math.PI / 3 - 0.5 * Math.sqrt(0.75), 12);
+      expect(diskPolygonArea([0, 0], 1, w(off))).toBeCloseTo(0, 12);
+      expect(diskPolygonArea([0, 0], 1, w(off.map(([x, y]): P => [-x, y])))).toBeCloseTo(0, 12);
+    }
   });
 
   it("the area of a disk inside a polygon: whole, quarter, half, a circular segment, a small polygon inside the disk, none", () => {
