@@ -1,3 +1,4 @@
+import { TERM } from "@/model/glossary";
 import { amountText, parseAmount, type CurrencyCode } from "@/model/money";
 import { QuoteDraftSchema, quoteTotals, type QuoteDraft, type QuoteTotals, type StoredQuote } from "@/model/quote";
 import type { Pricing } from "@/model/schemas";
@@ -62,7 +63,7 @@ export function readQuote(t: QuoteTexts, currency: CurrencyCode, owner: boolean)
   const hours = hoursText === "" ? 0 : Number(hoursText);
   if (hoursText !== "" && !Number.isFinite(hours)) errors.machiningHours = "Write the hours as a number, e.g. 1.5.";
   const raw = {
-    kit: t.kitPrice.trim() === "" ? null : { label: t.kitLabel.trim() || "Cylinder kit", unitMinor: money(t.kitPrice, "kit.unitMinor") },
+    kit: t.kitPrice.trim() === "" ? null : { label: t.kitLabel.trim() || TERM.quoteKit.label, unitMinor: money(t.kitPrice, "kit.unitMinor") },
     parts: t.parts.map((p, i) => ({ label: p.label, quantity: count(p.quantity, `parts.${i}.quantity`), unitMinor: money(p.unit, `parts.${i}.unitMinor`) })),
     machiningHours: Number.isFinite(hours) ? hours : 0,
     others: t.others.map((o, i) => ({ label: o.label, amountMinor: money(o.amount, `others.${i}.amountMinor`) })),
