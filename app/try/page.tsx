@@ -35,7 +35,7 @@ export default function TryPage() {
         <div>
           <h1 className="text-3xl font-semibold">Try the fit studio</h1>
           <p className="mt-1 max-w-3xl text-ink-2">
-            An invented two-stroke case and two bigger kits. Drag the cut diameter and depth: the skirt, the red interference and every figure follow.
+            An invented two-stroke case and two bigger kits. Drag the cut diameter and depth: the skirt, the interference and every figure follow.
             Nothing here is saved.
           </p>
         </div>
