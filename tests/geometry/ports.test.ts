@@ -190,7 +190,7 @@ describe("the port overlay's building blocks", () => {
   });
 
   it("the passage under a port: the one holding its centroid, else the nearest that overlaps it, else none", () => {
-    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d) });
+    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d), startDepthMm: 0 });
     const w = { label: "port", outline: port };
     const far = pocket("far", [-30, -40], 10);
     const holding = pocket("holding", at(1, 0), 6);
@@ -282,7 +282,7 @@ describe("the port overlay's building blocks", () => {
 
   it("of two passages holding the port's centroid the first listed is taken, a tie on distance keeps the first too", () => {
     const w = { label: "port", outline: centred };
-    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d) });
+    const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d), startDepthMm: 0 });
     // "edge" (radius 3 about (3.5, 0)) runs 0.5 mm short of the centroid: it holds it within a 0.5 mm tolerance,
     // just; "deep" (radius 4 about the origin) holds it by 4 mm.
     const edge = pocket("edge", [3.5, 0], 6);
