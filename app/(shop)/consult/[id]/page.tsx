@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { lengthLabel } from "@/model/units";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
@@ -6,7 +7,7 @@ import { jobDetail } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
 import { shopTimeZone } from "@/db/settings";
-import { formatLength, type KitResult, type WarningCode } from "@/geometry";
+import type { KitResult, WarningCode } from "@/geometry";
 import { governingClearanceMm } from "@/scene/fit";
 import { CONSULT_CAUTIONS } from "@/model/cautions";
 import { VERDICT_TEXT } from "@/model/verdict";
@@ -47,7 +48,7 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
     console.warn("consult page: the job's photos could not be listed; the page shows without them.", error);
     return null;
   });
-  const L = (mm: number) => formatLength(mm, caller.units);
+  const L = (mm: number) => lengthLabel(mm, caller.units);
   const chosen = plan?.result.kits.find((k) => k.kitId === plan.kitId);
   const zone = shopTimeZone();
   // The quote the customer decides on: the one approved with the plan once approved, else the shop's current one.

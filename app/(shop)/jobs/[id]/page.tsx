@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { lengthLabel } from "@/model/units";
 import { shopTimeZone } from "@/db/settings";
 import { dateText, dateTimeText } from "@/model/dates";
 import { depthStopSentence } from "@/model/depth-stop-words";
@@ -9,7 +10,6 @@ import { AccessError } from "@/db/access";
 import { jobDetail, quoteFor } from "@/db/jobs";
 import { listPhotos } from "@/db/photos";
 import { SHOP_STAFF } from "@/db/roles";
-import { formatLength } from "@/geometry";
 import { requirePage } from "../../../_ui/guard";
 import { PlanVerdict } from "../_components/plan-verdict";
 import { StatusBadge, money } from "../_components/status-badge";
@@ -38,7 +38,7 @@ export default async function JobPage({ params }: { params: Promise<{ id: string
   });
   const quote = await quoteFor(caller, id);
   const kit = plan ? plan.result.kits.find((k) => k.kitId === plan.kitId) : undefined;
-  const L = (mm: number) => formatLength(mm, caller.units);
+  const L = (mm: number) => lengthLabel(mm, caller.units);
   const zone = shopTimeZone();
   const when = (at: string) => dateTimeText(at, zone);
   return (
