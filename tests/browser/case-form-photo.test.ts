@@ -6,6 +6,7 @@ import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
+import { textOf } from "../support/photo-surface";
 import { greyPng } from "../support/png";
 import { kitData, ok } from "../integration/library-fixtures";
 import { signedLengthLabel } from "@/model/units";
@@ -46,11 +47,6 @@ async function caseNamed(name: string): Promise<{ id: string } | undefined> {
 
 async function photosOf(caseId: string): Promise<PhotoItem[]> {
   return ok<{ items: PhotoItem[] }>(await api.get(`/api/v1/cases/${caseId}/photos`)).items;
-}
-
-/** The text of the first element found, or "(not shown)" while there is none. */
-async function textOf(found: Locator): Promise<string> {
-  return found.first().innerText({ timeout: 1000 }).catch(() => "(not shown)");
 }
 
 /** A new case profile's form in mm with every field a case needs filled in. */

@@ -3,13 +3,14 @@
 // known shapes DEMO_CASE seen by DEMO_CAMERA) without typing a coordinate, and a study of it with one demo kit
 // gives the same least cut, thinnest wall and smallest sealing land as the same case typed in, within 0.2 mm.
 import { readFileSync } from "node:fs";
-import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
+import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { arcSlot, circle, project, type Mm } from "../../scripts/deck-photo";
+import { arcSlot, circle, type Mm } from "../../scripts/deck-photo";
 import { DEMO_CAMERA, DEMO_CASE } from "../../scripts/render-demo-case-photo";
 import { DEMO_KITS } from "../../db/seed-library";
 import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
+import { clickOnPhoto, textOf } from "../support/photo-surface";
 import { ok } from "../integration/library-fixtures";
 
 const PHOTO = readFileSync("public/demo/eight-sided-case-deck.jpg");
@@ -43,22 +44,6 @@ afterAll(async () => {
   expect(pageErrors).toEqual([]);
 });
 
-/** The text of the first element found, or "(not shown)" while there is none. */
-async function textOf(found: Locator): Promise<string> {
-  return found.first().innerText({ timeout: 1000 }).catch(() => "(not shown)");
-}
-
-/** Clicks the photo where the demo camera put a deck point (mm), and waits for the point to be placed. */
-async function clickAt(surface: Locator, p: Mm) {
-  await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
-  const before = Number(await surface.getAttribute("data-points"));
-  const box = await surface.boundingBox();
-  if (!box) throw new Error("the photo is not shown");
-  const [x, y] = project(DEMO_CAMERA, p);
-  await surface.click({ position: { x: (x / DEMO_CAMERA.widthPx) * box.width, y: (y / DEMO_CAMERA.heightPx) * box.height } });
-  await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
-}
-
 type Wall = { kind: string; label: string; minWallMm: number; reached: boolean };
 type KitResult = { leastCut: { diameterMm: number; depthMm: number } | null; thinnestWall: Wall | null; walls: Wall[] };
 
@@ -89,17 +74,17 @@ describe("the demo case traced from its photo", () => {
     await panel.getByLabel(/Stud spacing across/).fill("56");
     await panel.getByLabel(/Stud spacing along/).fill("56");
     const surface = panel.getByTestId("trace-surface");
-    for (const s of STUDS) await clickAt(surface, s);
+    for (const s of STUDS) await clickOnPhoto(surface, DEMO_CAMERA, s);
     await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within/);
 
     await panel.getByRole("button", { name: "Deck", exact: true }).click();
-    for (const corner of DEMO_CASE.deck) await clickAt(surface, corner);
+    for (const corner of DEMO_CASE.deck) await clickOnPhoto(surface, DEMO_CAMERA, corner);
     // The round mouth by three points on its edge.
     await panel.getByRole("button", { name: "Mouth", exact: true }).click();
-    for (const deg of [10, 130, 250]) await clickAt(surface, circle([0, 0], MOUTH_DIAMETER_MM, 360)[deg]);
+    for (const deg of [10, 130, 250]) await clickOnPhoto(surface, DEMO_CAMERA, circle([0, 0], MOUTH_DIAMETER_MM, 360)[deg]);
     for (const passage of PASSAGES) {
       await panel.getByRole("button", { name: "Add a passage" }).click();
-      for (const p of passage) await clickAt(surface, p);
+      for (const p of passage) await clickOnPhoto(surface, DEMO_CAMERA, p);
     }
     const readout = panel.getByTestId("trace-readout");
     await expect.poll(async () => JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}").pockets?.[1]?.outline?.pointsMm?.length ?? 0).toBe(PASSAGES[1].length);

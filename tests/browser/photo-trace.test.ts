@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { chamferedDeck, circle, project, renderDeckPhoto, type Camera, type DeckScene, type Mm } from "../../scripts/deck-photo";
 import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
+import { clickOnPhoto, textOf } from "../support/photo-surface";
 import { newCase, ok } from "../integration/library-fixtures";
 import { demoCaseDxf } from "../../scripts/render-demo-case-photo";
 
@@ -40,23 +41,6 @@ afterAll(async () => {
 
 async function photos(): Promise<{ id: string; state: string; widthPx: number | null; heightPx: number | null }[]> {
   return ok<{ items: { id: string; state: string; widthPx: number | null; heightPx: number | null }[] }>(await api.get(`/api/v1/cases/${caseId}/photos`)).items;
-}
-
-/** The text of the first element found, or "(not shown)" while there is none: a short wait, so a poll asks again. */
-async function textOf(found: Locator): Promise<string> {
-  return found.first().innerText({ timeout: 1000 }).catch(() => "(not shown)");
-}
-
-/** Clicks the photo where the camera put a deck point (mm), once the surface takes clicks, and waits for the point to be placed. */
-async function clickAt(surface: Locator, p: Mm) {
-  await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
-  const before = Number(await surface.getAttribute("data-points"));
-  const box = await surface.boundingBox();
-  if (!box) throw new Error("the photo is not shown");
-  const [x, y] = project(CAMERA, p);
-  // A locator click: scrolled into view, and only once the surface stands still and is the one hit at that spot.
-  await surface.click({ position: { x: (x / CAMERA.widthPx) * box.width, y: (y / CAMERA.heightPx) * box.height } });
-  await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
 }
 
 /** The case profile's form with its photo panel open (the panel may sit in a section that opens on request). */
@@ -119,11 +103,11 @@ describe("trace a deck from a photo", () => {
     await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
     await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
     // The studs in an order of their own: the panel sorts them into the rectangle's corners.
-    for (const s of [STUDS[2], STUDS[0], STUDS[1], STUDS[3]]) await clickAt(surface, s);
+    for (const s of [STUDS[2], STUDS[0], STUDS[1], STUDS[3]]) await clickOnPhoto(surface, CAMERA, s);
     await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within 0\.\d+ mm\.$|^The four points fit a 2\.205 in × 2\.205 in rectangle within/);
 
     await panel.getByRole("button", { name: "Deck", exact: true }).click();
-    for (const corner of DECK) await clickAt(surface, corner);
+    for (const corner of DECK) await clickOnPhoto(surface, CAMERA, corner);
     await expect.poll(() => textOf(panel.getByTestId("trace-prompt"))).toMatch(/Deck corners/);
 
     const readout = panel.getByTestId("trace-readout");
@@ -155,7 +139,7 @@ describe("trace a deck from a photo", () => {
     await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
     await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
     await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
-    for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickAt(surface, s);
+    for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickOnPhoto(surface, CAMERA, s);
     await expect.poll(() => textOf(panel.getByRole("alert"))).toMatch(/are on the same spot/);
     await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
   });
