@@ -27,7 +27,7 @@ import { applyMigrations } from "../db/migrate";
 import * as schema from "../db/schema";
 import { DEMO_PEOPLE, DEMO_SHOP, seedDemo } from "../db/seed";
 import { DEMO_STUDIES, seedLibrary } from "../db/seed-library";
-import { buildIsStale, freePort, root, run, startNext, waitFor } from "./lib.mjs";
+import { buildIsStale, freePort, root, run, startNext, stopProcesses, waitFor } from "./lib.mjs";
 
 const STUDY_ID = DEMO_STUDIES.find((s) => s.kitIds.length === 5)?.id ?? DEMO_STUDIES[0].id;
 const LIST_PATH = "/api/v1/studies?pageSize=20&sort=name";
@@ -138,14 +138,7 @@ async function main() {
   const children: ChildProcess[] = [];
   const dir = mkdtempSync(join(tmpdir(), "borewright-bench-"));
   const stop = async () => {
-    await Promise.all(
-      children
-        .filter((c) => c.exitCode === null)
-        .map((c) => new Promise<void>((resolve) => {
-          c.once("exit", () => resolve());
-          c.kill("SIGTERM");
-        })),
-    );
+    await stopProcesses(children);
     rmSync(dir, { recursive: true, force: true });
   };
   process.on("SIGINT", () => {

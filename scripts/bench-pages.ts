@@ -28,7 +28,7 @@ import { applyMigrations } from "../db/migrate";
 import * as schema from "../db/schema";
 import { DEMO_PEOPLE, DEMO_SHOP, seedDemo } from "../db/seed";
 import { DEMO_STUDIES, seedLibrary } from "../db/seed-library";
-import { buildIsStale, freePort, root, run, startNext, waitFor } from "./lib.mjs";
+import { buildIsStale, freePort, root, run, startNext, stopProcesses, waitFor } from "./lib.mjs";
 
 const STUDY_ID = DEMO_STUDIES.find((s) => s.kitIds.length === 5)?.id ?? DEMO_STUDIES[0].id;
 const DIST = process.env.NEXT_DIST_DIR || ".next";
@@ -252,14 +252,7 @@ async function main() {
   let chrome: chromeLauncher.LaunchedChrome | null = null;
   const stop = async () => {
     if (chrome) await chrome.kill();
-    await Promise.all(
-      children
-        .filter((c) => c.exitCode === null)
-        .map((c) => new Promise<void>((resolve) => {
-          c.once("exit", () => resolve());
-          c.kill("SIGTERM");
-        })),
-    );
+    await stopProcesses(children);
     rmSync(dir, { recursive: true, force: true });
   };
   process.on("SIGINT", () => {

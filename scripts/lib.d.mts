@@ -7,3 +7,4 @@ export function freePort(): Promise<number>;
 export function waitFor(url: string, timeoutMs?: number, child?: ChildProcess): Promise<void>;
 export function startNext(opts: { port: number; host?: string; env?: Record<string, string>; quiet?: boolean }): ChildProcess & { log?: () => string };
 export function buildIsStale(): boolean;
+export function stopProcesses(children: ChildProcess[]): Promise<void[]>;

@@ -104,3 +104,18 @@ export function buildIsStale() {
   });
   return Boolean(result.stdout.trim());
 }
+
+/** Ends every child still running (SIGTERM) and resolves once each has exited. */
+export function stopProcesses(children) {
+  return Promise.all(
+    children
+      .filter((c) => c.exitCode === null)
+      .map(
+        (c) =>
+          new Promise((resolve) => {
+            c.once("exit", () => resolve());
+            c.kill("SIGTERM");
+          }),
+      ),
+  );
+}
