@@ -117,8 +117,10 @@ function signedFormOf(cookie: string, token: string): boolean {
   try {
     const value = decodeURIComponent(cookie);
     return token.length > 0 && value.startsWith(`${token}.`) && value.length > token.length + 1;
-  } catch {
-    return false;
+  } catch (error) {
+    // A cookie that is not valid percent-encoding is not a signed form of any token; anything else is a defect.
+    if (error instanceof URIError) return false;
+    throw error;
   }
 }
 

@@ -96,8 +96,10 @@ function cpuMs(pid: number | undefined): number | null {
       for (const child of readFileSync(`/proc/${pid}/task/${task}/children`, "utf8").trim().split(/\s+/).filter(Boolean)) total += cpuMs(Number(child)) ?? 0;
     }
     return total;
-  } catch {
-    return null;
+  } catch (error) {
+    // Without /proc, or once the process has ended, there is no CPU figure: the bench prints "–" for it.
+    if ((error as NodeJS.ErrnoException).code) return null;
+    throw error;
   }
 }
 

@@ -46,6 +46,7 @@ export const json = (data: unknown, status = 200) => NextResponse.json(data, { s
 export async function noBody(req: Request): Promise<void> {
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > MAX_BODY_BYTES) throw new ApiError(413, "too_large", "This action takes no body.");
+  // A body that cannot be read carries nothing this action would refuse: it goes on as with no body.
   const text = (await req.text().catch(() => "")).trim();
   if (text === "") return;
   let value: unknown;
