@@ -2,11 +2,10 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, desc, eq, ne } from "drizzle-orm";
 import { pointsOutsidePhoto, PhotoReferenceSchema, type PhotoReference } from "@/model/schemas/case-photos";
-import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
+import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
 import { AccessError, type Caller } from "./access";
 import { getDb, type Db } from "./client";
 import { DataError } from "./errors";
-import { sniffImageType } from "./photos";
 import { SHOP_STAFF } from "./roles";
 import { readColumn } from "./rows";
 import * as schema from "./schema";
@@ -15,8 +14,6 @@ import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNot
 // Photos of a case profile's deck, traced over in the case form. Same path as a job's photos: the browser asks
 // for an upload URL, PUTs the file straight to storage, then asks the server to check it by its first bytes
 // and its stored size. Shop staff only; a customer never sees them, another shop's case answers 404.
-
-type PhotoType = (typeof PHOTO_TYPES)[number];
 
 export type CasePhotoView = {
   id: string;
@@ -101,8 +98,7 @@ export async function requestCasePhotoUpload(
 ) {
   await caseOr404(caller, caseId);
   const id = randomUUID();
-  const ext = body.contentType === "image/jpeg" ? "jpg" : body.contentType === "image/png" ? "png" : "webp";
-  const objectKey = `shops/${caller.shopId}/cases/${caseId}/${id}.${ext}`;
+  const objectKey = `shops/${caller.shopId}/cases/${caseId}/${id}.${photoExtension(body.contentType)}`;
   const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
   const db = await getDb();
   await db.insert(schema.casePhoto).values({
@@ -127,11 +123,7 @@ export async function completeCasePhotoUpload(caller: Caller, caseId: string, ph
   if (p.state !== "pending") return view(p);
   const found = await inspectObject(p.objectKey).catch(storageError);
   if (!found) throw new DataError("not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
-  const sniffed = sniffImageType(found.head);
-  let reason: string | null = null;
-  if (found.sizeBytes > MAX_PHOTO_BYTES) reason = `The file is ${(found.sizeBytes / 1024 / 1024).toFixed(1)} MB; photos are limited to ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`;
-  else if (!sniffed) reason = "The file is not a JPEG, PNG or WebP image (its contents say otherwise, whatever its name).";
-  else if (sniffed !== p.contentType) reason = `The file is a ${sniffed.slice(6).toUpperCase()} image but was declared as ${p.contentType.slice(6).toUpperCase()}; choose the file again.`;
+  const reason = uploadedPhotoProblem(found.sizeBytes, found.head, p.contentType);
   const db = await getDb();
   if (reason) {
     await deleteObject(p.objectKey).catch((error: unknown) => {

@@ -2,7 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { and, asc, eq } from "drizzle-orm";
 import { DataError } from "./errors";
-import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
+import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { jobFor } from "./jobs";
@@ -13,18 +13,6 @@ import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNot
 // Job photos in object storage. The browser asks for an upload URL, PUTs the file straight to storage,
 // then asks the server to check it: the type is read from the file's first bytes, never trusted from the
 // name or the header, and the size from storage itself. A refused file is deleted and says why.
-
-type PhotoType = (typeof PHOTO_TYPES)[number];
-
-/** The image type a file's first bytes show, or null. JPEG FF D8 FF; PNG 89 50 4E 47 0D 0A 1A 0A; WebP "RIFF"…"WEBP". */
-export function sniffImageType(head: Uint8Array): PhotoType | null {
-  const b = (i: number) => head[i];
-  if (head.length >= 3 && b(0) === 0xff && b(1) === 0xd8 && b(2) === 0xff) return "image/jpeg";
-  if (head.length >= 8 && [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a].every((v, i) => b(i) === v)) return "image/png";
-  const ascii = (from: number, to: number) => String.fromCharCode(...head.slice(from, to));
-  if (head.length >= 12 && ascii(0, 4) === "RIFF" && ascii(8, 12) === "WEBP") return "image/webp";
-  return null;
-}
 
 export type PhotoView = {
   id: string;
@@ -83,8 +71,7 @@ export async function requestUpload(
   if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
   await jobFor(caller, jobId);
   const id = randomUUID();
-  const ext = body.contentType === "image/jpeg" ? "jpg" : body.contentType === "image/png" ? "png" : "webp";
-  const objectKey = `shops/${caller.shopId}/jobs/${jobId}/${id}.${ext}`;
+  const objectKey = `shops/${caller.shopId}/jobs/${jobId}/${id}.${photoExtension(body.contentType)}`;
   const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
   const db = await getDb();
   await db.insert(jobs.jobPhoto).values({
@@ -122,11 +109,7 @@ export async function completeUpload(caller: Caller, jobId: string, photoId: str
   if (p.state !== "pending") return photoView(p);
   const found = await inspectObject(p.objectKey).catch(storageError);
   if (!found) throw new DataError("not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
-  let reason: string | null = null;
-  const sniffed = sniffImageType(found.head);
-  if (found.sizeBytes > MAX_PHOTO_BYTES) reason = `The file is ${(found.sizeBytes / 1024 / 1024).toFixed(1)} MB; photos are limited to ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`;
-  else if (!sniffed) reason = "The file is not a JPEG, PNG or WebP image (its contents say otherwise, whatever its name).";
-  else if (sniffed !== p.contentType) reason = `The file is a ${sniffed.slice(6).toUpperCase()} image but was declared as ${p.contentType.slice(6).toUpperCase()}; choose the file again.`;
+  const reason = uploadedPhotoProblem(found.sizeBytes, found.head, p.contentType);
   const db = await getDb();
   if (reason) {
     await deleteObject(p.objectKey).catch((error: unknown) => {

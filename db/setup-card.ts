@@ -5,7 +5,7 @@ import { SETUP_CARD_CAUTIONS, TRIAL_CUT_READING, TRIAL_CUT_STEP } from "@/model/
 import { dateText, dateTimeText } from "@/model/dates";
 import { depthStopSentence, shimBreakdown } from "@/model/depth-stop-words";
 import { TERM } from "@/model/glossary";
-import { lengthLabel } from "@/model/units";
+import { angleLabel, lengthLabel } from "@/model/units";
 import { blockingReasons, TONE_HEX, VERDICT_TEXT, type VerdictTone } from "@/model/verdict";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
@@ -145,7 +145,7 @@ export function buildSetupCard(job: JobLike, plan: PlanSnapshot, shopName: strin
   const checks = [
     `Studs and spacers even: the same spacer stack on every stud (${studs.join(", ")}).`,
     heights.length
-      ? `Holder heights read at each stud and within tolerance (planned: ${heights.map((h) => `${h.stud} ${L(h.heightMm + h.straightedgeMm)}`).join(", ")}${align ? `; tilt ${align.tiltDeg.toFixed(3)}°, rocking ${L(align.rockMm)} of ${L(maxRock)} allowed` : ""}).`
+      ? `Holder heights read at each stud and within tolerance (planned: ${heights.map((h) => `${h.stud} ${L(h.heightMm + h.straightedgeMm)}`).join(", ")}${align ? `; tilt ${angleLabel(align.tiltDeg)}, rocking ${L(align.rockMm)} of ${L(maxRock)} allowed` : ""}).`
       : `Holder heights read at each stud and within tolerance (rocking at most ${L(maxRock)}).`,
     "Bit orientation: cutting edge leading in the direction of rotation; bit tight in the head.",
     k.rig ? `Cutter setting read across the head and bit: ${L(k.rig.cutterSettingToSetMm ?? k.rig.cutterSettingMm)}.` : "Cutter setting read across the head and bit.",

@@ -3,6 +3,7 @@
 // words it. Pure: no I/O and no server-only import, so the job page, the API and the tests share one comparison.
 import { type AfterCutReadings, TRIAL_FIT_LABEL } from "@/model/schemas/jobs";
 import { TERM } from "@/model/glossary";
+import { lengthLabel } from "@/model/units";
 import { type BandCheck, DEFAULT_VERIFY_TOLERANCE_MM, type MinimumCheck, type VerificationPlan, cutFigures } from "@/geometry";
 
 export { DEFAULT_VERIFY_TOLERANCE_MM, VerificationPlanError, planFromResult, type VerificationPlan } from "@/geometry";
@@ -26,7 +27,8 @@ export type VerificationCheck = {
 
 export type Verification = { verdict: "pass" | "fail" | "incomplete"; toleranceMm: number; checks: VerificationCheck[] };
 
-const f = (n: number) => `${(Math.round(n * 1000) / 1000).toFixed(2)} mm`;
+// The after-cut figures are compared and shown in mm, whatever units the shop reads by.
+const f = (mm: number) => lengthLabel(mm, "mm");
 const range = (b: BandCheck) => (b.minMm === b.maxMm ? f(b.minMm) : `${f(b.minMm)} – ${f(b.maxMm)}`);
 
 function bandRow(key: "cut-diameter" | "cut-depth", b: BandCheck, toleranceMm: number): VerificationCheck {

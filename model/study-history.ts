@@ -1,4 +1,5 @@
 import type { CutPlan, Readings, StudyLimits } from "@/geometry";
+import { recordMmText } from "@/model/units";
 
 // Plain-words summaries of what one change to a study did, for the study's history. Pure: the data layer
 // writes them with each change, the tests read them directly.
@@ -30,15 +31,10 @@ const LIMIT_LABELS: Record<keyof StudyLimits, [label: string, unit: string]> = {
   displacementClassesCc: ["displacement classes", "cc"],
 };
 
-/** A length for the history: at least one decimal, at most three. */
-export function formatMm(n: number): string {
-  return Number.isInteger(n) ? n.toFixed(1) : String(Number(n.toFixed(3)));
-}
-
 function formatLimit(v: number | readonly number[] | undefined, unit: string): string {
   if (v === undefined) return "default";
   if (Array.isArray(v)) return v.length ? `${v.join(", ")} ${unit}` : "none";
-  return `${formatMm(v as number)} ${unit}`;
+  return `${recordMmText(v as number)} ${unit}`;
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
@@ -61,7 +57,7 @@ export function describeChanges(before: StudySnapshot, after: StudySnapshot, nam
     else out.push(`rig ${nameOf(before.rigId)} → ${nameOf(after.rigId)}`);
   }
 
-  const cutValue = (c: CutPlan | null, k: "diameterMm" | "depthMm") => (c?.[k] === undefined ? "proposed" : `${formatMm(c[k] as number)} mm`);
+  const cutValue = (c: CutPlan | null, k: "diameterMm" | "depthMm") => (c?.[k] === undefined ? "proposed" : `${recordMmText(c[k] as number)} mm`);
   for (const [k, label] of [["diameterMm", "cut diameter"], ["depthMm", "cut depth"]] as const) {
     if (!same(before.cut?.[k], after.cut?.[k])) {
       const from = cutValue(before.cut, k).replace(" mm", "");
@@ -71,7 +67,7 @@ export function describeChanges(before: StudySnapshot, after: StudySnapshot, nam
   }
   if (!same(before.cut?.centerOffsetMm, after.cut?.centerOffsetMm)) {
     const o = after.cut?.centerOffsetMm;
-    out.push(o ? `cut centring offset set to (${formatMm(o[0])}, ${formatMm(o[1])}) mm` : "cut centring offset removed");
+    out.push(o ? `cut centring offset set to (${recordMmText(o[0])}, ${recordMmText(o[1])}) mm` : "cut centring offset removed");
   }
 
   if (!same(before.readings, after.readings)) {

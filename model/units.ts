@@ -106,6 +106,21 @@ export function signedLengthLabel(mm: number | null | undefined, units: LengthUn
   return Number(toUnits(mm, units).toFixed(LENGTH_DIGITS[units])) < 0 ? `${MINUS}${t}` : `+${t}`;
 }
 
+/** A length as a record of changes keeps it, always in mm and without the unit: at least one decimal, at most three ("54.0", "54.125"). */
+export function recordMmText(mm: number): string {
+  return Number.isInteger(mm) ? mm.toFixed(1) : String(Number(mm.toFixed(3)));
+}
+
+/** An axis tick: the number only, in the given units, to 0.1 mm or 0.001 in, trailing zeros dropped ("54.5", "2.125"). */
+export function tickText(mm: number, units: LengthUnits): string {
+  return String(Number(toUnits(mm, units).toFixed(units === "in" ? 3 : 1)));
+}
+
+/** An angle in degrees to 0.001°: "0.125°". */
+export function angleLabel(deg: number): string {
+  return `${fixedText(deg, 3)}°`;
+}
+
 /** A diameter: "Ø 55.10 mm". */
 export function diameterLabel(mm: number | null | undefined, units: LengthUnits): string {
   return `Ø ${lengthLabel(mm, units)}`;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { describeChanges, formatMm, type StudySnapshot } from "@/model/study-history";
+import { describeChanges, type StudySnapshot } from "@/model/study-history";
+import { recordMmText } from "@/model/units";
 
 // The study's history in plain words: one line per change, names looked up, lengths in mm.
 
@@ -43,7 +44,7 @@ describe("the study's history", () => {
   });
 
   it("writes lengths with at least one decimal and at most three", () => {
-    expect([formatMm(2), formatMm(2.5), formatMm(0.12345)]).toEqual(["2.0", "2.5", "0.123"]);
+    expect([recordMmText(2), recordMmText(2.5), recordMmText(0.12345)]).toEqual(["2.0", "2.5", "0.123"]);
   });
 
   it("tells a rig changed from one set or removed, and a cut value from one proposed", () => {

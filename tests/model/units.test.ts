@@ -1,6 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import {
+  angleLabel,
   areaLabel,
   boundLabel,
   diameterLabel,
@@ -12,10 +13,12 @@ import {
   mPerMinToFtPerMin,
   parseLengthText,
   parseNumberText,
+  recordMmText,
   roundedMm,
   signedLengthLabel,
   soldByFractionLabel,
   speedLabel,
+  tickText,
   volumeLabel,
 } from "@/model/units";
 
@@ -23,6 +26,13 @@ import {
 // yard and pound agreement); every inch figure below follows from that.
 
 describe("lengths for labels and results", () => {
+  it("write a record's length with one to three decimals, an axis tick without trailing zeros, an angle to 0.001°", () => {
+    expect([recordMmText(54), recordMmText(54.125), recordMmText(0.12345)]).toEqual(["54.0", "54.125", "0.123"]);
+    // 54.5 mm / 25.4 = 2.14566… in (exact inch, NBS Circular 572 Addendum)
+    expect([tickText(54.5, "mm"), tickText(54.5, "in"), tickText(50, "mm")]).toEqual(["54.5", "2.146", "50"]);
+    expect(angleLabel(0.1234)).toBe("0.123°");
+  });
+
   it("show 0.01 mm and 0.001 in, with the unit", () => {
     expect(lengthLabel(55.1, "mm")).toBe("55.10 mm");
     // 55.1 / 25.4 = 2.16929… in (exact inch, NBS Circular 572 Addendum)

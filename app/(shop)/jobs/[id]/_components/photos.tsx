@@ -3,6 +3,7 @@
 import { useCallback, useRef, useState } from "react";
 import { callApi } from "../../../../_ui/api-client";
 import { FormNotice } from "../../../../_ui/field";
+import { MAX_PHOTO_MB, photoSizeProblem } from "@/model/photo-files";
 
 type Photo = { id: string; caption: string; kind: string; shared: boolean; state: string; refusedReason: string | null; url: string | null; sizeBytes: number };
 
@@ -13,7 +14,6 @@ const KINDS = [
   ["trial-fit", "Trial fit"],
   ["other", "Other"],
 ] as const;
-const MAX_MB = 8;
 
 /** The job's photos as a thumbnail grid; the shop uploads straight to storage and marks what the customer may see. */
 export function Photos({ jobId, canEdit, initial }: { jobId: string; canEdit: boolean; initial: Photo[] | null }) {
@@ -38,8 +38,9 @@ export function Photos({ jobId, canEdit, initial }: { jobId: string; canEdit: bo
       setNotice({ tone: "error", text: "Choose a photo first." });
       return;
     }
-    if (f.size > MAX_MB * 1024 * 1024) {
-      setNotice({ tone: "error", text: `The file is ${(f.size / 1024 / 1024).toFixed(1)} MB; photos are limited to ${MAX_MB} MB.` });
+    const tooLarge = photoSizeProblem(f.size);
+    if (tooLarge) {
+      setNotice({ tone: "error", text: tooLarge });
       return;
     }
     setBusy(true);
@@ -120,7 +121,7 @@ export function Photos({ jobId, canEdit, initial }: { jobId: string; canEdit: bo
       {canEdit ? (
         <form onSubmit={upload} className="card flex flex-wrap items-end gap-3 p-3">
           <div>
-            <label htmlFor="photo-file" className="field-label">Photo (JPEG, PNG or WebP, up to {MAX_MB} MB)</label>
+            <label htmlFor="photo-file" className="field-label">Photo (JPEG, PNG or WebP, up to {MAX_PHOTO_MB} MB)</label>
             <input id="photo-file" ref={file} type="file" accept="image/jpeg,image/png,image/webp" className="text-sm" />
           </div>
           <div>

@@ -1,6 +1,7 @@
 import type { Verification } from "@/db/verification";
 import { shopTimeZone } from "@/db/settings";
 import { dateTimeText } from "@/model/dates";
+import { lengthLabel } from "@/model/units";
 
 const STATE = { ok: ["within", "text-success"], fail: ["outside", "text-error"], missing: ["missing", "text-caution"] } as const;
 
@@ -10,7 +11,7 @@ export function PlanVsActual({ verification, at }: { verification: Verification;
   return (
     <div className="flex flex-col gap-2">
       <p className={`rounded-md border-l-4 px-4 py-2 text-sm ${verdict === "pass" ? "border-success bg-paper-2" : verdict === "fail" ? "border-error bg-paper-2" : "border-caution bg-caution-soft"}`} data-testid="verdict">
-        {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {dateTimeText(at, shopTimeZone())}, shop tolerance ±{verification.toleranceMm.toFixed(2)} mm.
+        {verdict === "pass" ? "Within the plan" : verdict === "fail" ? "Outside the plan" : "Incomplete"} — readings of {dateTimeText(at, shopTimeZone())}, shop tolerance ±{lengthLabel(verification.toleranceMm, "mm")}.
       </p>
       <div className="card relative overflow-x-auto">
         <table className="w-full text-sm">

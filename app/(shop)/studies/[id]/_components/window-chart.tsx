@@ -1,5 +1,5 @@
 import type { StudyResult } from "@/geometry";
-import { fromUnits, lengthLabel, toUnits, type LengthUnits } from "@/model/units";
+import { fromUnits, lengthLabel, tickText, toUnits, type LengthUnits } from "@/model/units";
 import { VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";
 import { blockingReason } from "./reasons";
@@ -133,7 +133,7 @@ export function WindowChart({
           <g key={t}>
             <line x1={x(t)} x2={x(t)} y1={axisY} y2={axisY + 4} stroke="var(--color-ink-3)" />
             <text x={x(t)} y={axisY + 16} fontSize="10" textAnchor="middle" fill="var(--color-ink-3)" className="num">
-              {Number(toUnits(t, units).toFixed(units === "in" ? 3 : 1))}
+              {tickText(t, units)}
             </text>
           </g>
         ))}
