@@ -1,9 +1,8 @@
-// Mutation testing of the fit computation (geometry/) and the pure job rules: `npm run test:mutation`.
+// Mutation testing of the fit computation (geometry/) and the pure job rules: `npm run test:mutation`, which runs
+// scripts/mutation.mjs: one Stryker run per source file, against that file's tests only (MUTATION_TESTS, read by
+// stryker.vitest.config.ts), each with its own incremental report in reports/mutation/, then one combined score.
 // Not part of `npm test`: it runs the unit tests once per mutant. The machine is shared, so one test runner at
-// a time. Run part of it with `npm run test:mutation -- --mutate geometry/wall.ts --incremental
-// --incrementalFile reports/mutation/wall.json`, and narrow the tests to that file's own with
-// MUTATION_TESTS=tests/geometry/wall.test.ts,… (stryker.vitest.config.ts). Surviving mutants that change nothing
-// are listed, with the reason, in tests/geometry/equivalent-mutants.md.
+// a time. Surviving mutants that change nothing are listed, with the reason, in tests/geometry/equivalent-mutants.md.
 //
 // The zod schema files (geometry/schema*.ts, geometry/result-schema.ts) are left out: they are declarations
 // (field shapes, bounds and their messages), evaluated once when the module loads, so every one of their
