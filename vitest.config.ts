@@ -13,7 +13,7 @@ export default defineConfig({
           name: "unit",
           sequence: { groupOrder: 0 },
           // tests/ mirrors the source: tests/db/csv.test.ts is the test of db/csv/, tests/app/… of app/…
-          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/scripts/**/*.test.ts", "tests/db/**/*.test.ts", "tests/app/**/*.test.ts", "tests/lint/**/*.test.ts", "tests/unit/**/*.test.ts"],
+          include: ["tests/geometry/**/*.test.ts", "tests/model/**/*.test.ts", "tests/scene/**/*.test.ts", "tests/scripts/**/*.test.ts", "tests/db/**/*.test.ts", "tests/app/**/*.test.ts", "tests/lint/**/*.test.ts"],
           environment: "node",
         },
       },

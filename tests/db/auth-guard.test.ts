@@ -1,7 +1,7 @@
 // The pieces of the session lookup that need no server: which cookie values the process keeps as
 // already verified, how a cookie is read from the header, and when a session is due for refresh.
 import { describe, expect, it } from "vitest";
-import { VerifiedCookies, cookieValue, refreshDue } from "../../db/auth-guard";
+import { VerifiedCookies, cookieValue, refreshDue } from "@/db/auth-guard";
 
 describe("verified session cookies", () => {
   it("keeps a cookie only when it is the token's signed form", () => {

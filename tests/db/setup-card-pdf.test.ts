@@ -7,7 +7,7 @@ import { buildSetupCard, drawingScale, scaleText, setupCardDrawings, DRAWING_ROO
 import { setupCardPdf } from "@/db/setup-card-pdf";
 import { VERDICT_COLOURS } from "@/model/palette";
 import { measurePdf, widestBox } from "../integration/jobs-pdf-measure";
-import { benchJob, benchPlan } from "../db/setup-card-plan";
+import { benchJob, benchPlan } from "./setup-card-plan";
 import { roundStudy } from "../scene/fixtures";
 
 // The job and its plan, as the content test builds its card from (tests/db/setup-card-plan.ts).
