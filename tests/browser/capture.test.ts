@@ -185,6 +185,25 @@ describe("a case profile entered from measurements, on its drawing", () => {
     expect(z.x + z.width).toBeLessThan(planBox.x + planBox.width);
     expect(Math.abs(z.x + z.width / 2 - (c2.x + c2.width / 2))).toBeLessThan(2);
     expect(zoomed / fitScale).toBeGreaterThan(1.5);
+    // Zoomed in, the same corner dragged a second time, after the pointer has passed over another point on
+    // its way (a hover redraws the plan): it lands where the pointer went at the zoomed scale, 20 px left
+    // and 10 px down being 20 and 10 px over the scale read above, on the 0.1 mm grid.
+    const before2 = (await fieldCorners(page, "Deck"))[1];
+    const c1 = await page.getByTestId("shape-plan").locator('[data-key="deck:0"]').boundingBox();
+    if (!c1) throw new Error("deck corner 1 is not drawn after zooming");
+    await page.mouse.move(c1.x + c1.width / 2, c1.y + c1.height / 2, { steps: 4 });
+    const z0 = { x: z.x + z.width / 2, y: z.y + z.height / 2 };
+    await page.mouse.move(z0.x, z0.y, { steps: 4 });
+    await page.mouse.down();
+    for (let i = 1; i <= 8; i++) await page.mouse.move(z0.x - (20 * i) / 8, z0.y + (10 * i) / 8);
+    await page.mouse.up();
+    await expect.poll(async () => (await fieldCorners(page, "Deck"))[1]).not.toEqual(before2);
+    const after2 = (await expectAgree(page, "Deck", "deck"))[1];
+    expect(Math.abs(after2[0] - (before2[0] - 20 / zoomed))).toBeLessThanOrEqual(0.05 + 1e-9);
+    expect(Math.abs(after2[1] - (before2[1] - 10 / zoomed))).toBeLessThanOrEqual(0.05 + 1e-9);
+    // Undone, the corner is back (and the frame the fit is measured against with it).
+    await plan.getByRole("button", { name: "Undo" }).click();
+    await expect.poll(async () => (await fieldCorners(page, "Deck"))[1]).toEqual(before2);
     // The keys: 0 fits the whole plan again, + zooms in one step of 1.5, the button zooms back out.
     await page.getByTestId("shape-plan").locator('[data-key="deck:0"]').focus();
     await page.keyboard.press("0");

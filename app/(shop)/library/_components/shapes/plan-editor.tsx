@@ -1,6 +1,7 @@
 "use client";
 
-import { useLayoutEffect, useMemo, useRef } from "react";
+import morphdom from "morphdom";
+import { useLayoutEffect, useMemo, useRef, useState } from "react";
 import { useStore } from "zustand";
 import type { ShapeIssue } from "@/geometry/shapes";
 import { editDrawing, type Frame } from "@/scene/drawing/plan-edit";
@@ -53,10 +54,21 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
   // A point pressed or held by the pointer: the plan is not redrawn meanwhile, so the pressed element stays
   // on the page and keeps receiving the pointer's moves (see plan-drag.ts).
   const held = useRef(false);
-  const html = useMemo(() => ({ __html: drawing.svg }), [drawing.svg]);
+  // React writes the first drawing only; every later one is patched into it in place, so the element under
+  // the pointer stays on the page. (Chromium drops the pointer's next events, a press included, when the
+  // element they were aimed at is replaced while they are dispatched: a hover that redraws the plan would
+  // otherwise swallow the click or drag that follows it.)
+  const [first] = useState(() => ({ __html: drawing.svg }));
+  const shown = useRef(first.__html);
   const zoom = useZoom(host);
 
-  // The markup is replaced on every change: the view is set on it again, and a point that had the focus gets it back.
+  useLayoutEffect(() => {
+    const svg = host.current?.querySelector("svg");
+    if (!svg || shown.current === drawing.svg) return;
+    morphdom(svg, drawing.svg, { getNodeKey: nodeKey });
+    shown.current = drawing.svg;
+  }, [drawing.svg]);
+  // The patch resets the view: it is set again, and a point that had the focus gets it back.
   useLayoutEffect(() => {
     host.current?.querySelector("svg")?.setAttribute("viewBox", viewBoxOf(drawing.frame, zoom.view));
   }, [drawing.svg, drawing.frame, zoom.view]);
@@ -107,12 +119,18 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
         onPointerOver={(e) => hoverTo((e.target as Element).closest?.("[data-key]")?.getAttribute("data-key") ?? null)}
         onPointerLeave={() => hoverTo(null)}
         className="cursor-move select-none overflow-hidden rounded-md border border-rule bg-white [&_[data-kind]]:touch-none [&_[data-kind=edge]]:cursor-copy [&_circle[data-kind]]:cursor-grab [&_svg]:h-auto [&_svg]:max-h-[70vh] [&_svg]:w-full [&_[data-kind]:focus-visible]:outline-2"
-        dangerouslySetInnerHTML={html}
+        dangerouslySetInnerHTML={first}
       />
       <PlanNotes units={units} issues={issues} />
     </div>
   );
 }
+
+/** What matches an element of the drawing with its counterpart in the next one: its shape or point and its part. */
+const nodeKey = (node: Node) => {
+  const key = node instanceof Element ? node.getAttribute("data-key") : null;
+  return key ? `${node.nodeName}|${(node as Element).getAttribute("data-kind") ?? ""}|${key}` : undefined;
+};
 
 /** How the plan is worked, and the problems of the shapes in words. */
 function PlanNotes({ units, issues }: { units: string; issues: readonly ShapeIssue[] }) {
