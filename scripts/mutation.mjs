@@ -13,6 +13,7 @@
 //   npm run test:mutation                         every file, small ones first, the depth-stop search last
 //   npm run test:mutation -- geometry/wall.ts     one file (or several), then the table over all reports
 //   npm run test:mutation -- --report             only the table, from the reports as they are
+//   npm run test:mutation -- --survivors [file…]  the table, and each surviving mutant (file:line, mutator, the change)
 import { spawn } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { performance } from "node:perf_hooks";
@@ -59,7 +60,7 @@ export const TARGETS = [
   ["geometry/cut-warnings.ts", [t("cut-warnings"), ...EVALUATION]],
   ["geometry/warnings.ts", [t("warnings"), ...EVALUATION]],
   ["geometry/verdict.ts", [t("verdict"), ...EVALUATION]],
-  ["geometry/kit-checks.ts", [t("kit-checks"), ...EVALUATION]],
+  ["geometry/kit-checks.ts", [t("kit-checks"), t("ports"), t("crank"), ...EVALUATION]],
   ["geometry/kit-cut.ts", [t("kit-cut"), t("fit-cases"), t("evaluate-kit")]],
   ["geometry/evaluate-kit.ts", [t("evaluate-kit"), t("fit-cases")]],
   ["geometry/evaluate.ts", EVALUATION],
@@ -113,6 +114,24 @@ const detected = (c) => c.Killed + c.Timeout;
 const valid = (c) => detected(c) + c.Survived + c.NoCoverage;
 const percent = (c) => (valid(c) === 0 ? 100 : (100 * detected(c)) / valid(c));
 
+/** Each mutant of a file that no test detected, as "file:line:column mutator  original → replacement". */
+function survivors(file) {
+  const path = root + reportOf(file);
+  if (!existsSync(path)) return [];
+  const entry = JSON.parse(readFileSync(path, "utf8")).files?.[file];
+  if (!entry) return [];
+  const lines = entry.source.split("\n");
+  return entry.mutants
+    .filter((m) => m.status === "Survived" || m.status === "NoCoverage")
+    .sort((a, b) => a.location.start.line - b.location.start.line || a.location.start.column - b.location.start.column)
+    .map((m) => {
+      const { start, end } = m.location;
+      const original = start.line === end.line ? lines[start.line - 1].slice(start.column - 1, end.column - 1) : `${lines[start.line - 1].slice(start.column - 1)}…`;
+      const one = (text) => text.replace(/\s+/g, " ").slice(0, 100);
+      return `${file}:${start.line}:${start.column} ${m.status === "NoCoverage" ? "(no coverage) " : ""}${m.mutatorName}  ${one(original)} → ${one(m.replacement ?? "")}`;
+    });
+}
+
 function table() {
   const rows = [];
   const total = { Killed: 0, Timeout: 0, Survived: 0, NoCoverage: 0 };
@@ -141,7 +160,7 @@ function table() {
 
 async function main() {
   const args = process.argv.slice(2);
-  const reportOnly = args.includes("--report");
+  const reportOnly = args.includes("--report") || args.includes("--survivors");
   const asked = args.filter((a) => !a.startsWith("--"));
   const unknown = asked.filter((a) => !TARGETS.some(([file]) => file === a));
   if (unknown.length) {
@@ -158,6 +177,9 @@ async function main() {
       const seconds = ((performance.now() - t0) / 1000).toFixed(0);
       console.log(`${file}: ${c ? `${percent(c).toFixed(1)} %` : "no report"} in ${seconds} s${code ? ` (Stryker exited ${code}, see ${reportOf(file).replace(/\.json$/, ".log")})` : ""}`);
     }
+  }
+  if (args.includes("--survivors")) {
+    for (const [file] of TARGETS.filter(([file]) => asked.length === 0 || asked.includes(file))) for (const line of survivors(file)) console.log(line);
   }
   const { ok } = table();
   console.log(`wall time ${((performance.now() - started) / 60_000).toFixed(1)} min`);
