@@ -2,6 +2,9 @@
 // Chromium (WebGL on SwiftShader), steps the cut-diameter slider 100 times and prints the median and
 // p95 time from each input to the frame that shows it (performance.measure in the page), then the
 // first-load JavaScript of the studio page and of the Library page from the build's manifests.
+// The same-run baseline: a bare range input added to the same page, stepped by the same keys between the
+// studio's steps, with nothing listening but the clock: the floor of input to the next animation frame on
+// this machine at this moment. `-- --trace FILE` also writes a Chromium performance trace of the steps.
 // Needs a production build in NEXT_DIST_DIR (default .next). Usage: npm run bench:studio
 import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
@@ -13,6 +16,15 @@ import { ensureSecrets, freePort, root, startNext, waitFor } from "./lib.mjs";
 
 const dist = process.env.NEXT_DIST_DIR || ".next";
 const STEPS = 100;
+const traceAt = process.argv.indexOf("--trace");
+const traceFile = traceAt > 0 ? process.argv[traceAt + 1] : undefined;
+
+declare global {
+  interface Window {
+    /** The baseline input's steps seen in an animation frame. */
+    __floorFrames?: number;
+  }
+}
 
 /** The example study made harder: a polygon deck and a twelve-sided mouth, five invented kits. */
 function benchStudy(): StudyInput {
@@ -86,15 +98,35 @@ async function main() {
     await field.fill("52");
     await field.press("Enter");
     await page.waitForFunction(() => document.querySelector("[data-testid=verdict]")?.getAttribute("data-cut") === "52.00", undefined, { timeout: 30_000 });
-    await slider.focus();
+    // The baseline: a range input of the same page that only times its input to the next animation frame.
     await page.evaluate(() => {
+      const floor = document.createElement("input");
+      Object.assign(floor, { type: "range", min: "0", max: "1000", step: "1", value: "0" });
+      floor.dataset.testid = "bench-floor";
+      floor.setAttribute("aria-label", "benchmark baseline");
+      floor.style.cssText = "position:fixed;left:0;bottom:0;width:200px";
+      floor.addEventListener("input", (e) => {
+        const at = e.timeStamp;
+        requestAnimationFrame(() => {
+          performance.measure("floor:input-to-animation-frame", { start: at, duration: performance.now() - at });
+          window.__floorFrames = (window.__floorFrames ?? 0) + 1;
+        });
+      });
+      document.body.append(floor);
+      window.__floorFrames = 0;
       window.__fitFrames = [];
       for (const n of ["studio:input-to-frame", "studio:input-to-animation-frame", "studio:evaluate", "studio:scene-update", "studio:render"]) performance.clearMeasures(n);
     });
+    const floor = page.getByTestId("bench-floor");
+    if (traceFile) await browser.startTracing(page, { path: traceFile, categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
+    // Studio and baseline steps alternate, so both see the same load.
     for (let i = 1; i <= STEPS; i++) {
       await slider.press("ArrowRight");
       await page.waitForFunction((n) => (window.__fitFrames?.length ?? 0) >= n, i, { timeout: 10_000 });
+      await floor.press("ArrowRight");
+      await page.waitForFunction((n) => (window.__floorFrames ?? 0) >= n, i, { timeout: 10_000 });
     }
+    if (traceFile) await browser.stopTracing();
     const times = await page.evaluate(() => performance.getEntriesByName("studio:input-to-frame").map((e) => e.duration));
     const finalValue = await slider.inputValue();
     console.log(`studio, 5 kits on a polygon case, ${times.length} slider steps (52.00 → ${finalValue} mm):`);
@@ -103,6 +135,9 @@ async function main() {
       const xs = await page.evaluate((n) => performance.getEntriesByName(n).map((e) => e.duration), name);
       if (xs.length) console.log(`  ${label}: ${fmt(xs)} (${xs.length} samples)`);
     }
+    const floorTimes = await page.evaluate(() => performance.getEntriesByName("floor:input-to-animation-frame").map((e) => e.duration));
+    console.log(`  baseline, a bare range input on the same page, same keys in between: input to the next animation frame ${fmt(floorTimes)}`);
+    if (traceFile) console.log(`  trace of the steps written to ${traceFile}`);
   } finally {
     await browser.close();
     server.kill("SIGTERM");
