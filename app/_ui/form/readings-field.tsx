@@ -56,66 +56,27 @@ export function ReadingsField<FV extends FieldValues>({
         {label} <span className="text-ink-3 num">({units})</span>
       </legend>
       <ul className="flex flex-col gap-2">
-        {texts.map((t, i) => {
-          const err = errorAt(formState.errors, `${name}.${i}`);
-          const stamp = stamps?.(values[i], i);
-          const isWorst = worst?.[1] === i && good.length > 1;
-          return (
-            <li key={i} className="flex flex-col">
-              <div className="flex items-center gap-2">
-                <label htmlFor={`${baseId}-${i}`} className="w-20 shrink-0 text-sm text-ink-2">
-                  {itemLabel} {i + 1}
-                </label>
-                <input
-                  id={`${baseId}-${i}`}
-                  className={`field-input mt-0 num ${isWorst ? "border-accent" : ""}`}
-                  inputMode="decimal"
-                  autoComplete="off"
-                  value={t}
-                  aria-invalid={err ? true : undefined}
-                  aria-describedby={err ? `${baseId}-${i}-error` : undefined}
-                  onChange={(e) => set(texts.map((x, j) => (j === i ? e.target.value : x)))}
-                  onBlur={field.onBlur}
-                />
-                {isWorst ? <span className="shrink-0 rounded bg-accent-soft px-1.5 py-0.5 text-xs text-accent">counts</span> : null}
-                <button type="button" className="btn-quiet shrink-0" aria-label={`Remove ${itemLabel.toLowerCase()} ${i + 1}`} onClick={() => set(texts.filter((_, j) => j !== i))}>
-                  Remove
-                </button>
-              </div>
-              {err ? (
-                <p id={`${baseId}-${i}-error`} role="alert" className="field-error ml-22">
-                  {err}
-                </p>
-              ) : null}
-              {stamp ? (
-                <p className="field-hint ml-22">
-                  taken by {stamp.takenBy}, {dateText(stamp.takenAt, zone)}
-                </p>
-              ) : null}
-            </li>
-          );
-        })}
+        {texts.map((t, i) => (
+          <ReadingRow
+            key={i}
+            id={`${baseId}-${i}`}
+            label={`${itemLabel} ${i + 1}`}
+            text={t}
+            error={errorAt(formState.errors, `${name}.${i}`)}
+            stamp={stamps?.(values[i], i)}
+            counts={worst?.[1] === i && good.length > 1}
+            zone={zone}
+            onChange={(text) => set(texts.map((x, j) => (j === i ? text : x)))}
+            onBlur={field.onBlur}
+            onRemove={() => set(texts.filter((_, j) => j !== i))}
+          />
+        ))}
       </ul>
       <div className="flex flex-wrap items-center gap-3">
         <button type="button" className="btn-quiet" onClick={() => set([...texts, ""])}>
           {addLabel}
         </button>
-        <p id={`${baseId}-summary`} className="text-sm text-ink-2" data-testid={`${baseId}-summary`}>
-          {worst ? (
-            <>
-              The {counts} counts: <span className="num text-ink">{lengthLabel(worst[0], units)}</span>
-              {good.length > 1 ? <> ({itemLabel.toLowerCase()} {worst[1] + 1})</> : null}
-              {spread !== null ? (
-                <>
-                  {" "}
-                  · spread <span className="num">{lengthLabel(spread, units)}</span>
-                </>
-              ) : null}
-            </>
-          ) : (
-            (hint ?? "Read it at several spots; the worst reading counts.")
-          )}
-        </p>
+        <ReadingsSummary id={`${baseId}-summary`} units={units} counts={counts} itemLabel={itemLabel} hint={hint} worst={worst} spreadMm={spread} several={good.length > 1} />
       </div>
       {listError ? (
         <p role="alert" className="field-error">
@@ -123,5 +84,85 @@ export function ReadingsField<FV extends FieldValues>({
         </p>
       ) : null}
     </fieldset>
+  );
+}
+
+/** Which reading counts and the spread between them, or the hint while there is none. */
+function ReadingsSummary({ id, units, counts, itemLabel, hint, worst, spreadMm, several }: {
+  id: string;
+  units: LengthUnits;
+  counts: "largest" | "smallest";
+  itemLabel: string;
+  hint: string | undefined;
+  worst: readonly [valueMm: number, index: number] | null;
+  spreadMm: number | null;
+  several: boolean;
+}) {
+  return (
+    <p id={id} className="text-sm text-ink-2" data-testid={id}>
+      {worst ? (
+        <>
+          The {counts} counts: <span className="num text-ink">{lengthLabel(worst[0], units)}</span>
+          {several ? <> ({itemLabel.toLowerCase()} {worst[1] + 1})</> : null}
+          {spreadMm !== null ? (
+            <>
+              {" "}
+              · spread <span className="num">{lengthLabel(spreadMm, units)}</span>
+            </>
+          ) : null}
+        </>
+      ) : (
+        (hint ?? "Read it at several spots; the worst reading counts.")
+      )}
+    </p>
+  );
+}
+
+/** One reading: its field, marked when it is the one that counts, its message, and who took it when. */
+function ReadingRow({ id, label, text, error, stamp, counts, zone, onChange, onBlur, onRemove }: {
+  id: string;
+  label: string;
+  text: string;
+  error: string | undefined;
+  stamp: ReadingStamp;
+  counts: boolean;
+  zone: string;
+  onChange: (text: string) => void;
+  onBlur: () => void;
+  onRemove: () => void;
+}) {
+  return (
+    <li className="flex flex-col">
+      <div className="flex items-center gap-2">
+        <label htmlFor={id} className="w-20 shrink-0 text-sm text-ink-2">
+          {label}
+        </label>
+        <input
+          id={id}
+          className={`field-input mt-0 num ${counts ? "border-accent" : ""}`}
+          inputMode="decimal"
+          autoComplete="off"
+          value={text}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${id}-error` : undefined}
+          onChange={(e) => onChange(e.target.value)}
+          onBlur={onBlur}
+        />
+        {counts ? <span className="shrink-0 rounded bg-accent-soft px-1.5 py-0.5 text-xs text-accent">counts</span> : null}
+        <button type="button" className="btn-quiet shrink-0" aria-label={`Remove ${label.toLowerCase()}`} onClick={onRemove}>
+          Remove
+        </button>
+      </div>
+      {error ? (
+        <p id={`${id}-error`} role="alert" className="field-error ml-22">
+          {error}
+        </p>
+      ) : null}
+      {stamp ? (
+        <p className="field-hint ml-22">
+          taken by {stamp.takenBy}, {dateText(stamp.takenAt, zone)}
+        </p>
+      ) : null}
+    </li>
   );
 }

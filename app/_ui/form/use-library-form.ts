@@ -17,11 +17,8 @@ type Notice = { tone: "error" | "ok"; text: string } | null;
 /** Values a form keeps outside react-hook-form, and what they must do when the form switches units or saves. */
 export type OutsideValues<FV> = { merge: (values: FV) => FV; switchUnits: (to: LengthUnits) => void; saved: () => void };
 
-/**
- * The common machinery of a library form: texts kept as typed, validated on every change by the core's
- * schema, units switchable without losing anything, and a save whose refusal leaves every field as it was.
- */
-export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts: {
+/** What a library form is: its row, its schema, its first texts and how they become the core's input and the request. */
+export type LibraryFormOptions<FV extends FieldValues, S extends z.ZodType> = {
   kind: LibraryKind;
   id: string | null;
   version: number | null;
@@ -40,7 +37,13 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
    * save). It never throws: it answers where a new row's form goes instead of the list, or the notice to show.
    */
   afterSave?: (row: { id: string; name: string }, created: boolean) => Promise<{ goTo?: string; notice?: Notice } | void>;
-}) {
+};
+
+/**
+ * The common machinery of a library form: texts kept as typed, validated on every change by the core's
+ * schema, units switchable without losing anything, and a save whose refusal leaves every field as it was.
+ */
+export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts: LibraryFormOptions<FV, S>) {
   const router = useRouter();
   const [units, setUnitsState] = useState<LengthUnits>(opts.initialUnits);
   const [notice, setNotice] = useState<Notice>(null);
@@ -97,6 +100,8 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
           }
           setNotice({ tone: "error", text: `${error.message} Everything you typed is still here.` });
         } else {
+          // Not an answer of the API (the network, or a defect): the form keeps everything and says so; the cause is logged.
+          console.error("library form: the save did not go through", error);
           setNotice({ tone: "error", text: "The save did not go through; everything you typed is still here. Try again." });
         }
       }

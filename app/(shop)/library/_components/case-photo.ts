@@ -2,6 +2,7 @@
 
 import { createContext, useContext } from "react";
 import { callApi } from "@/app/_ui/api-client";
+import { uploadPhoto } from "@/app/_ui/query/photo-upload";
 import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
 import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
 
@@ -56,20 +57,7 @@ function reason(error: { message: string; fields?: Record<string, string> }): st
 
 /** Keeps a chosen photo with a saved case profile: asks for an upload address, sends the file, has it checked. */
 export async function keepCasePhoto(caseId: string, photo: ChosenPhoto, reference: PhotoReference | null): Promise<{ ok: true; id: string } | { ok: false; message: string }> {
-  const start = await callApi<{ id: string; uploadUrl: string; headers: Record<string, string> }>(`/api/v1/cases/${caseId}/photos`, {
-    body: { contentType: photo.contentType, sizeBytes: photo.file.size, widthPx: photo.widthPx, heightPx: photo.heightPx, ...(reference ? { reference } : {}) },
-  });
-  if (!start.ok) return { ok: false, message: reason(start.error) };
-  let put: Response;
-  try {
-    put = await fetch(start.data.uploadUrl, { method: "PUT", headers: start.data.headers, body: photo.file });
-  } catch {
-    return { ok: false, message: "The photo store could not be reached." };
-  }
-  if (!put.ok) return { ok: false, message: `The photo store refused the upload (${put.status}).` };
-  const done = await callApi(`/api/v1/cases/${caseId}/photos/${start.data.id}/complete`, { body: {} });
-  if (!done.ok) return { ok: false, message: done.error.message };
-  return { ok: true, id: start.data.id };
+  return uploadPhoto(`/api/v1/cases/${caseId}/photos`, photo.file, { contentType: photo.contentType, sizeBytes: photo.file.size, widthPx: photo.widthPx, heightPx: photo.heightPx, ...(reference ? { reference } : {}) });
 }
 
 /** Saves the reference points with the case profile's latest kept photo; nothing to do without one. */

@@ -5,34 +5,11 @@ import type { LengthUnits } from "@/geometry";
 import { dateText } from "@/model/dates";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
-import Link from "next/link";
 import type { CaseRow, KitRow, LibraryKind, RigRow, RowBase } from "../../../_ui/query/types";
+import { changedColumn, nameColumn } from "../../../_ui/table/row-columns";
 
 function common<T extends RowBase>(kind: LibraryKind, zone: string) {
-  const h = createColumnHelper<T>();
-  return {
-    name: h.accessor((r) => r.name, {
-      id: "name",
-      header: "Name",
-      cell: (c) => (
-        <span className="flex items-center gap-2">
-          <Link href={`/library/${kind}/${c.row.original.id}`} className="font-medium text-accent">
-            {c.getValue()}
-          </Link>
-          {c.row.original.archivedAt ? <span className="rounded bg-paper-2 px-1.5 text-xs text-ink-2">archived</span> : null}
-        </span>
-      ),
-    }),
-    updated: h.accessor((r) => r.updatedAt, {
-      id: "updatedAt",
-      header: "Changed",
-      cell: (c) => (
-        <span className="text-ink-2">
-          {dateText(c.getValue(), zone)} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
-        </span>
-      ),
-    }),
-  };
+  return { name: nameColumn<T>("Name", (r) => `/library/${kind}/${r.id}`), updated: changedColumn<T>((at) => dateText(at, zone)) };
 }
 
 const num = (text: string) => <span className="num">{text}</span>;

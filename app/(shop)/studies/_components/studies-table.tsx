@@ -13,6 +13,7 @@ import { exportStudyUrl } from "../../../_ui/query/studies/fetchers";
 import { useStudies, useStudyActions } from "../../../_ui/query/studies/use-studies";
 import type { StudyRow } from "../../../_ui/query/types";
 import { DataTable } from "../../../_ui/table/data-table";
+import { changedColumn, nameColumn } from "../../../_ui/table/row-columns";
 import { TableToolbar } from "../../../_ui/table/table-toolbar";
 import { useServerTable } from "../../../_ui/table/use-server-table";
 
@@ -20,27 +21,37 @@ const h = createColumnHelper<StudyRow>();
 
 /** The shop's studies: sorted, filtered and paged on the server; archived ones behind a switch. */
 export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | null) => void; onNew: () => void }) {
-  const router = useRouter();
   const t = useServerTable({ sort: "updatedAt", dir: "desc" });
   const list = useStudies(t.params);
+  const columns = useStudyColumns(onProblem);
+  const filtered = Boolean(t.params.q) || t.archived;
+  return (
+    <div className="flex flex-col gap-3">
+      <TableToolbar filter={t.filter} onFilter={t.setFilter} archived={t.archived} onArchived={t.setArchived} />
+      {list.isError ? <FormNotice tone="error">The studies could not be loaded: {errorText(list.error)}</FormNotice> : null}
+      <DataTable<StudyRow>
+        label="Studies"
+        testId="table-studies"
+        data={list.data?.items ?? []}
+        columns={columns}
+        loading={list.isPending}
+        getRowId={(r) => r.id}
+        server={{ rowCount: list.data?.total ?? 0, sorting: t.sorting, onSortingChange: t.setSorting, pagination: t.pagination, onPaginationChange: t.setPagination }}
+        empty={filtered ? <EmptyState title="No studies match">Clear the filter{t.archived ? " or switch off “Archived only”" : ""} to see every study.</EmptyState> : <NoStudiesYet onNew={onNew} />}
+      />
+    </div>
+  );
+}
+
+/** The table's columns: name, case, kits, whether a kit is chosen, when it changed, and its actions. */
+function useStudyColumns(onProblem: (t: string | null) => void) {
+  const router = useRouter();
   const { duplicate, archive } = useStudyActions((text) => onProblem(text));
   const zone = useShopTimeZone();
-
-  const columns = useMemo<ColumnDef<StudyRow, unknown>[]>(
+  return useMemo<ColumnDef<StudyRow, unknown>[]>(
     () =>
       [
-        h.accessor("name", {
-          id: "name",
-          header: "Study",
-          cell: (c) => (
-            <span className="flex items-center gap-2">
-              <Link href={`/studies/${c.row.original.id}`} className="font-medium text-accent">
-                {c.getValue()}
-              </Link>
-              {c.row.original.archivedAt ? <span className="rounded bg-paper-2 px-1.5 text-xs text-ink-2">archived</span> : null}
-            </span>
-          ),
-        }),
+        nameColumn<StudyRow>("Study", (r) => `/studies/${r.id}`),
         h.accessor((r) => r.caseName ?? "", { id: "caseName", header: "Case profile" }),
         h.display({ id: "kits", header: "Kits", enableSorting: false, cell: ({ row }) => <span className="num">{row.original.kitIds.length}</span> }),
         h.display({
@@ -49,15 +60,7 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
           enableSorting: false,
           cell: ({ row }) => (row.original.chosenKitId ? <span className="text-success">✓ yes</span> : <span className="text-ink-3">not yet</span>),
         }),
-        h.accessor("updatedAt", {
-          id: "updatedAt",
-          header: "Changed",
-          cell: (c) => (
-            <span className="text-ink-2">
-              {dateTimeText(c.getValue(), zone)} <span className="text-ink-3">· {c.row.original.createdBy?.name}</span>
-            </span>
-          ),
-        }),
+        changedColumn<StudyRow>((at) => dateTimeText(at, zone)),
         h.display({
           id: "actions",
           header: () => <span className="sr-only">Actions</span>,
@@ -96,43 +99,25 @@ export function StudiesTable({ onProblem, onNew }: { onProblem: (t: string | nul
       ] as ColumnDef<StudyRow, unknown>[],
     [duplicate, archive, onProblem, router, zone],
   );
+}
 
-  const filtered = Boolean(t.params.q) || t.archived;
+function NoStudiesYet({ onNew }: { onNew: () => void }) {
   return (
-    <div className="flex flex-col gap-3">
-      <TableToolbar filter={t.filter} onFilter={t.setFilter} archived={t.archived} onArchived={t.setArchived} />
-      {list.isError ? <FormNotice tone="error">The studies could not be loaded: {errorText(list.error)}</FormNotice> : null}
-      <DataTable<StudyRow>
-        label="Studies"
-        testId="table-studies"
-        data={list.data?.items ?? []}
-        columns={columns}
-        loading={list.isPending}
-        getRowId={(r) => r.id}
-        server={{ rowCount: list.data?.total ?? 0, sorting: t.sorting, onSortingChange: t.setSorting, pagination: t.pagination, onPaginationChange: t.setPagination }}
-        empty={
-          filtered ? (
-            <EmptyState title="No studies match">Clear the filter{t.archived ? " or switch off “Archived only”" : ""} to see every study.</EmptyState>
-          ) : (
-            <EmptyState
-              title="No studies yet"
-              action={
-                <div className="flex gap-2">
-                  <button type="button" className="btn" onClick={onNew}>
-                    New study
-                  </button>
-                  <Link href="/library" className="btn-quiet no-underline">
-                    Go to the library
-                  </Link>
-                </div>
-              }
-            >
-              A study puts one case profile against one or more candidate kits. Add the case and the kits to the library first, then start a study here — or
-              import a study file.
-            </EmptyState>
-          )
-        }
-      />
-    </div>
+    <EmptyState
+      title="No studies yet"
+      action={
+        <div className="flex gap-2">
+          <button type="button" className="btn" onClick={onNew}>
+            New study
+          </button>
+          <Link href="/library" className="btn-quiet no-underline">
+            Go to the library
+          </Link>
+        </div>
+      }
+    >
+      A study puts one case profile against one or more candidate kits. Add the case and the kits to the library first, then start a study here — or
+      import a study file.
+    </EmptyState>
   );
 }

@@ -1,11 +1,9 @@
 "use client";
 
-import { useRouter } from "next/navigation";
-import { useState } from "react";
 import type { JobView } from "@/db/jobs";
 import { STATUS_LABEL, type JobStatus } from "@/model/job-status";
-import { callApi } from "../../../../_ui/api-client";
 import { FormNotice } from "../../../../_ui/field";
+import { useJobMoves } from "./use-job-moves";
 
 const VERB: Partial<Record<string, string>> = {
   "intake>planned": "Mark planned",
@@ -38,48 +36,7 @@ function reasonLabel(job: JobView): string {
 
 /** The moves this person may make from here, the reason when one is needed, and sharing with the customer. */
 export function JobActions({ job, role, hasPlan }: { job: JobView; role: string; hasPlan: boolean }) {
-  const router = useRouter();
-  const [reason, setReason] = useState("");
-  const [pending, setPending] = useState<string | null>(null);
-  const [notice, setNotice] = useState<{ tone: "ok" | "error"; text: string } | null>(null);
-  const [reasonFor, setReasonFor] = useState<JobStatus | null>(null);
-
-  async function move(to: JobStatus) {
-    if (job.movesNeedingReason.includes(to) && !reason.trim()) {
-      setReasonFor(to);
-      setNotice({ tone: "error", text: "Say why in the box below; the reason is kept in the job's history." });
-      return;
-    }
-    setPending(to);
-    const res = await callApi(`/api/v1/jobs/${job.id}/move`, { body: { to, ...(reason.trim() ? { reason } : {}) } });
-    setPending(null);
-    if (!res.ok) {
-      setNotice({ tone: "error", text: res.error.message });
-      return;
-    }
-    setReason("");
-    setReasonFor(null);
-    setNotice({ tone: "ok", text: `The job is now ${STATUS_LABEL[to].toLowerCase()}.` });
-    router.refresh();
-  }
-
-  async function share() {
-    setPending("share");
-    const res = await callApi<{ invited: boolean }>(`/api/v1/jobs/${job.id}/share`, { body: {} });
-    setPending(null);
-    if (!res.ok) {
-      setNotice({ tone: "error", text: res.error.message });
-      return;
-    }
-    setNotice({
-      tone: "ok",
-      text: res.data.invited
-        ? `Shared: ${job.customer.email} was invited into the shop as a customer; the mail carries the link.`
-        : `Shared: ${job.customer.email} has the link to the plan.`,
-    });
-    router.refresh();
-  }
-
+  const { reason, setReason, pending, notice, reasonFor, move, share } = useJobMoves(job);
   // Verifying is offered beside the readings, and only once they are within the plan: readings outside it are the
   // owner's decision with a reason (the form under them), missing readings are recorded first.
   const moves = job.moves.filter((to) => !(to === "approved" && role !== "owner") && !(to === "verified" && job.status === "machined" && job.verification?.verdict !== "pass"));
@@ -87,16 +44,7 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
   const waiting = job.status === "planned" && role !== "owner" && !job.ownEngine;
   const asksReason = moves.some((to) => job.movesNeedingReason.includes(to));
   // Nothing to do from here (a closed job): no empty box, a one-line note instead.
-  if (moves.length === 0 && !canShare && !waiting) {
-    const closed = job.status === "closed";
-    if (!closed && !notice) return null;
-    return (
-      <div className="flex flex-col gap-2">
-        {closed ? <p className="text-sm text-ink-2" data-testid="job-closed">This job is closed.</p> : null}
-        {notice && !(closed && notice.tone === "ok") ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
-      </div>
-    );
-  }
+  if (moves.length === 0 && !canShare && !waiting) return <NothingToDo closed={job.status === "closed"} notice={notice} />;
   return (
     <div className="card flex flex-col gap-3 p-4">
       <div className="flex flex-wrap items-center gap-2">
@@ -119,6 +67,17 @@ export function JobActions({ job, role, hasPlan }: { job: JobView; role: string;
         </div>
       ) : null}
       {notice ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
+    </div>
+  );
+}
+
+/** A job with no move left: a closed job says so; otherwise only what the last action said, if anything. */
+function NothingToDo({ closed, notice }: { closed: boolean; notice: { tone: "ok" | "error"; text: string } | null }) {
+  if (!closed && !notice) return null;
+  return (
+    <div className="flex flex-col gap-2">
+      {closed ? <p className="text-sm text-ink-2" data-testid="job-closed">This job is closed.</p> : null}
+      {notice && !(closed && notice.tone === "ok") ? <FormNotice tone={notice.tone}>{notice.text}</FormNotice> : null}
     </div>
   );
 }
