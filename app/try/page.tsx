@@ -3,7 +3,7 @@ import Link from "next/link";
 import { evaluateStudy, safeParseStudy } from "@/geometry";
 import example from "@/public/examples/study.json";
 import { Mark } from "../_ui/mark";
-import { TryStudio } from "./try-studio";
+import { TryStudioLater } from "./try-studio-later";
 
 export const metadata: Metadata = {
   title: "Try the fit studio",
@@ -44,7 +44,7 @@ export default function TryPage() {
             {fit.error}
           </p>
         ) : (
-          <TryStudio study={fit.study} result={fit.result} />
+          <TryStudioLater study={fit.study} result={fit.result} />
         )}
       </main>
     </div>

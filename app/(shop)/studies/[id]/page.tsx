@@ -3,15 +3,17 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { AccessError } from "@/db/access";
 import { SHOP_STAFF } from "@/db/roles";
-import { getStudyWithRows } from "@/db/studies";
+import { getSettings } from "@/db/settings";
+import { getStudyWithRows, studyHistory } from "@/db/studies";
 import { requirePage } from "../../../_ui/guard";
 import { QueryProvider } from "../../../_ui/query/provider";
 import { getServerQueryClient } from "../../../_ui/query/server";
 import { libraryKeys } from "../../../_ui/query/library/keys";
+import { settingsKeys } from "../../../_ui/query/settings/keys";
 import { studyKeys } from "../../../_ui/query/studies/keys";
 import type { StudyDetail } from "../../../_ui/query/types";
 import { StudyJobs } from "../../jobs/_components/study-jobs";
-import { StudyEditor } from "./_components/study-editor";
+import { StudyEditorLater } from "./_components/study-editor-later";
 
 export const metadata: Metadata = { title: "Study" };
 
@@ -27,6 +29,11 @@ export default async function StudyPage({ params }: { params: Promise<{ id: stri
     if (rows.case) qc.setQueryData(libraryKeys.detail("cases", rows.case.id), rows.case);
     for (const kit of rows.kits) qc.setQueryData(libraryKeys.detail("kits", kit.id), kit);
     if (rows.rig) qc.setQueryData(libraryKeys.detail("rigs", rows.rig.id), rows.rig);
+    // The shop's limits and the study's history too, so the page the server renders is the page the browser
+    // keeps: no second evaluation and no panel filling in once the browser has fetched them itself.
+    const [settings, history] = await Promise.all([getSettings(caller), studyHistory(caller, id)]);
+    qc.setQueryData(settingsKeys.shop(), settings);
+    qc.setQueryData(studyKeys.history(id), history);
   } catch (error) {
     if (error instanceof AccessError && error.code === "not_found") notFound();
     throw error;
@@ -35,7 +42,7 @@ export default async function StudyPage({ params }: { params: Promise<{ id: stri
     <QueryProvider>
       <StudyJobs caller={caller} studyId={id} />
       <HydrationBoundary state={dehydrate(qc)}>
-        <StudyEditor id={id} units={caller.units} />
+        <StudyEditorLater id={id} units={caller.units} />
       </HydrationBoundary>
     </QueryProvider>
   );
