@@ -18,7 +18,7 @@ export interface StudMatch {
   readonly sharedCaseStuds: string[];
 }
 
-/** Each kit stud against its nearest case stud: offset = |p_kit − p_case|, ok when ≤ tolerance and no case stud serves two kit studs. */
+/** Each kit stud against its nearest case stud (the first listed on a tie): offset = |p_kit − p_case|, ok when ≤ tolerance and no case stud serves two kit studs. */
 export function matchStudPattern(kitStuds: readonly Stud[], caseStuds: readonly Stud[], studToleranceMm: number, toleranceMm: number): StudMatch {
   const claims = new Map<string, number>();
   const studs = kitStuds.map((k) => {

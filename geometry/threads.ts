@@ -1,20 +1,20 @@
 import { ThreadDesignationError } from "./errors";
 
 /**
- * ISO 262 selected sizes: coarse pitch and fine pitches, mm. M7 (1.0) and M8 (1.25 coarse, 1.0 fine) are
- * checked in tests against ISO 262; the other rows are from memory.
+ * ISO 262 selected sizes and their coarse pitch, mm: the pitch a designation without one ("M8") means. M7 (1.0)
+ * and M8 (1.25) are checked in tests against ISO 262; the other rows are from memory.
  */
-export const ISO_262_PITCHES_MM: Readonly<Record<number, { coarse: number; fine: readonly number[] }>> = {
-  3: { coarse: 0.5, fine: [] },
-  4: { coarse: 0.7, fine: [] },
-  5: { coarse: 0.8, fine: [] },
-  6: { coarse: 1, fine: [] },
-  7: { coarse: 1, fine: [] },
-  8: { coarse: 1.25, fine: [1] },
-  10: { coarse: 1.5, fine: [1.25, 1] },
-  12: { coarse: 1.75, fine: [1.5, 1.25] },
-  14: { coarse: 2, fine: [1.5] },
-  16: { coarse: 2, fine: [1.5] },
+export const ISO_262_PITCHES_MM: Readonly<Record<number, { coarse: number }>> = {
+  3: { coarse: 0.5 },
+  4: { coarse: 0.7 },
+  5: { coarse: 0.8 },
+  6: { coarse: 1 },
+  7: { coarse: 1 },
+  8: { coarse: 1.25 },
+  10: { coarse: 1.5 },
+  12: { coarse: 1.75 },
+  14: { coarse: 2 },
+  16: { coarse: 2 },
 };
 
 /** A parsed ISO metric thread. */
