@@ -2,7 +2,7 @@
 
 import { CaseProfileSchema, type LengthUnits } from "@/geometry";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { FormProvider, useWatch } from "react-hook-form";
+import { FormProvider, useFormContext, useWatch } from "react-hook-form";
 import { FormNotice } from "../../../_ui/field";
 import type { CaseRow } from "../../../_ui/query/types";
 import { caseDefaults, caseDoc, caseFieldDefaults, caseToCore, mergeCase, type CaseFormValues } from "./case-values";
@@ -21,6 +21,7 @@ import { CasePlan } from "./shapes/case-plan";
 import { MEASURES } from "./shapes/measure-panel";
 import { StorePocketsField, StoreStudsField } from "./shapes/store-lists";
 import { StoreOutlineField } from "./shapes/store-outline-field";
+import type { ShapeStore } from "./shapes/shape-store";
 import { useShapeForm } from "./shapes/use-shape-form";
 import { useShapeValidation } from "./shapes/use-shape-validation";
 
@@ -55,7 +56,6 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
   });
   const scope = useRef<HTMLFormElement>(null);
   const validate = useShapeValidation(store, form);
-  const errors = form.formState.errors;
   const stamps = (_v: number | undefined, i: number) => {
     const r = row?.mouthReadingsMm?.[i];
     return r ? { takenBy: r.takenBy.name, takenAt: r.takenAt } : undefined;
@@ -68,65 +68,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
         {photo.notice && !notice ? <FormNotice tone="error">{photo.notice}</FormNotice> : null}
         <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
           <div className="flex min-w-0 flex-col gap-6">
-            <FormSection title="Name">
-              <TextField<CaseFormValues> name="name" label="Name" hint="Engine family and variant, e.g. “50 cc horizontal, four-stud”." className="md:col-span-2" />
-              <TextField<CaseFormValues> name="notes" label="Notes" className="md:col-span-2" />
-            </FormSection>
-            <FormSection title="Deck outline">
-              <div className="md:col-span-2">
-                <StoreOutlineField store={store} shapeKey="deck" path="deck" label="Deck" measures={MEASURES.deck} mirror="flip" />
-              </div>
-            </FormSection>
-            <FormSection title="Mouth">
-              <div className="md:col-span-2">
-                <StoreOutlineField
-                  store={store}
-                  shapeKey="mouth"
-                  path="mouth.outline"
-                  label="Mouth opening"
-                  circleSlot={
-                    <div className="min-w-72">
-                      <ReadingsField<CaseFormValues>
-                        name="mouthReadingsMm"
-                        label="Mouth diameter readings"
-                        units={units}
-                        counts="smallest"
-                        stamps={stamps}
-                        extraError={errorAt(errors, "mouth.outline.diameterMm")}
-                        hint="Read the mouth with calipers at several angles; the smallest reading counts."
-                      />
-                    </div>
-                  }
-                />
-              </div>
-              <TextField<CaseFormValues> name="mouth.depthMm" label="Mouth depth before it opens into the crank chamber" unit={units} numeric />
-            </FormSection>
-            <FormSection title="Studs">
-              <div className="md:col-span-2">
-                <StoreStudsField store={store} />
-              </div>
-              <TextField<CaseFormValues> name="studHoleDiameterMm" label="Stud hole diameter" unit={units} numeric />
-              <TextField<CaseFormValues> name="studThread" label="Stud thread" placeholder="M7 or M7x1" hint="ISO metric, optional." />
-            </FormSection>
-            <FormSection title="Transfer passages and pockets">
-              <div className="md:col-span-2">
-                <StorePocketsField store={store} word="passage" />
-              </div>
-            </FormSection>
-            <FormSection title="Engine">
-              <TextField<CaseFormValues> name="stockBoreMm" label="Stock bore" unit={units} numeric />
-              <TextField<CaseFormValues> name="strokeMm" label="Stroke" unit={units} numeric />
-              <TextField<CaseFormValues> name="cylinders" label="Cylinders" numeric />
-              <TextField<CaseFormValues> name="densityGPerCm3" label="Case alloy density" unit="g/cm³" numeric hint="Blank: 2.67 g/cm³, a common cast aluminium." />
-            </FormSection>
-            <FormSection title="Crank chamber (optional)">
-              <p className="text-sm text-ink-2 md:col-span-2">
-                With all three lengths the study checks how close the skirt comes to the crank webs; leave all three empty to skip that check.
-              </p>
-              <TextField<CaseFormValues> name="crank.deckToAxisMm" label="Deck to crank axis" unit={units} numeric hint="From the deck face down to the crankshaft's centre line." />
-              <TextField<CaseFormValues> name="crank.webRadiusMm" label="Crank web radius" unit={units} numeric hint="Outer radius of the webs about the crank axis." />
-              <TextField<CaseFormValues> name="crank.webSpanMm" label="Crank web span" unit={units} numeric hint="Across both webs along the crank axis, outer face to outer face." />
-            </FormSection>
+            <CaseFields store={store} units={units} stamps={stamps} />
           </div>
           <div className="min-w-0">
             <CasePhotoContext.Provider value={photo.link}>
@@ -138,6 +80,76 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
         <SaveBar busy={busy} isNew={!row} backHref="/library?kind=cases" dirty={form.formState.isDirty || shapesDirty || photo.dirty} />
       </form>
     </FormProvider>
+  );
+}
+
+type Stamp = { takenBy: string; takenAt: string } | undefined;
+
+/** The fields of a case profile, section by section: the shapes from the shape store, the rest from the form. */
+function CaseFields({ store, units, stamps }: { store: ShapeStore; units: LengthUnits; stamps: (v: number | undefined, i: number) => Stamp }) {
+  const errors = useFormContext<CaseFormValues>().formState.errors;
+  return (
+    <>
+      <FormSection title="Name">
+        <TextField<CaseFormValues> name="name" label="Name" hint="Engine family and variant, e.g. “50 cc horizontal, four-stud”." className="md:col-span-2" />
+        <TextField<CaseFormValues> name="notes" label="Notes" className="md:col-span-2" />
+      </FormSection>
+      <FormSection title="Deck outline">
+        <div className="md:col-span-2">
+          <StoreOutlineField store={store} shapeKey="deck" path="deck" label="Deck" measures={MEASURES.deck} mirror="flip" />
+        </div>
+      </FormSection>
+      <FormSection title="Mouth">
+        <div className="md:col-span-2">
+          <StoreOutlineField
+            store={store}
+            shapeKey="mouth"
+            path="mouth.outline"
+            label="Mouth opening"
+            circleSlot={
+              <div className="min-w-72">
+                <ReadingsField<CaseFormValues>
+                  name="mouthReadingsMm"
+                  label="Mouth diameter readings"
+                  units={units}
+                  counts="smallest"
+                  stamps={stamps}
+                  extraError={errorAt(errors, "mouth.outline.diameterMm")}
+                  hint="Read the mouth with calipers at several angles; the smallest reading counts."
+                />
+              </div>
+            }
+          />
+        </div>
+        <TextField<CaseFormValues> name="mouth.depthMm" label="Mouth depth before it opens into the crank chamber" unit={units} numeric />
+      </FormSection>
+      <FormSection title="Studs">
+        <div className="md:col-span-2">
+          <StoreStudsField store={store} />
+        </div>
+        <TextField<CaseFormValues> name="studHoleDiameterMm" label="Stud hole diameter" unit={units} numeric />
+        <TextField<CaseFormValues> name="studThread" label="Stud thread" placeholder="M7 or M7x1" hint="ISO metric, optional." />
+      </FormSection>
+      <FormSection title="Transfer passages and pockets">
+        <div className="md:col-span-2">
+          <StorePocketsField store={store} word="passage" />
+        </div>
+      </FormSection>
+      <FormSection title="Engine">
+        <TextField<CaseFormValues> name="stockBoreMm" label="Stock bore" unit={units} numeric />
+        <TextField<CaseFormValues> name="strokeMm" label="Stroke" unit={units} numeric />
+        <TextField<CaseFormValues> name="cylinders" label="Cylinders" numeric />
+        <TextField<CaseFormValues> name="densityGPerCm3" label="Case alloy density" unit="g/cm³" numeric hint="Blank: 2.67 g/cm³, a common cast aluminium." />
+      </FormSection>
+      <FormSection title="Crank chamber (optional)">
+        <p className="text-sm text-ink-2 md:col-span-2">
+          With all three lengths the study checks how close the skirt comes to the crank webs; leave all three empty to skip that check.
+        </p>
+        <TextField<CaseFormValues> name="crank.deckToAxisMm" label="Deck to crank axis" unit={units} numeric hint="From the deck face down to the crankshaft's centre line." />
+        <TextField<CaseFormValues> name="crank.webRadiusMm" label="Crank web radius" unit={units} numeric hint="Outer radius of the webs about the crank axis." />
+        <TextField<CaseFormValues> name="crank.webSpanMm" label="Crank web span" unit={units} numeric hint="Across both webs along the crank axis, outer face to outer face." />
+      </FormSection>
+    </>
   );
 }
 

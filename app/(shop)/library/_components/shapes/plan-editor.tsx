@@ -1,7 +1,6 @@
 "use client";
 
-import morphdom from "morphdom";
-import { useLayoutEffect, useMemo, useRef, useState } from "react";
+import { useMemo, useRef } from "react";
 import { useStore } from "zustand";
 import type { ShapeIssue } from "@/geometry/shapes";
 import { editDrawing, type Frame } from "@/scene/drawing/plan-edit";
@@ -9,6 +8,7 @@ import { useZoom, ZoomBar } from "@/app/_ui/capture/use-zoom";
 import { windowOf, type View } from "@/app/_ui/capture/zoom";
 import { usePlanDrag } from "./plan-drag";
 import { usePlanKeys } from "./plan-keys";
+import { usePatchedSvg } from "./use-patched-svg";
 import { docIssues, docShapes, type DocExtras } from "./read-doc";
 import type { ShapeStore } from "./shape-store";
 
@@ -54,31 +54,8 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
   // A point pressed or held by the pointer: the plan is not redrawn meanwhile, so the pressed element stays
   // on the page and keeps receiving the pointer's moves (see plan-drag.ts).
   const held = useRef(false);
-  // React writes the first drawing only; every later one is patched into it in place, so the element under
-  // the pointer stays on the page. (Chromium drops the pointer's next events, a press included, when the
-  // element they were aimed at is replaced while they are dispatched: a hover that redraws the plan would
-  // otherwise swallow the click or drag that follows it.)
-  const [first] = useState(() => ({ __html: drawing.svg }));
-  const shown = useRef(first.__html);
   const zoom = useZoom(host);
-
-  useLayoutEffect(() => {
-    const svg = host.current?.querySelector("svg");
-    if (!svg || shown.current === drawing.svg) return;
-    morphdom(svg, drawing.svg, { getNodeKey: nodeKey });
-    shown.current = drawing.svg;
-  }, [drawing.svg]);
-  // The patch resets the view: it is set again, and a point that had the focus gets it back.
-  useLayoutEffect(() => {
-    host.current?.querySelector("svg")?.setAttribute("viewBox", viewBoxOf(drawing.frame, zoom.view));
-  }, [drawing.svg, drawing.frame, zoom.view]);
-  useLayoutEffect(() => {
-    const key = focusKey.current;
-    const active = document.activeElement;
-    if (!key || (active && active !== document.body && !host.current?.contains(active))) return;
-    const el = host.current?.querySelector<SVGElement>(`[data-key="${CSS.escape(key)}"]`);
-    if (el && el !== active) el.focus({ preventScroll: true });
-  }, [drawing.svg]);
+  const first = usePatchedSvg(host, drawing.svg, viewBoxOf(drawing.frame, zoom.view), focusKey);
 
   const onGrab = (key: string) => {
     focusKey.current = key;
@@ -125,12 +102,6 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
     </div>
   );
 }
-
-/** What matches an element of the drawing with its counterpart in the next one: its shape or point and its part. */
-const nodeKey = (node: Node) => {
-  const key = node instanceof Element ? node.getAttribute("data-key") : null;
-  return key ? `${node.nodeName}|${(node as Element).getAttribute("data-kind") ?? ""}|${key}` : undefined;
-};
 
 /** How the plan is worked, and the problems of the shapes in words. */
 function PlanNotes({ units, issues }: { units: string; issues: readonly ShapeIssue[] }) {
