@@ -52,7 +52,7 @@ export const TARGETS = [
   ["geometry/threads.ts", [t("studs-threads"), t("sources")]],
   ["geometry/vec.ts", [t("vec"), t("wall"), t("polygon-measures"), t("alignment")]],
   ["geometry/outline.ts", [t("outline"), t("area"), t("shapes"), t("fit-cases")]],
-  ["geometry/flatten-adapter.ts", [t("area")]],
+  ["geometry/flatten-adapter.ts", [t("flatten-adapter"), t("area")]],
   ["geometry/holder.ts", [t("holder")]],
   ["geometry/rig-setup.ts", [t("rig-setup")]],
   ["geometry/rig.ts", [t("rig"), t("sources")]],

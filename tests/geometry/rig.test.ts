@@ -120,3 +120,19 @@ describe("the setting to dial in", () => {
     expect(rig.cutAtSettingMm!).toBeGreaterThanOrEqual(55.13 - 1e-9);
   });
 });
+
+describe("a bit at the ends of its reach", () => {
+  // A bit calibrated at 35 mm reaching 52.5–62 mm (common practice, no published source): the ends themselves are
+  // within reach, with no computing tolerance at all.
+  const rig = { bitLengthMm: 35, calibration: { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 } };
+
+  it("reaches a cut of exactly its smallest and of exactly its largest diameter", () => {
+    expect(checkBit(52.5, rig, 0)).toMatchObject({ reaches: true, grindOffMm: 0, tooShortByMm: 0 });
+    expect(checkBit(62, rig, 0)).toMatchObject({ reaches: true, grindOffMm: 0, tooShortByMm: 0 });
+  });
+
+  it("just past either end it does not: 0.25 mm too long for a 52 mm cut, 0.5 mm too short for a 63 mm cut", () => {
+    expect(checkBit(52, rig, 0)).toMatchObject({ reaches: false, grindOffMm: 0.25, tooShortByMm: 0 });
+    expect(checkBit(63, rig, 0)).toMatchObject({ reaches: false, grindOffMm: 0, tooShortByMm: 0.5 });
+  });
+});
