@@ -1,15 +1,15 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import { and, desc, eq, ne } from "drizzle-orm";
 import { pointsOutsidePhoto, PhotoReferenceSchema, type PhotoReference } from "@/model/schemas/case-photos";
-import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
+import type { PhotoType } from "@/model/photo-files";
 import { AccessError, type Caller } from "./access";
 import { getDb, type Db } from "./client";
 import { DataError } from "./errors";
 import { SHOP_STAFF } from "./roles";
 import { readColumn } from "./rows";
 import * as schema from "./schema";
-import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNotConfigured } from "./storage";
+import { describeError, presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
+import { deleteObject, presignDownload, StorageNotConfigured } from "./storage";
 
 // Photos of a case profile's deck, traced over in the case form. Same path as a job's photos: the browser asks
 // for an upload URL, PUTs the file straight to storage, then asks the server to check it by its first bytes
@@ -36,7 +36,7 @@ function assertStaff(caller: Caller) {
 /** An object store that is not set up or did not answer: the caller is told to try later (503); the cause is logged for the shop's admin. */
 function storageError(error: unknown): never {
   if (error instanceof StorageNotConfigured) throw new DataError("storage_unavailable", error.message);
-  console.error("case photos: the object store failed:", describe(error));
+  console.error("case photos: the object store failed:", describeError(error));
   throw new DataError("storage_unavailable", "The photo store did not answer; nothing was changed. Try again in a moment.");
 }
 
@@ -97,9 +97,7 @@ export async function requestCasePhotoUpload(
   body: { contentType: PhotoType; sizeBytes: number; widthPx?: number; heightPx?: number; reference?: PhotoReference },
 ) {
   await caseOr404(caller, caseId);
-  const id = randomUUID();
-  const objectKey = `shops/${caller.shopId}/cases/${caseId}/${id}.${photoExtension(body.contentType)}`;
-  const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
+  const { id, objectKey, answer } = await presignPhotoUpload(`shops/${caller.shopId}/cases/${caseId}`, body, storageError);
   const db = await getDb();
   await db.insert(schema.casePhoto).values({
     id,
@@ -114,28 +112,16 @@ export async function requestCasePhotoUpload(
     state: "pending",
     createdBy: caller.userId,
   });
-  return { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } };
+  return answer;
 }
 
 /** Checks an uploaded file: an accepted image type by its bytes and within the size limit; else it is deleted and refused. */
 export async function completeCasePhotoUpload(caller: Caller, caseId: string, photoId: string): Promise<CasePhotoView> {
   const p = await photoOr404(caller, caseId, photoId);
   if (p.state !== "pending") return view(p);
-  const found = await inspectObject(p.objectKey).catch(storageError);
-  if (!found) throw new DataError("not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
-  const reason = uploadedPhotoProblem(found.sizeBytes, found.head, p.contentType);
   const db = await getDb();
-  if (reason) {
-    await deleteObject(p.objectKey).catch((error: unknown) => {
-      // The refusal stands either way: a refused row is never presigned for download again, so the file
-      // left behind is unreachable; it costs only storage until the store's own clean-up.
-      console.warn(`case photo ${p.id} refused: its file could not be deleted from the object store; the refusal stands.`, describe(error));
-    });
-    await db.update(schema.casePhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(schema.casePhoto.id, p.id));
-    throw new DataError("photo_refused", reason);
-  }
-  await db.update(schema.casePhoto).set({ state: "ready", sizeBytes: found.sizeBytes }).where(eq(schema.casePhoto.id, p.id));
-  return view({ ...p, state: "ready", sizeBytes: found.sizeBytes });
+  const sizeBytes = await settleUploadedPhoto(p, "case photo", storageError, (check) => db.update(schema.casePhoto).set(check).where(eq(schema.casePhoto.id, p.id)));
+  return view({ ...p, state: "ready", sizeBytes });
 }
 
 /** A fresh download URL for one checked photo. */
@@ -165,10 +151,6 @@ export async function setCasePhotoReference(caller: Caller, caseId: string, phot
 }
 
 /** An error's words for a log line, without its stack. */
-function describe(error: unknown): string {
-  return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
-}
-
 /**
  * Removes stored photo files whose rows are already gone. A file that cannot be removed is logged and
  * left: with its row deleted nothing links to it or presigns it any more, so it is unreachable and costs
@@ -177,7 +159,7 @@ function describe(error: unknown): string {
 export async function removeCasePhotoFiles(objectKeys: readonly string[]): Promise<void> {
   for (const key of objectKeys) {
     await deleteObject(key).catch((error: unknown) => {
-      console.warn(`case photo file ${key}: its row is deleted but the file could not be removed from the object store; it is unreachable and is left.`, describe(error));
+      console.warn(`case photo file ${key}: its row is deleted but the file could not be removed from the object store; it is unreachable and is left.`, describeError(error));
     });
   }
 }

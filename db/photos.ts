@@ -1,14 +1,14 @@
 import "server-only";
-import { randomUUID } from "node:crypto";
 import { and, asc, eq } from "drizzle-orm";
 import { DataError } from "./errors";
-import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
+import type { PhotoType } from "@/model/photo-files";
 import { AccessError, type Caller } from "./access";
 import { getDb } from "./client";
 import { jobFor } from "./jobs";
 import { SHOP_STAFF } from "./roles";
 import * as jobs from "./schema-jobs";
-import { deleteObject, inspectObject, presignDownload, presignUpload, StorageNotConfigured } from "./storage";
+import { presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
+import { presignDownload, StorageNotConfigured } from "./storage";
 
 // Job photos in object storage. The browser asks for an upload URL, PUTs the file straight to storage,
 // then asks the server to check it: the type is read from the file's first bytes, never trusted from the
@@ -70,9 +70,7 @@ export async function requestUpload(
 ) {
   if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
   await jobFor(caller, jobId);
-  const id = randomUUID();
-  const objectKey = `shops/${caller.shopId}/jobs/${jobId}/${id}.${photoExtension(body.contentType)}`;
-  const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
+  const { id, objectKey, answer } = await presignPhotoUpload(`shops/${caller.shopId}/jobs/${jobId}`, body, storageError);
   const db = await getDb();
   await db.insert(jobs.jobPhoto).values({
     id,
@@ -87,7 +85,7 @@ export async function requestUpload(
     state: "pending",
     createdBy: caller.userId,
   });
-  return { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } };
+  return answer;
 }
 
 async function photoOr404(caller: Caller, jobId: string, photoId: string) {
@@ -107,20 +105,9 @@ export async function completeUpload(caller: Caller, jobId: string, photoId: str
   if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
   const p = await photoOr404(caller, jobId, photoId);
   if (p.state !== "pending") return photoView(p);
-  const found = await inspectObject(p.objectKey).catch(storageError);
-  if (!found) throw new DataError("not_uploaded", "Nothing was uploaded for this photo yet; upload the file, then try again.");
-  const reason = uploadedPhotoProblem(found.sizeBytes, found.head, p.contentType);
   const db = await getDb();
-  if (reason) {
-    await deleteObject(p.objectKey).catch((error: unknown) => {
-      // The row is marked refused below and never points at the file again, so a file left behind is only litter.
-      console.warn("photo refused: its file could not be deleted from the object store; the refusal stands.", error);
-    });
-    await db.update(jobs.jobPhoto).set({ state: "refused", refusedReason: reason, sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
-    throw new DataError("photo_refused", reason);
-  }
-  await db.update(jobs.jobPhoto).set({ state: "ready", sizeBytes: found.sizeBytes }).where(eq(jobs.jobPhoto.id, p.id));
-  return photoView({ ...p, state: "ready", sizeBytes: found.sizeBytes });
+  const sizeBytes = await settleUploadedPhoto(p, "job photo", storageError, (check) => db.update(jobs.jobPhoto).set(check).where(eq(jobs.jobPhoto.id, p.id)));
+  return photoView({ ...p, state: "ready", sizeBytes });
 }
 
 /** Marks a photo shared with the customer or not, or changes its caption. */

@@ -6,6 +6,7 @@ import { drizzle } from "drizzle-orm/libsql";
 import { fileURLToPath } from "node:url";
 import { databaseConfig } from "./config";
 import { loadLocalEnv } from "./env";
+import { applyMigrations } from "./migrate";
 import * as schema from "./schema";
 import { DEMO_PRICING, seedJobs } from "./seed-jobs";
 import { seedLibrary } from "./seed-library";
@@ -61,6 +62,20 @@ export async function seedEverything(db: SeedDb): Promise<number> {
   written += await seedLibrary(db, DEMO_SHOP.id, owner, builder);
   written += await seedJobs(db, DEMO_SHOP.id, { owner, builder, customer });
   return written;
+}
+
+/** A new file database at `url`, migrated, holding the demo shop, its people and its library (no jobs): what the benchmarks run against. */
+export async function seedBenchDatabase(url: string): Promise<void> {
+  await applyMigrations({ ...process.env, DATABASE_URL: url });
+  const client = createClient({ url });
+  try {
+    const [owner, builder] = DEMO_PEOPLE;
+    const db = drizzle(client, { schema });
+    await seedDemo(db);
+    await seedLibrary(db, DEMO_SHOP.id, owner, builder);
+  } finally {
+    client.close();
+  }
 }
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {

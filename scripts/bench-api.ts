@@ -14,8 +14,6 @@
 // Run with tsx's react-server condition (the data layer is server-only):
 //   tsx --conditions=react-server scripts/bench-api.ts
 import autocannon from "autocannon";
-import { createClient } from "@libsql/client";
-import { drizzle } from "drizzle-orm/libsql";
 import { spawn, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from "node:fs";
@@ -23,10 +21,8 @@ import { createServer } from "node:http";
 import { cpus, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { applyMigrations } from "../db/migrate";
-import * as schema from "../db/schema";
-import { DEMO_PEOPLE, DEMO_SHOP, seedDemo } from "../db/seed";
-import { DEMO_STUDIES, seedLibrary } from "../db/seed-library";
+import { DEMO_PEOPLE, DEMO_SHOP, seedBenchDatabase } from "../db/seed";
+import { DEMO_STUDIES } from "../db/seed-library";
 import { buildIsStale, freePort, root, run, startNext, stopProcesses, waitFor } from "./lib.mjs";
 
 const STUDY_ID = DEMO_STUDIES.find((s) => s.kitIds.length === 5)?.id ?? DEMO_STUDIES[0].id;
@@ -149,12 +145,7 @@ async function main() {
   try {
     if (!process.argv.includes("--no-build") && buildIsStale()) run("npx", ["next", "build"]);
     const databaseURL = `file:${join(dir, "bench.db")}`;
-    await applyMigrations({ ...process.env, DATABASE_URL: databaseURL });
-    const client = createClient({ url: databaseURL });
-    const db = drizzle(client, { schema });
-    await seedDemo(db);
-    await seedLibrary(db, DEMO_SHOP.id, DEMO_PEOPLE[0], DEMO_PEOPLE[1]);
-    client.close();
+    await seedBenchDatabase(databaseURL);
 
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;

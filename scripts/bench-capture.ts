@@ -5,17 +5,13 @@
 // corner moved through its x field with the plan hidden (the form alone). A benchmark, not a test: it
 // prints figures and fails only when a step does not show.
 // Needs a production build in NEXT_DIST_DIR (default .next). Usage: npm run bench:capture
-import { createClient } from "@libsql/client";
-import { drizzle } from "drizzle-orm/libsql";
 import { randomBytes } from "node:crypto";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { chromium, type Page } from "playwright-core";
-import { applyMigrations } from "../db/migrate";
-import * as schema from "../db/schema";
-import { DEMO_PEOPLE, DEMO_SHOP, seedDemo } from "../db/seed";
-import { DEMO_CASES, DEMO_KITS, seedLibrary } from "../db/seed-library";
+import { DEMO_PEOPLE, seedBenchDatabase } from "../db/seed";
+import { DEMO_CASES, DEMO_KITS } from "../db/seed-library";
 import { freePort, root, startNext, waitFor } from "./lib.mjs";
 
 const dist = process.env.NEXT_DIST_DIR || ".next";
@@ -132,12 +128,7 @@ async function main() {
   if (!existsSync(join(root, dist, "BUILD_ID"))) throw new Error(`no production build in ${dist}: run NEXT_DIST_DIR=${dist} npx next build first`);
   const dir = mkdtempSync(join(tmpdir(), "borewright-bench-"));
   const databaseURL = `file:${join(dir, "bench.db")}`;
-  await applyMigrations({ ...process.env, DATABASE_URL: databaseURL });
-  const seed = createClient({ url: databaseURL });
-  const db = drizzle(seed, { schema });
-  await seedDemo(db);
-  await seedLibrary(db, DEMO_SHOP.id, DEMO_PEOPLE[0], DEMO_PEOPLE[1]);
-  seed.close();
+  await seedBenchDatabase(databaseURL);
   const port = await freePort();
   const base = `http://127.0.0.1:${port}`;
   const server = startNext({ port, quiet: true, env: { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"), PAYMENTS: "off" } });

@@ -48,6 +48,9 @@ const MouthReadingsSchema = z.array(ReadingValueMmSchema).max(50, "Keep to 50 re
 
 // ── Create and update bodies ─────────────────────────────────────────────────────────────────────
 
+/** An update body: any of the create body's fields, and the version the change was made from. */
+const patchOf = <S extends z.ZodObject>(create: S) => create.partial().extend({ version: VersionSchema });
+
 export const CaseCreateSchema = z.strictObject({
   name: NameSchema,
   notes: NotesSchema.optional(),
@@ -55,29 +58,13 @@ export const CaseCreateSchema = z.strictObject({
   /** Mouth diameter readings; for a round mouth the smallest one is the diameter the core uses. */
   mouthReadingsMm: MouthReadingsSchema.optional(),
 });
-export const CasePatchSchema = z.strictObject({
-  version: VersionSchema,
-  name: NameSchema.optional(),
-  notes: NotesSchema.optional(),
-  data: CaseDataSchema.optional(),
-  mouthReadingsMm: MouthReadingsSchema.optional(),
-});
+export const CasePatchSchema = patchOf(CaseCreateSchema);
 
 export const KitCreateSchema = z.strictObject({ name: NameSchema, notes: NotesSchema.optional(), data: KitDataSchema });
-export const KitPatchSchema = z.strictObject({
-  version: VersionSchema,
-  name: NameSchema.optional(),
-  notes: NotesSchema.optional(),
-  data: KitDataSchema.optional(),
-});
+export const KitPatchSchema = patchOf(KitCreateSchema);
 
 export const RigCreateSchema = z.strictObject({ name: NameSchema, notes: NotesSchema.optional(), data: RigDataSchema });
-export const RigPatchSchema = z.strictObject({
-  version: VersionSchema,
-  name: NameSchema.optional(),
-  notes: NotesSchema.optional(),
-  data: RigDataSchema.optional(),
-});
+export const RigPatchSchema = patchOf(RigCreateSchema);
 
 export type CaseCreate = z.infer<typeof CaseCreateSchema>;
 export type CasePatch = z.infer<typeof CasePatchSchema>;

@@ -10,7 +10,7 @@ import Stripe from "stripe";
 import { beforeAll, describe, expect, inject, it } from "vitest";
 import { LIBRARY_ROUTES, OPERATIONS } from "../../app/api/v1/_lib/openapi";
 import { DEMO, Http, signIn, testDb, uniqueEmail } from "../support/http";
-import { insertExampleStudy, jobBody, me, PASSING_READINGS } from "./jobs-support";
+import { insertExampleStudy, jobBody, me, openCheckout, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, ok, rigData, type Row } from "./library-fixtures";
 
 type Actor = "owner" | "builder" | "customer" | "stranger" | "anonymous";
@@ -189,17 +189,7 @@ function openPayment(): Promise<PaymentFixture> {
   paymentFixture ??= (async () => {
     const jobId = await newJob(shopA, { status: "approved" });
     const { userId } = await jobSetup(shopA);
-    const sessionId = `cs_matrix_${randomUUID()}`;
-    const db = testDb();
-    try {
-      await db.execute({
-        sql: "insert into job_payment (id, job_id, checkout_session_id, amount, currency, status, created_by_id) values (?, ?, ?, 5000, 'eur', 'open', ?)",
-        args: [randomUUID(), jobId, sessionId, userId],
-      });
-    } finally {
-      db.close();
-    }
-    return { jobId, sessionId };
+    return { jobId, sessionId: await openCheckout(jobId, userId, "matrix") };
   })();
   return paymentFixture;
 }

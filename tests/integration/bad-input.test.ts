@@ -28,7 +28,7 @@ import {
   ReadingsBodySchema,
 } from "@/model/schemas/jobs";
 import { confirmEmail, Http, signUp, testDb, uniqueEmail, waitForMail } from "../support/http";
-import { insertExampleStudy, jobBody, PASSING_READINGS } from "./jobs-support";
+import { insertExampleStudy, jobBody, openCheckout, PASSING_READINGS } from "./jobs-support";
 import { caseData, freshShopOwner, kitData, newCase, newKit, newRig, newStudy, ok, rigData } from "./library-fixtures";
 
 type Json = null | boolean | number | string | Json[] | { [k: string]: Json };
@@ -301,18 +301,28 @@ beforeAll(async () => {
   // An approved job with an open deposit checkout that a genuine completed event would mark paid.
   const unpaid = await newJob();
   await move(unpaid, "approved", "approved by phone");
-  const sessionId = `cs_bad_input_${randomUUID()}`;
-  const db = testDb();
-  try {
-    await db.execute({
-      sql: "insert into job_payment (id, job_id, checkout_session_id, amount, currency, status, created_by_id) values (?, ?, ?, 5000, 'eur', 'open', ?)",
-      args: [randomUUID(), unpaid, sessionId, userId],
-    });
-  } finally {
-    db.close();
-  }
+  const sessionId = await openCheckout(unpaid, userId, "bad_input");
   job = { studyId, intake, shared, approved, machined, photoId: start.id, unpaid, sessionId };
 });
+
+/** Sends `numRuns` malformed versions of a target's body: each is answered 4xx in the one error shape, and the database is unchanged. */
+async function expectEveryMutationRefused(t: Target, numRuns: number) {
+  const before = await fingerprint();
+  await fc.assert(
+    fc.asyncProperty(mutations(t), async (m) => {
+      if (m.checkSchema && t.schema && m.body !== undefined) {
+        expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
+      }
+      const text = m.raw ?? JSON.stringify(m.body);
+      const res = await (t.as?.() ?? http).send(t.method, t.path, text, { "content-type": "application/json" });
+      expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
+      expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
+      expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
+      expect(await fingerprint(), `${t.method} ${t.path} with ${m.label} changed the database`).toBe(before);
+    }),
+    { numRuns, seed: Number(process.env.FC_SEED ?? Date.now() % 100_000), endOnFailure: true },
+  );
+}
 
 describe("malformed bodies", () => {
   it("start from bodies the schemas accept", () => {
@@ -320,44 +330,14 @@ describe("malformed bodies", () => {
   });
 
   it("are answered with a 4xx in the one error shape on every POST and PATCH route, and change nothing", async () => {
-    const before = await fingerprint();
-    for (const t of targets()) {
-      await fc.assert(
-        fc.asyncProperty(mutations(t), async (m) => {
-          if (m.checkSchema && t.schema && m.body !== undefined) {
-            expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
-          }
-          const text = m.raw ?? JSON.stringify(m.body);
-          const res = await (t.as?.() ?? http).send(t.method, t.path, text, { "content-type": "application/json" });
-          expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
-          expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
-          expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
-          expect(await fingerprint(), `${t.method} ${t.path} with ${m.label} changed the database`).toBe(before);
-        }),
-        { numRuns: 25, seed: Number(process.env.FC_SEED ?? Date.now() % 100_000), endOnFailure: true },
-      );
-    }
+    for (const t of targets()) await expectEveryMutationRefused(t, 25);
   }, 240_000);
 
   for (const { name, target } of jobTargets) {
     it(`are answered with a 4xx in the one error shape, changing nothing: ${name}`, async () => {
       const t = target();
       if (t.schema) expect(t.schema.safeParse(t.valid()).success, "the starting body is accepted").toBe(true);
-      const before = await fingerprint();
-      await fc.assert(
-        fc.asyncProperty(mutations(t), async (m) => {
-          if (m.checkSchema && t.schema && m.body !== undefined) {
-            expect(t.schema.safeParse(m.body).success, `${m.label} must be malformed`).toBe(false);
-          }
-          const text = m.raw ?? JSON.stringify(m.body);
-          const res = await (t.as?.() ?? http).send(t.method, t.path, text, { "content-type": "application/json" });
-          expect(res.status, `${t.method} ${t.path} with ${m.label}: ${res.text.slice(0, 200)}`).toBeGreaterThanOrEqual(400);
-          expect(res.status, `${t.method} ${t.path} with ${m.label}`).toBeLessThan(500);
-          expect(res.json, `${t.method} ${t.path} with ${m.label}`).toMatchObject({ error: { code: expect.any(String), message: expect.any(String) } });
-          expect(await fingerprint(), `${t.method} ${t.path} with ${m.label} changed the database`).toBe(before);
-        }),
-        { numRuns: 40, seed: Number(process.env.FC_SEED ?? Date.now() % 100_000), endOnFailure: true },
-      );
+      await expectEveryMutationRefused(t, 40);
     }, 60_000);
   }
 

@@ -51,6 +51,21 @@ export async function insertExampleStudy(shopId: string, userId: string, name = 
   return { studyId, kitIds };
 }
 
+/** Opens a deposit checkout of 50.00 EUR on a job, as the payment service would answer one; its session id, named with `prefix`. */
+export async function openCheckout(jobId: string, userId: string, prefix: string): Promise<string> {
+  const sessionId = `cs_${prefix}_${randomUUID()}`;
+  const db = testDb();
+  try {
+    await db.execute({
+      sql: "insert into job_payment (id, job_id, checkout_session_id, amount, currency, status, created_by_id) values (?, ?, ?, 5000, 'eur', 'open', ?)",
+      args: [randomUUID(), jobId, sessionId, userId],
+    });
+  } finally {
+    db.close();
+  }
+  return sessionId;
+}
+
 export async function me(http: Http): Promise<{ userId: string; shopId: string; email: string; role: string }> {
   const res = await http.get("/api/v1/me");
   return (res.json as { me: { userId: string; shopId: string; email: string; role: string } }).me;

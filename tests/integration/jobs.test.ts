@@ -351,12 +351,4 @@ describe("the setup card PDF", () => {
   });
 });
 
-async function countPaymentEvents(jobId: string): Promise<number> {
-  const db = testDb();
-  try {
-    const r = await db.execute({ sql: "select count(*) as n from job_event where job_id = ? and kind = 'payment'", args: [jobId] });
-    return Number(r.rows[0]?.n ?? 0);
-  } finally {
-    db.close();
-  }
-}
+const countPaymentEvents = (jobId: string) => countRows("job_event", { job_id: jobId, kind: "payment" });

@@ -3,18 +3,10 @@
 // before doing anything. Also: answers are never cached, pages carry the security headers, list pages are
 // bounded, and the core's refusals leave as 422.
 import { describe, expect, it } from "vitest";
-import { DEMO, Http, signIn, testDb } from "../support/http";
+import { countRows, DEMO, Http, signIn } from "../support/http";
 import { freshShopOwner, kitData } from "./library-fixtures";
 
-async function kitsNamed(name: string): Promise<number> {
-  const db = testDb();
-  try {
-    const r = await db.execute({ sql: "select count(*) as n from cylinder_kit where name = ?", args: [name] });
-    return Number(r.rows[0]?.n ?? 0);
-  } finally {
-    db.close();
-  }
-}
+const kitsNamed = (name: string) => countRows("cylinder_kit", { name });
 
 describe("calls from another site", () => {
   const body = (name: string) => JSON.stringify({ name, data: kitData(47, 53.92) });

@@ -8,6 +8,8 @@ const builder: MoveActor = { role: "builder", isJobCustomer: false };
 const owner: MoveActor = { role: "owner", isJobCustomer: false };
 const customer: MoveActor = { role: "customer", isJobCustomer: true };
 const otherCustomer: MoveActor = { role: "customer", isJobCustomer: false };
+/** The answer for a move refused with this code and these words. */
+const refused = (code: string, message: string) => ({ ok: false, code, message });
 const ready: MoveFacts = { hasPlan: true, verification: "pass" };
 const BENCH = "Only the shop's owner or builders move a job on the bench.";
 const STEP_BACK = "Say why the job goes back a step; the reason is kept in its history.";
@@ -41,16 +43,16 @@ describe("a move that is not in the table", () => {
   });
 
   it("says why, in words for the kind of move", () => {
-    const refused = (from: (typeof JOB_STATUSES)[number], to: (typeof JOB_STATUSES)[number]) => decideMove({ from, to, actor: owner, reason: "x", facts: ready });
-    expect(refused("closed", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A closed job is final; open a new job for further work." });
-    expect(refused("closed", "machined")).toMatchObject({ message: "A closed job is final; open a new job for further work." });
-    expect(refused("approved", "verified")).toEqual({ ok: false, code: "not_allowed", message: "A job cannot be verified before it is machined." });
-    expect(refused("intake", "machined")).toEqual({ ok: false, code: "not_allowed", message: "A job is machined only after its plan is approved." });
-    expect(refused("intake", "approved")).toEqual({ ok: false, code: "not_allowed", message: "Only a planned job can be approved: attach a study and a chosen kit first." });
-    expect(refused("machined", "closed")).toEqual({ ok: false, code: "not_allowed", message: "Close a job after its after-cut readings are verified." });
-    expect(refused("machined", "planned")).toEqual({ ok: false, code: "not_allowed", message: "Only a job at intake, or an approved job being re-planned, can go back to planned." });
-    expect(refused("machined", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A machined job cannot go back to intake." });
-    expect(refused("verified", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A verified job cannot go back to intake." });
+    const attempt = (from: (typeof JOB_STATUSES)[number], to: (typeof JOB_STATUSES)[number]) => decideMove({ from, to, actor: owner, reason: "x", facts: ready });
+    expect(attempt("closed", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A closed job is final; open a new job for further work." });
+    expect(attempt("closed", "machined")).toMatchObject({ message: "A closed job is final; open a new job for further work." });
+    expect(attempt("approved", "verified")).toEqual({ ok: false, code: "not_allowed", message: "A job cannot be verified before it is machined." });
+    expect(attempt("intake", "machined")).toEqual({ ok: false, code: "not_allowed", message: "A job is machined only after its plan is approved." });
+    expect(attempt("intake", "approved")).toEqual({ ok: false, code: "not_allowed", message: "Only a planned job can be approved: attach a study and a chosen kit first." });
+    expect(attempt("machined", "closed")).toEqual({ ok: false, code: "not_allowed", message: "Close a job after its after-cut readings are verified." });
+    expect(attempt("machined", "planned")).toEqual({ ok: false, code: "not_allowed", message: "Only a job at intake, or an approved job being re-planned, can go back to planned." });
+    expect(attempt("machined", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A machined job cannot go back to intake." });
+    expect(attempt("verified", "intake")).toEqual({ ok: false, code: "not_allowed", message: "A verified job cannot go back to intake." });
   });
 });
 
@@ -88,21 +90,9 @@ describe("approving a plan", () => {
   });
 
   it("another customer, a builder, or an owner without a reason cannot", () => {
-    expect(decideMove({ from: "planned", to: "approved", actor: otherCustomer, reason: "x", facts: ready })).toEqual({
-      ok: false,
-      code: "forbidden",
-      message: "Only this job's own customer can approve its plan.",
-    });
-    expect(decideMove({ from: "planned", to: "approved", actor: builder, reason: "x", facts: ready })).toEqual({
-      ok: false,
-      code: "forbidden",
-      message: "A plan is approved by its customer, or by the owner with a recorded reason.",
-    });
-    expect(decideMove({ from: "planned", to: "approved", actor: owner, facts: ready })).toEqual({
-      ok: false,
-      code: "reason_required",
-      message: "An owner approving for the customer must record why (for example: approved by phone on a given day).",
-    });
+    expect(decideMove({ from: "planned", to: "approved", actor: otherCustomer, reason: "x", facts: ready })).toEqual(refused("forbidden", "Only this job's own customer can approve its plan."));
+    expect(decideMove({ from: "planned", to: "approved", actor: builder, reason: "x", facts: ready })).toEqual(refused("forbidden", "A plan is approved by its customer, or by the owner with a recorded reason."));
+    expect(decideMove({ from: "planned", to: "approved", actor: owner, facts: ready })).toEqual(refused("reason_required", "An owner approving for the customer must record why (for example: approved by phone on a given day)."));
     // A refusal for who asks is not a question of a reason: the button asks none.
     expect(moveNeedsReason("planned", "approved", builder, ready)).toBe(false);
     expect(moveNeedsReason("planned", "approved", owner, ready)).toBe(true);
@@ -123,25 +113,13 @@ describe("approving a plan", () => {
 
 describe("planning a job", () => {
   it("needs a study and its kit attached", () => {
-    expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { hasPlan: false, verification: null } })).toEqual({
-      ok: false,
-      code: "precondition",
-      message: "Attach a study and choose its kit before planning the job.",
-    });
+    expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { hasPlan: false, verification: null } })).toEqual(refused("precondition", "Attach a study and choose its kit before planning the job."));
   });
 
   it("a cannot-fit kit: a builder is refused, an owner asked why, and once recorded it is not asked again", () => {
     const cannot: MoveFacts = { hasPlan: true, verification: null, planVerdict: "cannot-fit" };
-    expect(decideMove({ from: "intake", to: "planned", actor: builder, reason: "insists", facts: cannot })).toEqual({
-      ok: false,
-      code: "forbidden",
-      message: "The study says this kit cannot fit safely; only the shop's owner can plan it anyway, with a recorded reason.",
-    });
-    expect(decideMove({ from: "intake", to: "planned", actor: owner, facts: cannot })).toEqual({
-      ok: false,
-      code: "reason_required",
-      message: "The study says this kit cannot fit safely. To plan it anyway, record why (for example: the customer accepts a passage welded and re-cut).",
-    });
+    expect(decideMove({ from: "intake", to: "planned", actor: builder, reason: "insists", facts: cannot })).toEqual(refused("forbidden", "The study says this kit cannot fit safely; only the shop's owner can plan it anyway, with a recorded reason."));
+    expect(decideMove({ from: "intake", to: "planned", actor: owner, facts: cannot })).toEqual(refused("reason_required", "The study says this kit cannot fit safely. To plan it anyway, record why (for example: the customer accepts a passage welded and re-cut)."));
     expect(decideMove({ from: "intake", to: "planned", actor: builder, facts: { ...cannot, planOverridden: true } })).toEqual({ ok: true, needsReason: false });
   });
 
@@ -167,16 +145,8 @@ describe("planning a job", () => {
 
 describe("verifying and closing", () => {
   it("readings are asked for only when verifying", () => {
-    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: { hasPlan: true, verification: null } })).toEqual({
-      ok: false,
-      code: "precondition",
-      message: "Record the after-cut readings before verifying.",
-    });
-    expect(decideMove({ from: "machined", to: "verified", actor: owner, reason: "x", facts: { hasPlan: true, verification: "incomplete" } })).toEqual({
-      ok: false,
-      code: "precondition",
-      message: "Some after-cut readings are missing; complete them before verifying.",
-    });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, facts: { hasPlan: true, verification: null } })).toEqual(refused("precondition", "Record the after-cut readings before verifying."));
+    expect(decideMove({ from: "machined", to: "verified", actor: owner, reason: "x", facts: { hasPlan: true, verification: "incomplete" } })).toEqual(refused("precondition", "Some after-cut readings are missing; complete them before verifying."));
     // Closing or going back does not look at the readings again.
     for (const verification of [null, "incomplete", "fail"] as const) {
       expect(decideMove({ from: "verified", to: "closed", actor: builder, facts: { hasPlan: true, verification } })).toEqual({ ok: true, needsReason: false });
@@ -186,16 +156,8 @@ describe("verifying and closing", () => {
 
   it("failed readings: a builder is refused, an owner asked why, and the reason kept", () => {
     const failed: MoveFacts = { hasPlan: true, verification: "fail" };
-    expect(decideMove({ from: "machined", to: "verified", actor: builder, reason: "fine", facts: failed })).toEqual({
-      ok: false,
-      code: "forbidden",
-      message: "The after-cut readings are outside the plan's tolerance; only the shop's owner can verify the job as it stands, with a recorded reason.",
-    });
-    expect(decideMove({ from: "machined", to: "verified", actor: owner, facts: failed })).toEqual({
-      ok: false,
-      code: "reason_required",
-      message: "The after-cut readings are outside the plan's tolerance. To verify the job as it stands, record why (for example: trial fit checked, clearance accepted).",
-    });
+    expect(decideMove({ from: "machined", to: "verified", actor: builder, reason: "fine", facts: failed })).toEqual(refused("forbidden", "The after-cut readings are outside the plan's tolerance; only the shop's owner can verify the job as it stands, with a recorded reason."));
+    expect(decideMove({ from: "machined", to: "verified", actor: owner, facts: failed })).toEqual(refused("reason_required", "The after-cut readings are outside the plan's tolerance. To verify the job as it stands, record why (for example: trial fit checked, clearance accepted)."));
     expect(moveNeedsReason("machined", "verified", owner, failed)).toBe(true);
     expect(moveNeedsReason("machined", "verified", builder, failed)).toBe(false);
   });

@@ -108,7 +108,7 @@ export function checkCrossSite(req: Request, options: RouteOptions = {}): void {
 }
 
 /** Every API answer is private to its caller and current: no cache may keep it. */
-function noStore(res: Response): Response {
+export function noStore(res: Response): Response {
   try {
     res.headers.set("cache-control", "no-store");
     return res;

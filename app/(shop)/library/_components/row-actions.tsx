@@ -1,5 +1,6 @@
 "use client";
 
+import { ConfirmButton } from "../../../_ui/form/confirm-button";
 import type { RowBase } from "../../../_ui/query/types";
 
 /** Archive or restore, and delete (asked twice; the server refuses when a study uses the row and names it). */
@@ -19,16 +20,9 @@ export function RowActions({
       <button type="button" className="btn-quiet" disabled={busy} onClick={() => onArchive(!row.archivedAt)}>
         {row.archivedAt ? "Restore" : "Archive"}
       </button>
-      <button
-        type="button"
-        className="btn-quiet text-error"
-        disabled={busy}
-        onClick={() => {
-          if (window.confirm(`Delete “${row.name}” for good? Archiving keeps it out of the way and can be undone.`)) onDelete();
-        }}
-      >
+      <ConfirmButton className="btn-quiet text-error" disabled={busy} question={`Delete “${row.name}” for good? Archiving keeps it out of the way and can be undone.`} onConfirm={onDelete}>
         Delete
-      </button>
+      </ConfirmButton>
     </div>
   );
 }

@@ -7,20 +7,28 @@ export type LengthKey = "minRadialClearanceMm" | "minDepthClearanceMm" | "minSea
 export type SpeedKey = "cuttingSpeedMinMPerMin" | "cuttingSpeedMaxMPerMin";
 export type Key = LengthKey | SpeedKey | "displacementClassesCc";
 
+/** Each limit the shop sets, in the form's order, and what kind of figure it is. */
+const KINDS: Record<Key, "length" | "speed" | "classes"> = {
+  minRadialClearanceMm: "length",
+  minDepthClearanceMm: "length",
+  minSealingLandMm: "length",
+  minWallMm: "length",
+  minCrankClearanceMm: "length",
+  studToleranceMm: "length",
+  hardwareMarginMm: "length",
+  maxRockMm: "length",
+  cuttingSpeedMinMPerMin: "speed",
+  cuttingSpeedMaxMPerMin: "speed",
+  displacementClassesCc: "classes",
+};
+
 // Each limit's name and why, the same words as the study page (model/glossary.ts).
-export const FIELDS: Array<{ key: Key; label: string; kind: "length" | "speed" | "classes"; why: string }> = [
-  { key: "minRadialClearanceMm", label: LIMIT_TERM.minRadialClearanceMm.label, kind: "length", why: LIMIT_TERM.minRadialClearanceMm.hint },
-  { key: "minDepthClearanceMm", label: LIMIT_TERM.minDepthClearanceMm.label, kind: "length", why: LIMIT_TERM.minDepthClearanceMm.hint },
-  { key: "minSealingLandMm", label: LIMIT_TERM.minSealingLandMm.label, kind: "length", why: LIMIT_TERM.minSealingLandMm.hint },
-  { key: "minWallMm", label: LIMIT_TERM.minWallMm.label, kind: "length", why: LIMIT_TERM.minWallMm.hint },
-  { key: "minCrankClearanceMm", label: LIMIT_TERM.minCrankClearanceMm.label, kind: "length", why: LIMIT_TERM.minCrankClearanceMm.hint },
-  { key: "studToleranceMm", label: LIMIT_TERM.studToleranceMm.label, kind: "length", why: LIMIT_TERM.studToleranceMm.hint },
-  { key: "hardwareMarginMm", label: LIMIT_TERM.hardwareMarginMm.label, kind: "length", why: LIMIT_TERM.hardwareMarginMm.hint },
-  { key: "maxRockMm", label: LIMIT_TERM.maxRockMm.label, kind: "length", why: LIMIT_TERM.maxRockMm.hint },
-  { key: "cuttingSpeedMinMPerMin", label: LIMIT_TERM.cuttingSpeedMinMPerMin.label, kind: "speed", why: LIMIT_TERM.cuttingSpeedMinMPerMin.hint },
-  { key: "cuttingSpeedMaxMPerMin", label: LIMIT_TERM.cuttingSpeedMaxMPerMin.label, kind: "speed", why: LIMIT_TERM.cuttingSpeedMaxMPerMin.hint },
-  { key: "displacementClassesCc", label: LIMIT_TERM.displacementClassesCc.label, kind: "classes", why: LIMIT_TERM.displacementClassesCc.hint },
-];
+export const FIELDS: ReadonlyArray<{ key: Key; label: string; kind: "length" | "speed" | "classes"; why: string }> = (Object.keys(KINDS) as Key[]).map((key) => ({
+  key,
+  label: LIMIT_TERM[key].label,
+  kind: KINDS[key],
+  why: LIMIT_TERM[key].hint,
+}));
 
 const FIELD_OF = Object.fromEntries(FIELDS.map((f) => [f.key, f])) as Record<Key, (typeof FIELDS)[number]>;
 

@@ -4,7 +4,7 @@ import { auth } from "@/db/auth";
 import { clientAddress, CLIENT_ADDRESS_HEADER, failedSignIns } from "@/db/auth-guard";
 import { customerView, roleIn } from "@/db/members";
 import { PersonNameSchema, ShopNameSchema } from "@/model/names";
-import { errorResponse, fieldsOf, MAX_BODY_BYTES } from "../../_lib/respond";
+import { errorResponse, fieldsOf, MAX_BODY_BYTES, noStore } from "../../_lib/respond";
 
 const inner = toNextJsHandler(auth);
 
@@ -166,18 +166,9 @@ function withHeaders(reshaped: Response, from: Response): Response {
 }
 
 /** Sign-in answers are private to one person: no cache keeps them. */
-async function noStore(res: Promise<Response>): Promise<Response> {
-  const answer = await res;
-  try {
-    answer.headers.set("cache-control", "no-store");
-    return answer;
-  } catch {
-    // A redirect's headers are immutable: copy it so it can say no-store too.
-    const copy = new Response(answer.body, answer);
-    copy.headers.set("cache-control", "no-store");
-    return copy;
-  }
+async function privately(res: Promise<Response>): Promise<Response> {
+  return noStore(await res);
 }
 
-export const GET = (req: Request) => noStore(guarded(req, "GET"));
-export const POST = (req: Request) => noStore(guarded(req, "POST"));
+export const GET = (req: Request) => privately(guarded(req, "GET"));
+export const POST = (req: Request) => privately(guarded(req, "POST"));

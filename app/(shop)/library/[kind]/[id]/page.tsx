@@ -1,25 +1,8 @@
-import type { Metadata } from "next";
-import { notFound } from "next/navigation";
-import { SHOP_STAFF } from "@/db/roles";
-import { requirePage } from "../../../../_ui/guard";
-import { QueryProvider } from "../../../../_ui/query/provider";
-import { EntityForm } from "../../_components/entity-form";
-import { libraryKind } from "../../_components/kind";
-import { KIND_WORDS } from "../../_components/library-tabs";
+import { LibraryRowPage, rowFormTitle } from "../../_components/library-row-page";
 
-export async function generateMetadata({ params }: { params: Promise<{ kind: string }> }): Promise<Metadata> {
-  const kind = libraryKind((await params).kind);
-  return { title: kind ? `Edit ${KIND_WORDS[kind].one}` : "Library" };
-}
+export const generateMetadata = ({ params }: { params: Promise<{ kind: string }> }) => rowFormTitle(params, "Edit");
 
 export default async function EditLibraryRowPage({ params }: { params: Promise<{ kind: string; id: string }> }) {
-  const { kind: raw, id } = await params;
-  const caller = await requirePage(`/library/${raw}/${id}`, SHOP_STAFF);
-  const kind = libraryKind(raw);
-  if (!kind) notFound();
-  return (
-    <QueryProvider>
-      <EntityForm kind={kind} id={id} units={caller.units} />
-    </QueryProvider>
-  );
+  const { kind, id } = await params;
+  return <LibraryRowPage rawKind={kind} id={id} />;
 }

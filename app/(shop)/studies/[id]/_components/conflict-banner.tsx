@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { ConfirmButton } from "../../../../_ui/form/confirm-button";
 
 /** A save refused because someone else saved first: keep mine (save over theirs) or take theirs. */
 export function ConflictBanner({ message, onOverwrite, onReload }: { message: string; onOverwrite: () => Promise<void>; onReload: () => Promise<void> }) {
@@ -21,16 +22,9 @@ export function ConflictBanner({ message, onOverwrite, onReload }: { message: st
         <button type="button" className="btn" disabled={busy} onClick={run(onOverwrite)}>
           Keep my edits and save them
         </button>
-        <button
-          type="button"
-          className="btn-quiet"
-          disabled={busy}
-          onClick={() => {
-            if (window.confirm("Load the other change? Your unsaved edits here will be dropped.")) void run(onReload)();
-          }}
-        >
+        <ConfirmButton className="btn-quiet" disabled={busy} question="Load the other change? Your unsaved edits here will be dropped." onConfirm={() => void run(onReload)()}>
           Load their version instead
-        </button>
+        </ConfirmButton>
       </div>
     </div>
   );
