@@ -2,8 +2,15 @@
 import { relations, sql } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 import { organization, user } from "./schema";
+import { createdByRef, personRef, shopRef } from "./schema-refs";
 
 const now = () => sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
+
+/** The job a row belongs to; it goes with the job. */
+const jobRef = () =>
+  text("job_id")
+    .notNull()
+    .references(() => job.id, { onDelete: "cascade" });
 
 /**
  * A job: a customer's engine as a work order. The plan (the study's assembled Study and the core's result
@@ -14,9 +21,7 @@ export const job = sqliteTable(
   "job",
   {
     id: text("id").primaryKey(),
-    organizationId: text("organization_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
+    organizationId: shopRef(),
     /** A short reference for the bench, e.g. "J-0007", unique in the shop. */
     reference: text("reference").notNull(),
     title: text("title").notNull(),
@@ -67,9 +72,7 @@ export const job = sqliteTable(
     version: integer("version").notNull().default(1),
     createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
     updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().default(now()),
-    createdBy: text("created_by")
-      .notNull()
-      .references(() => user.id),
+    createdBy: createdByRef(),
   },
   (t) => [
     index("job_shop_idx").on(t.organizationId, t.status),
@@ -83,9 +86,7 @@ export const jobEvent = sqliteTable(
   "job_event",
   {
     id: text("id").primaryKey(),
-    jobId: text("job_id")
-      .notNull()
-      .references(() => job.id, { onDelete: "cascade" }),
+    jobId: jobRef(),
     at: integer("at", { mode: "timestamp_ms" }).notNull(),
     /** Null for events the payment service reported. */
     byId: text("by_id"),
@@ -103,16 +104,12 @@ export const jobReading = sqliteTable(
   "job_reading",
   {
     id: text("id").primaryKey(),
-    jobId: text("job_id")
-      .notNull()
-      .references(() => job.id, { onDelete: "cascade" }),
+    jobId: jobRef(),
     readingsJson: text("readings_json").notNull(),
     verificationJson: text("verification_json").notNull(),
     verdict: text("verdict").notNull(),
     takenAt: integer("taken_at", { mode: "timestamp_ms" }).notNull(),
-    takenById: text("taken_by_id")
-      .notNull()
-      .references(() => user.id),
+    takenById: personRef("taken_by_id"),
     takenByName: text("taken_by_name").notNull(),
   },
   (t) => [index("job_reading_job_idx").on(t.jobId, t.takenAt)],
@@ -123,12 +120,8 @@ export const jobPhoto = sqliteTable(
   "job_photo",
   {
     id: text("id").primaryKey(),
-    jobId: text("job_id")
-      .notNull()
-      .references(() => job.id, { onDelete: "cascade" }),
-    organizationId: text("organization_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
+    jobId: jobRef(),
+    organizationId: shopRef(),
     objectKey: text("object_key").notNull().unique(),
     contentType: text("content_type").notNull(),
     sizeBytes: integer("size_bytes").notNull(),
@@ -139,9 +132,7 @@ export const jobPhoto = sqliteTable(
     state: text("state").notNull().default("pending"),
     refusedReason: text("refused_reason"),
     createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
-    createdBy: text("created_by")
-      .notNull()
-      .references(() => user.id),
+    createdBy: createdByRef(),
   },
   (t) => [index("job_photo_job_idx").on(t.jobId, t.state)],
 );
@@ -151,9 +142,7 @@ export const jobPayment = sqliteTable(
   "job_payment",
   {
     id: text("id").primaryKey(),
-    jobId: text("job_id")
-      .notNull()
-      .references(() => job.id, { onDelete: "cascade" }),
+    jobId: jobRef(),
     checkoutSessionId: text("checkout_session_id").notNull().unique(),
     /** Smallest currency unit. */
     amount: integer("amount").notNull(),
@@ -161,9 +150,7 @@ export const jobPayment = sqliteTable(
     /** open | paid */
     status: text("status").notNull().default("open"),
     createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
-    createdById: text("created_by_id")
-      .notNull()
-      .references(() => user.id),
+    createdById: personRef("created_by_id"),
     paidAt: integer("paid_at", { mode: "timestamp_ms" }),
   },
   (t) => [index("job_payment_job_idx").on(t.jobId)],
@@ -181,13 +168,9 @@ export const jobQuestion = sqliteTable(
   "job_question",
   {
     id: text("id").primaryKey(),
-    jobId: text("job_id")
-      .notNull()
-      .references(() => job.id, { onDelete: "cascade" }),
+    jobId: jobRef(),
     at: integer("at", { mode: "timestamp_ms" }).notNull(),
-    byId: text("by_id")
-      .notNull()
-      .references(() => user.id),
+    byId: personRef("by_id"),
     byName: text("by_name").notNull(),
     text: text("text").notNull(),
   },

@@ -1,8 +1,6 @@
 import { relations } from "drizzle-orm";
 import { index, integer, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
-import { user } from "./schema-auth";
-import { archivedAt, createdByRef, shopRef, version } from "./schema-refs";
-import { createdAt, updatedAt } from "./schema-time";
+import { namedShopRow, personRef, rowStamps } from "./schema-refs";
 
 // ── The shop's library and its studies ─────────────────────────────────────────────────────────
 // Every row belongs to one shop, says who made it, and carries a version that each update must name
@@ -13,18 +11,11 @@ import { createdAt, updatedAt } from "./schema-time";
 export const caseProfile = sqliteTable(
   "case_profile",
   {
-    id: text("id").primaryKey(),
-    organizationId: shopRef(),
-    name: text("name").notNull(),
-    notes: text("notes").notNull().default(""),
+    ...namedShopRow(),
     dataJson: text("data_json").notNull(),
     /** Mouth diameter readings: [{ valueMm, takenById, takenByName, takenAt }]. */
     mouthReadingsJson: text("mouth_readings_json").notNull().default("[]"),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    createdBy: createdByRef(),
-    archivedAt: archivedAt(),
+    ...rowStamps(),
   },
   (t) => [index("case_profile_shop_idx").on(t.organizationId, t.archivedAt)],
 );
@@ -33,18 +24,11 @@ export const caseProfile = sqliteTable(
 export const cylinderKit = sqliteTable(
   "cylinder_kit",
   {
-    id: text("id").primaryKey(),
-    organizationId: shopRef(),
-    name: text("name").notNull(),
-    notes: text("notes").notNull().default(""),
+    ...namedShopRow(),
     dataJson: text("data_json").notNull(),
     /** { skirtDiameter: Reading[], skirtLength: Reading[] }, one per value in the data's reading lists. */
     readingsJson: text("readings_json").notNull().default('{"skirtDiameter":[],"skirtLength":[]}'),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    createdBy: createdByRef(),
-    archivedAt: archivedAt(),
+    ...rowStamps(),
   },
   (t) => [index("cylinder_kit_shop_idx").on(t.organizationId, t.archivedAt)],
 );
@@ -53,16 +37,9 @@ export const cylinderKit = sqliteTable(
 export const boringRig = sqliteTable(
   "boring_rig",
   {
-    id: text("id").primaryKey(),
-    organizationId: shopRef(),
-    name: text("name").notNull(),
-    notes: text("notes").notNull().default(""),
+    ...namedShopRow(),
     dataJson: text("data_json").notNull(),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    createdBy: createdByRef(),
-    archivedAt: archivedAt(),
+    ...rowStamps(),
   },
   (t) => [index("boring_rig_shop_idx").on(t.organizationId, t.archivedAt)],
 );
@@ -71,10 +48,7 @@ export const boringRig = sqliteTable(
 export const study = sqliteTable(
   "study",
   {
-    id: text("id").primaryKey(),
-    organizationId: shopRef(),
-    name: text("name").notNull(),
-    notes: text("notes").notNull().default(""),
+    ...namedShopRow(),
     caseId: text("case_id")
       .notNull()
       .references(() => caseProfile.id, { onDelete: "restrict" }),
@@ -85,11 +59,7 @@ export const study = sqliteTable(
     chosenKitId: text("chosen_kit_id"),
     /** A random token set by each update, so the statements of one update can tell they follow their own write. */
     writeId: text("write_id").notNull().default(""),
-    version: version(),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    createdBy: createdByRef(),
-    archivedAt: archivedAt(),
+    ...rowStamps(),
   },
   (t) => [
     index("study_shop_idx").on(t.organizationId, t.archivedAt),
@@ -122,9 +92,7 @@ export const studyEvent = sqliteTable(
       .notNull()
       .references(() => study.id, { onDelete: "cascade" }),
     at: integer("at", { mode: "timestamp_ms" }).notNull(),
-    byId: text("by_id")
-      .notNull()
-      .references(() => user.id),
+    byId: personRef("by_id"),
     byName: text("by_name").notNull(),
     summary: text("summary").notNull(),
   },
