@@ -1,10 +1,13 @@
 import { describe, expect, it } from "vitest";
 import {
   CaptureSchema,
+  ShapeParamsSchema,
   arcSegments,
   arcSlot,
   boltCircleStuds,
   chamferedRectangle,
+  circleOutline,
+  insideRing,
   mirrorOutline,
   outlineFromParams,
   outlineProblem,
@@ -178,5 +181,196 @@ describe("what is wrong with a shape", () => {
       { at: "studs.1", message: "stud 2 is inside the mouth" },
       { at: "studs.2", message: "stud 3 is off the deck" },
     ]);
+  });
+});
+
+describe("arcs to chords at their edges", () => {
+  it("an arc no bigger than the tolerance is one chord, however far it turns", () => {
+    // At r = tol the sagitta formula gives steps of π, so a full turn would be 2 chords; r < tol has no step at all.
+    expect(arcSegments(0.02, 2 * Math.PI, 0.02)).toBe(1);
+    expect(arcSegments(0.005, Math.PI / 2, 0.02)).toBe(1);
+  });
+
+  it("a half circle whose chord steps are exactly quarter circles takes 2 chords, not a third for the binary noise", () => {
+    // 1 − cos(π/4) = 1 − √2/2: with that tolerance on r = 1 each chord spans exactly π/2 (the sagitta relation).
+    expect(arcSegments(1, Math.PI, 1 - Math.SQRT1_2)).toBe(2);
+  });
+});
+
+describe("shapes, each as the core reads it", () => {
+  it("bolt-circle studs are numbered from 1 in the order they go round", () => {
+    expect(boltCircleStuds(70, 3, 90).map((s) => s.label)).toEqual(["stud 1", "stud 2", "stud 3"]);
+  });
+
+  it("a point on an axis is written 0, not −0 (Intl.NumberFormat writes −0 as “-0”)", () => {
+    const [a] = rectangularStudPattern(0, 10);
+    expect(Object.is(a.positionMm[0], 0)).toBe(true);
+    const [c] = mirrorOutline({ kind: "polygon", pointsMm: [[0, 5], [5, 5], [5, 0]] }, "y").pointsMm;
+    expect(Object.is(c[0], 0)).toBe(false);
+    expect(c).toEqual([-5, 0]);
+    expect(Object.is(mirrorOutline({ kind: "circle", diameterMm: 10, centerMm: [0, 3] }, "y").centerMm?.[0], 0)).toBe(true);
+  });
+
+  it("a round outline is a circle of that diameter on the axis", () => {
+    expect(circleOutline(46)).toEqual({ kind: "circle", diameterMm: 46 });
+  });
+
+  it("every polygon helper writes a polygon", () => {
+    expect(chamferedRectangle(100, 80, 0).kind).toBe("polygon");
+    expect(roundedRectangle(100, 80, 10).kind).toBe("polygon");
+    expect(radialRectangle(12, 8, 30, 0).kind).toBe("polygon");
+  });
+
+  it("a rounded rectangle of radius 0 is the plain rectangle; of radius 10 it has 4 × (13 + 1) corners", () => {
+    expect(roundedRectangle(100, 80, 0)).toEqual(chamferedRectangle(100, 80, 0));
+    expect(roundedRectangle(100, 80, 0).pointsMm).toHaveLength(4);
+    // 13 chords per quarter arc of r = 10 within 0.02 mm (see "arcs to chords" above), each arc with both ends.
+    expect(roundedRectangle(100, 80, 10).pointsMm).toHaveLength(4 * 14);
+  });
+});
+
+describe("mirroring at its edges", () => {
+  it("across the x axis a polygon's y turns to −y and its order is reversed", () => {
+    const m = mirrorOutline({ kind: "polygon", pointsMm: [[0, 1], [4, 1], [4, 3]] }, "x");
+    expect(m.pointsMm).toEqual([[4, -3], [4, -1], [0, -1]]);
+  });
+
+  it("a circle's centre is mirrored too; a circle on the axis stays on the axis with no centre written", () => {
+    expect(mirrorOutline({ kind: "circle", diameterMm: 10, centerMm: [3, 4] }, "x")).toEqual({ kind: "circle", diameterMm: 10, centerMm: [3, -4] });
+    expect(mirrorOutline({ kind: "circle", diameterMm: 10, centerMm: [3, 4] }, "y")).toEqual({ kind: "circle", diameterMm: 10, centerMm: [-3, 4] });
+    expect(mirrorOutline({ kind: "circle", diameterMm: 10 }, "x")).toEqual({ kind: "circle", diameterMm: 10 });
+  });
+});
+
+describe("the parameters of each helper", () => {
+  const every = [
+    { kind: "rect-studs", spacingXMm: 56, spacingYMm: 48 },
+    { kind: "bolt-circle", diameterMm: 70, count: 4, startDeg: 45 },
+    { kind: "circle", diameterMm: 46 },
+    { kind: "chamfered-rect", widthMm: 100, heightMm: 80, chamferMm: 10 },
+    { kind: "rounded-rect", widthMm: 100, heightMm: 80, radiusMm: 10 },
+    { kind: "arc-slot", innerRadiusMm: 30, outerRadiusMm: 40, spanDeg: 60, centerDeg: 90 },
+    { kind: "radial-rect", widthMm: 12, lengthMm: 8, nearEdgeMm: 30, angleDeg: 0 },
+  ] as const;
+
+  it("each kind is read with its own fields, and an unknown kind or an extra field is refused", () => {
+    for (const p of every) expect(ShapeParamsSchema.safeParse(p).success, p.kind).toBe(true);
+    expect(ShapeParamsSchema.safeParse({ kind: "spiral", diameterMm: 46 }).success).toBe(false);
+    expect(ShapeParamsSchema.safeParse({ kind: "circle", diameterMm: 46, depthMm: 3 }).success).toBe(false);
+  });
+
+  it("a bolt circle has 1 to 16 studs", () => {
+    const bolt = (count: number) => ShapeParamsSchema.safeParse({ kind: "bolt-circle", diameterMm: 70, count, startDeg: 0 }).success;
+    expect([bolt(0), bolt(1), bolt(16), bolt(17), bolt(2.5)]).toEqual([false, true, true, false, false]);
+  });
+
+  it("each writes what its helper writes: an outline or studs, never both", () => {
+    expect(outlineFromParams(every[2])).toEqual(circleOutline(46));
+    expect(outlineFromParams(every[4])).toEqual(roundedRectangle(100, 80, 10));
+    expect(outlineFromParams(every[5])).toEqual(arcSlot(30, 40, 60, 90));
+    expect(outlineFromParams(every[6])).toEqual(radialRectangle(12, 8, 30, 0));
+    expect(outlineFromParams(every[1])).toBeNull();
+    expect(studsFromParams(every[1])).toEqual(boltCircleStuds(70, 4, 45));
+    expect(studsFromParams(every[2])).toBeNull();
+    expect(studsFromParams(every[4])).toBeNull();
+  });
+
+  it("the capture record's keys name the shape exactly: pockets and ports by a number up to two digits", () => {
+    const circle = { kind: "circle", diameterMm: 46 };
+    const ok = (key: string) => CaptureSchema.safeParse({ [key]: circle }).success;
+    expect([ok("deck"), ok("mouth"), ok("studs"), ok("gasket"), ok("pockets.0"), ok("ports.12")]).toEqual([true, true, true, true, true, true]);
+    expect([ok("pockets.123"), ok("thedeck"), ok("decks"), ok("pockets")]).toEqual([false, false, false, false]);
+    const r = CaptureSchema.safeParse({ wheel: circle });
+    // The key's own issue, under the record's "invalid key", says why in words.
+    const inner = r.success ? [] : r.error.issues.flatMap((i) => ("issues" in i ? (i.issues as { message: string }[]) : []));
+    expect(inner.map((i) => i.message)).toEqual(["unknown shape"]);
+  });
+});
+
+describe("inside a ring (even-odd ray casting)", () => {
+  // An L-shaped ring off the origin, worked on squared paper: the notch (12…16, 14…18) is outside.
+  const L: [number, number][] = [[10, 10], [16, 10], [16, 14], [12, 14], [12, 18], [10, 18]];
+  // A diamond with corners on the axes through (20, 20): points level with a corner test the ray's ends.
+  const diamond: [number, number][] = [[20, 15], [25, 20], [20, 25], [15, 20]];
+
+  it("tells inside from outside in a concave ring", () => {
+    expect(insideRing([11, 11], L)).toBe(true);
+    expect(insideRing([15, 12], L)).toBe(true);
+    expect(insideRing([11, 17], L)).toBe(true);
+    expect(insideRing([14, 16], L)).toBe(false);
+    expect(insideRing([9, 12], L)).toBe(false);
+    expect(insideRing([17, 12], L)).toBe(false);
+    expect(insideRing([11, 19], L)).toBe(false);
+  });
+
+  it("points level with a corner, inside and on either side outside", () => {
+    expect(insideRing([20, 20], diamond)).toBe(true);
+    expect(insideRing([24, 20], diamond)).toBe(true);
+    expect(insideRing([10, 20], diamond)).toBe(false);
+    expect(insideRing([30, 20], diamond)).toBe(false);
+    expect(insideRing([20, 14], diamond)).toBe(false);
+    expect(insideRing([20, 26], diamond)).toBe(false);
+  });
+
+  it("near a slanted edge: just inside and just outside", () => {
+    // The diamond's edge from (20, 15) to (25, 20) is x − y = 5; at y = 17 it is at x = 22.
+    expect(insideRing([21.9, 17], diamond)).toBe(true);
+    expect(insideRing([22.1, 17], diamond)).toBe(false);
+    // The edge from (15, 20) to (20, 25) is y − x = 5; at y = 23 it is at x = 18.
+    expect(insideRing([18.1, 23], diamond)).toBe(true);
+    expect(insideRing([17.9, 23], diamond)).toBe(false);
+  });
+});
+
+describe("what is wrong with a shape, each case", () => {
+  const deck = chamferedRectangle(100, 80, 10);
+
+  it("a circle of no diameter and a polygon of two corners are named as such, at the shape they belong to", () => {
+    expect(outlineProblem({ kind: "circle", diameterMm: 0 })).toBe("the diameter must be more than 0");
+    expect(outlineProblem({ kind: "circle", diameterMm: 0.5 })).toBeNull();
+    expect(outlineProblem({ kind: "polygon", pointsMm: [[0, 0], [10, 0]] })).toBe("needs at least 3 corners");
+    expect(outlineProblem(deck)).toBeNull();
+    const issues = shapeIssues({
+      deck: { kind: "circle", diameterMm: 0 },
+      mouth: { kind: "polygon", pointsMm: [[0, 0], [10, 0]] },
+      studs: [],
+      pockets: [null, { kind: "polygon", pointsMm: [[0, 0], [1, 0]] }],
+      pocketWord: "port",
+    });
+    expect(issues).toEqual([
+      { at: "deck", message: "deck outline: the diameter must be more than 0" },
+      { at: "mouth", message: "mouth: needs at least 3 corners" },
+      { at: "pockets.1", message: "port 2: needs at least 3 corners" },
+    ]);
+  });
+
+  it("with no deck or mouth yet, and shapes not yet readable, nothing is reported", () => {
+    expect(shapeIssues({ deck: null, mouth: null, studs: [null, { positionMm: [300, 0] }], pockets: [null, radialRectangle(10, 20, 400, 0)] })).toEqual([]);
+  });
+
+  it("a bad deck or mouth is not used to judge the studs and passages", () => {
+    const issues = shapeIssues({
+      deck: { kind: "polygon", pointsMm: [[0, 0], [10, 10], [10, 0], [0, 10]] },
+      mouth: { kind: "circle", diameterMm: 0 },
+      studs: [{ positionMm: [300, 0] }],
+      pockets: [radialRectangle(10, 20, 400, 0)],
+    });
+    expect(issues.map((i) => i.at)).toEqual(["deck", "mouth"]);
+  });
+
+  it("a round passage is judged by points round its edge: inside the deck it is fine, past its edge it is reported", () => {
+    const ok = shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 10, centerMm: [40, 0] }] });
+    expect(ok).toEqual([]);
+    const out = shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 10, centerMm: [48, 0] }] });
+    expect(out).toEqual([{ at: "pockets.0", message: "passage 1 reaches outside the deck" }]);
+    // A round passage on the axis, bigger than the deck, reaches out; a small one on the axis does not.
+    expect(shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 120 }] })).toHaveLength(1);
+    expect(shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 20 }] })).toEqual([]);
+  });
+
+  it("a mouth off the axis: a stud inside it is reported, one inside its mirror image is not", () => {
+    const mouth = { kind: "circle" as const, diameterMm: 20, centerMm: [20, 10] as [number, number] };
+    const issues = shapeIssues({ deck, mouth, studs: [{ positionMm: [25, 12] }, { positionMm: [-25, -12] }], pockets: [] });
+    expect(issues).toEqual([{ at: "studs.0", message: "stud 1 is inside the mouth" }]);
   });
 });
