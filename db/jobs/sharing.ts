@@ -79,6 +79,7 @@ export async function shareJob(caller: Caller, id: string): Promise<{ job: JobVi
   try {
     await sendMail(mail);
   } catch {
+    // sendMail has logged the cause; the share is kept, and the caller is told to send the mail again.
     throw new DataError("mail_failed", "The plan is shared, but the e-mail could not be sent. Try sharing again in a moment.");
   }
   return { job: await getJob(caller, id), invited: invitationId !== null };

@@ -45,14 +45,20 @@ export function toErrorResponse(error: unknown) {
 
 export const MAX_BODY_BYTES = 256 * 1024;
 
-/** Reads a JSON body as unknown: 413 when too large, 400 when it is not JSON. */
-export async function readJson(req: Request, maxBytes = MAX_BODY_BYTES): Promise<unknown> {
+/**
+ * Reads a JSON body as unknown: 413 when too large, 400 when it is not JSON. An empty body is refused,
+ * or answers `whenEmpty` where the route takes none as a value of its own.
+ */
+export async function readJson(req: Request, maxBytes = MAX_BODY_BYTES, whenEmpty?: unknown): Promise<unknown> {
   const declared = Number(req.headers.get("content-length") ?? "0");
   if (declared > maxBytes) throw new ApiError(413, "too_large", `The body is larger than ${Math.round(maxBytes / 1024)} KB.`);
   const text = await req.text().catch(() => undefined);
   if (text === undefined) throw new ApiError(400, "invalid_body", "The body could not be read.");
   if (Buffer.byteLength(text) > maxBytes) throw new ApiError(413, "too_large", `The body is larger than ${Math.round(maxBytes / 1024)} KB.`);
-  if (!text.trim()) throw new ApiError(400, "invalid_body", "The body is empty; send JSON.");
+  if (!text.trim()) {
+    if (whenEmpty !== undefined) return whenEmpty;
+    throw new ApiError(400, "invalid_body", "The body is empty; send JSON.");
+  }
   try {
     return JSON.parse(text) as unknown;
   } catch {
