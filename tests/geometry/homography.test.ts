@@ -3,6 +3,7 @@ import { Matrix, SingularValueDecomposition } from "ml-matrix";
 import { describe, expect, it } from "vitest";
 import {
   applyHomography,
+  checkReferencePoints,
   invertHomography,
   mmToPx,
   orderAsRectangle,
@@ -29,6 +30,7 @@ function camera(opts: { f: number; principal: Point; tiltXDeg: number; tiltYDeg:
 }
 
 const near = (got: readonly number[], want: readonly number[], tol: number) => {
+  expect(got).toHaveLength(want.length);
   got.forEach((v, i) => expect(Math.abs(v - want[i])).toBeLessThanOrEqual(tol));
 };
 
@@ -169,5 +171,108 @@ describe("rectangleFit", () => {
     const wrong = rectangleFit(corners.map(above), 50, 70, photoSize);
     expect(wrong.judgedFlat).toBe(true);
     expect(wrong.fits).toBe(false);
+  });
+});
+
+/** The refusal a call throws, or a failed check when it throws none. */
+function refusal(f: () => unknown): ReferencePointsError {
+  try {
+    f();
+  } catch (e) {
+    expect(e).toBeInstanceOf(ReferencePointsError);
+    return e as ReferencePointsError;
+  }
+  throw new Error("expected a refusal");
+}
+
+describe("reference points that fix nothing, each said in words", () => {
+  it("a point that is not a finite number, in either coordinate", () => {
+    const e = refusal(() => checkReferencePoints([[0, 0], [Number.NaN, 1], [2, 2]]));
+    expect([e.name, e.problem, e.message]).toEqual(["ReferencePointsError", "bad-distance", "The reference points must be finite numbers."]);
+    expect(refusal(() => checkReferencePoints([[0, 0], [1, Number.POSITIVE_INFINITY]])).problem).toBe("bad-distance");
+  });
+
+  it("two points on one spot, numbered from 1, and what they are", () => {
+    expect(refusal(() => checkReferencePoints([[0, 0], [10, 0], [10, 0]])).message).toBe(
+      "Two of the reference points (2 and 3) are on the same spot; place each one on its own mark.",
+    );
+    expect(refusal(() => solveHomography([[0, 0], [10, 0], [10, 0], [0, 10]], [[0, 0], [1, 0], [1, 1], [0, 1]])).message).toMatch(/^Two of the points clicked \(2 and 3\)/);
+    expect(refusal(() => solveHomography([[0, 0], [10, 0], [10, 10], [0, 10]], [[0, 0], [1, 0], [1, 0], [0, 1]])).message).toMatch(/^Two of the target points \(2 and 3\)/);
+    expect(refusal(() => twoPointScale([5, 5], [5, 5], 40)).message).toMatch(/^Two of the two points \(1 and 2\)/);
+    expect(refusal(() => orderAsRectangle([[0, 0], [100, 0], [100, 0], [0, 60]])).message).toMatch(/^Two of the four points \(2 and 3\)/);
+  });
+
+  it("on one spot is judged against the points' spread: half a thousandth of a pixel apart on a 1000 px spread is one spot", () => {
+    expect(refusal(() => checkReferencePoints([[0, 0], [1000, 0], [1000.0005, 0.0002], [0, 1000]])).problem).toBe("coincident");
+    expect(() => checkReferencePoints([[0, 0], [1000, 0], [1000.5, 0.5], [0, 1000]])).not.toThrow();
+  });
+
+  it("three points on one line, numbered from 1; two of them close together are still on the line", () => {
+    expect(refusal(() => checkReferencePoints([[0, 10], [0, 0], [10, 0], [20, 0]])).message).toBe(
+      "Three of the reference points (2, 3 and 4) lie on one line; they cannot fix a perspective. Use four points at the corners of a rectangle.",
+    );
+    // Exactly three points are checked too.
+    expect(refusal(() => checkReferencePoints([[0, 0], [10, 0], [20, 0]])).problem).toBe("collinear");
+    // (1000.5, 0.0004) is 0.0004 px off the line through the other two, under 1e-6 of the 1000 px spread,
+    // though it is only 0.5 px from (1000, 0).
+    expect(refusal(() => checkReferencePoints([[0, 0], [1000, 0], [1000.5, 0.0004]])).problem).toBe("collinear");
+    expect(() => checkReferencePoints([[0, 0], [1000, 0], [1000.5, 5]])).not.toThrow();
+    // Two points can only be on one spot, never on one line.
+    expect(() => checkReferencePoints([[0, 0], [10, 0]])).not.toThrow();
+  });
+
+  it("a perspective needs at least four pairs, as many targets as points; five are fitted", () => {
+    const four: Point[] = [[0, 0], [10, 0], [10, 10], [0, 10]];
+    const e = refusal(() => solveHomography(four.slice(0, 3), four.slice(0, 3)));
+    expect([e.problem, e.message]).toEqual(["too-few", "A perspective needs four point pairs (or more), one for each clicked point."]);
+    expect(refusal(() => solveHomography(four, [...four, [2, 7]])).problem).toBe("too-few");
+    const five: Point[] = [...four, [2, 7]];
+    near(solveHomography(five, five.map((p) => [2 * p[0], 2 * p[1]] as Point)), [2, 0, 0, 0, 2, 0, 0, 0, 1], 1e-9);
+  });
+
+  it("a rectangle needs exactly four clicks, a figure with four corners, and a spacing above zero each way", () => {
+    const e = refusal(() => orderAsRectangle([[0, 0], [100, 0], [100, 60]]));
+    expect([e.problem, e.message]).toEqual(["too-few", "Click exactly four points, one on each corner of the rectangle."]);
+    expect(refusal(() => orderAsRectangle([[0, 0], [100, 0], [50, 100], [50, 30]])).message).toBe(
+      "The four points do not make a four-sided figure with corners; place one on each corner of the rectangle.",
+    );
+    const corners: Point[] = [[0, 60], [100, 60], [100, 0], [0, 0]];
+    const photo = { width: 200, height: 120 };
+    for (const [w, h] of [[0, 50], [70, 0], [Number.POSITIVE_INFINITY, 50], [70, Number.POSITIVE_INFINITY], [Number.NaN, 50], [-70, 50]]) {
+      const r = refusal(() => rectangleFit(corners, w, h, photo));
+      expect([r.problem, r.message]).toEqual(["bad-distance", "Type the measured spacing across and along the pattern, each greater than zero."]);
+    }
+  });
+
+  it("a two-point scale needs a distance above zero, said so", () => {
+    const e = refusal(() => twoPointScale([5, 5], [50, 5], -3));
+    expect([e.problem, e.message]).toEqual(["bad-distance", "Type the measured distance between the two points, greater than zero."]);
+    expect(twoPointScale([5, 5], [50, 5], 45).kind).toBe("scale");
+  });
+});
+
+describe("the corners of a clicked rectangle", () => {
+  it("come out bottom-left, bottom-right, top-right, top-left (photo y down), in whatever order they were clicked", () => {
+    // A rectangle far from the photo's origin, as clicks in a large photo are.
+    const bl: Point = [1000, 1200], br: Point = [1400, 1190], tr: Point = [1390, 900], tl: Point = [1010, 910];
+    const clicks = [bl, br, tr, tl];
+    const orders = [[0, 1, 2, 3], [3, 2, 1, 0], [2, 0, 3, 1], [1, 3, 0, 2], [2, 3, 0, 1], [1, 0, 3, 2]];
+    for (const o of orders) expect(orderAsRectangle(o.map((i) => clicks[i]))).toEqual([bl, br, tr, tl]);
+  });
+});
+
+describe("photo pixels and millimetres both ways", () => {
+  it("a scale map sends mm back to the pixels they came from, across and up", () => {
+    // 200 px for 50 mm: 4 px a millimetre; (25, 10) mm is 100 px right of and 40 px above the midpoint (200, 100).
+    const map = twoPointScale([100, 100], [300, 100], 50);
+    near(mmToPx(map, [25, 10]), [300, 60], 1e-12);
+    near(pxToMm(map, [300, 60]), [25, 10], 1e-12);
+  });
+
+  it("a perspective map sends mm back through its inverse", () => {
+    const h = solveHomography([[0, 0], [100, 0], [100, 100], [0, 100]], [[10, 20], [210, 20], [230, 240], [5, 200]]);
+    const map = { kind: "perspective" as const, h };
+    near(pxToMm(map, [50, 50]), applyHomography(h, [50, 50]), 1e-12);
+    near(mmToPx(map, applyHomography(h, [30, 70])), [30, 70], 1e-9);
   });
 });
