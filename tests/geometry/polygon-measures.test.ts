@@ -144,3 +144,39 @@ describe("polygon measures on hand-checked figures", () => {
     }
   });
 });
+
+// A ray to +x that passes exactly through a corner must count the crossing once (Sunday, "Inclusion of a point in
+// a polygon", geomalgorithms.com, 2001: an upward edge includes its start and excludes its end, a downward edge the
+// reverse). The diamond's corners lie on the lines x = 20 and y = 20; each point below is level with a corner.
+describe("the winding rule level with a corner", () => {
+  const diamondCcw: P[] = [[20, 15], [25, 20], [20, 25], [15, 20]];
+  const diamondCw: P[] = [[20, 15], [15, 20], [20, 25], [25, 20]];
+  const square: P[] = [[0, 0], [10, 0], [10, 10], [0, 10]];
+
+  it("a point inside, level with the right-hand corner, is inside whichever way the corners run", () => {
+    expect(pointInPolygon([18, 20], diamondCcw)).toBe(true);
+    expect(pointInPolygon([18, 20], diamondCw)).toBe(true);
+    expect(pointToPolygonBoundary([18, 20], diamondCcw, 0).inside).toBe(true);
+    expect(pointToPolygonBoundary([18, 20], diamondCw, 0).inside).toBe(true);
+  });
+
+  it("a point outside to the left, level with both side corners, is outside whichever way the corners run", () => {
+    expect(pointInPolygon([10, 20], diamondCcw)).toBe(false);
+    expect(pointInPolygon([10, 20], diamondCw)).toBe(false);
+    expect(pointToPolygonBoundary([10, 20], diamondCcw, 0).inside).toBe(false);
+    expect(pointToPolygonBoundary([10, 20], diamondCw, 0).inside).toBe(false);
+    // Level with the top corner and left of it: outside.
+    expect(pointToPolygonBoundary([10, 25], diamondCcw, 0).inside).toBe(false);
+  });
+
+  it("every corner of a square counts as on it (inside); a point on an edge's line beyond the edge does not", () => {
+    for (const c of square) {
+      expect(pointInPolygon(c, square)).toBe(true);
+      expect(pointToPolygonBoundary(c, square, 0).inside).toBe(true);
+    }
+    expect(pointInPolygon([0, -5], square)).toBe(false);
+    expect(pointInPolygon([15, 0], square)).toBe(false);
+    expect(pointToPolygonBoundary([15, 0], square, 0)).toMatchObject({ inside: false, distanceMm: 5 });
+    expect(pointToPolygonBoundary([0, -5], square, 0)).toMatchObject({ inside: false, distanceMm: 5 });
+  });
+});
