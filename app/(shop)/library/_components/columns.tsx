@@ -14,6 +14,16 @@ function common<T extends RowBase>(kind: LibraryKind, zone: string) {
 
 const num = (text: string) => <span className="num">{text}</span>;
 
+/** A length of the row's data, in the user's units; sortable by its id on the server. */
+function lengthColumn<T>(id: string, header: string, get: (row: T) => number, units: LengthUnits) {
+  return createColumnHelper<T>().accessor(get, { id, header, cell: (c) => num(lengthLabel(c.getValue(), units)) });
+}
+
+/** How many of something the row's data holds (studs, pockets, grooves). */
+function countColumn<T>(id: string, header: string, count: (row: T) => number) {
+  return createColumnHelper<T>().display({ id, header, cell: ({ row }) => num(String(count(row.original))) });
+}
+
 export function caseColumns(units: LengthUnits, zone: string): ColumnDef<CaseRow, unknown>[] {
   const h = createColumnHelper<CaseRow>();
   const c = common<CaseRow>("cases", zone);
@@ -27,10 +37,10 @@ export function caseColumns(units: LengthUnits, zone: string): ColumnDef<CaseRow
         return o.kind === "circle" ? num(diameterLabel(o.diameterMm, units)) : <span>polygon, {o.pointsMm.length} corners</span>;
       },
     }),
-    h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
-    h.accessor((r) => r.data.stockBoreMm, { id: "stockBoreMm", header: "Stock bore", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
-    h.accessor((r) => r.data.strokeMm, { id: "strokeMm", header: "Stroke", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
-    h.display({ id: "pockets", header: "Pockets", cell: ({ row }) => num(String(row.original.data.pockets?.length ?? 0)) }),
+    countColumn<CaseRow>("studs", "Studs", (r) => r.data.studs.length),
+    lengthColumn<CaseRow>("stockBoreMm", "Stock bore", (r) => r.data.stockBoreMm, units),
+    lengthColumn<CaseRow>("strokeMm", "Stroke", (r) => r.data.strokeMm, units),
+    countColumn<CaseRow>("pockets", "Pockets", (r) => r.data.pockets?.length ?? 0),
     c.updated,
   ] as ColumnDef<CaseRow, unknown>[];
 }
@@ -40,7 +50,7 @@ export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, 
   const c = common<KitRow>("kits", zone);
   return [
     c.name,
-    h.accessor((r) => r.data.boreMm, { id: "boreMm", header: "Bore", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
+    lengthColumn<KitRow>("boreMm", "Bore", (r) => r.data.boreMm, units),
     h.display({
       id: "skirt",
       header: "Skirt ⌀ (largest)",
@@ -53,7 +63,7 @@ export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, 
         );
       },
     }),
-    h.display({ id: "studs", header: "Studs", cell: ({ row }) => num(String(row.original.data.studs.length)) }),
+    countColumn<KitRow>("studs", "Studs", (r) => r.data.studs.length),
     h.accessor((r) => r.data.price?.amountMinor, { id: "price", header: "Price", cell: (c) => num(c.row.original.data.price ? formatMoney(c.row.original.data.price) : "—") }),
     c.updated,
   ] as ColumnDef<KitRow, unknown>[];
@@ -64,13 +74,13 @@ export function rigColumns(units: LengthUnits, zone: string): ColumnDef<RigRow, 
   const c = common<RigRow>("rigs", zone);
   return [
     c.name,
-    h.accessor((r) => r.data.headDiameterMm, { id: "headDiameterMm", header: "Head ⌀", cell: (c) => num(lengthLabel(c.getValue(), units)) }),
+    lengthColumn<RigRow>("headDiameterMm", "Head ⌀", (r) => r.data.headDiameterMm, units),
     h.display({
       id: "reach",
       header: "Calibrated reach",
       cell: ({ row }) => num(`${lengthLabel(row.original.data.calibration.minCutDiameterMm, units)} – ${lengthLabel(row.original.data.calibration.maxCutDiameterMm, units)}`),
     }),
-    h.display({ id: "grooves", header: "Grooves", cell: ({ row }) => num(String(row.original.data.grooves.length)) }),
+    countColumn<RigRow>("grooves", "Grooves", (r) => r.data.grooves.length),
     h.display({ id: "rpm", header: "Drill top speed", cell: ({ row }) => num(`${row.original.data.drillTopRpm} rpm`) }),
     c.updated,
   ] as ColumnDef<RigRow, unknown>[];
