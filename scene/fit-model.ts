@@ -1,7 +1,7 @@
 // The solids of the 3D fit view (three.js geometry), built from the core's output only: where the core
 // put the skirt and the cut, how deep, how wide. Nothing here decides whether anything clears.
 
-import { BufferGeometry, Float32BufferAttribute } from "three";
+import { BufferGeometry, Float32BufferAttribute, ShapeUtils, Vector2 } from "three";
 import type { CaseProfile, CylinderKit, KitResult, Study } from "@/geometry";
 import { drawnCutAxis, FLANGE_DRAWN_MM, flangeRadiusMm, interferenceRegions } from "./fit";
 import { circleRing, outlineRing } from "./outline";
@@ -45,12 +45,24 @@ function merge(parts: BufferGeometry[]): BufferGeometry {
   return out;
 }
 
-/** The planned counterbore as a solid: the core's diameter and depth, its axis from the core's centre at the deck to its centre at the bottom. */
-export function cutGeometry(k: KitResult, exaggeration = 1): BufferGeometry | null {
+// A circle of n segments about the origin has the same cap triangles at every radius: kept per n.
+const circleCaps = new Map<number, number[][]>();
+
+function circleCapTriangles(n: number): number[][] {
+  let tris = circleCaps.get(n);
+  if (!tris) circleCaps.set(n, (tris = ShapeUtils.triangulateShape(circleRing([0, 0], 1, n).map(([x, y]) => new Vector2(x, y)), [])));
+  return tris;
+}
+
+/**
+ * The planned counterbore as a solid: the core's diameter and depth, its axis from the core's centre at the deck to its centre at the bottom.
+ * Written into `into` when it has room for it (the same number of segments), so a dragged cut keeps its buffers.
+ */
+export function cutGeometry(k: KitResult, exaggeration = 1, into?: BufferGeometry): BufferGeometry | null {
   const axis = drawnCutAxis(k, exaggeration);
   if (!k.cut || !axis) return null;
   const ring = circleRing([0, 0], k.cut.diameterMm / 2);
-  return extrudeRegions([{ outer: ring, holes: [] }], 0, k.cut.depthMm, { shiftTop: axis.top, shiftBottom: axis.bottom, smooth: true });
+  return extrudeRegions([{ outer: ring, holes: [] }], 0, k.cut.depthMm, { shiftTop: axis.top, shiftBottom: axis.bottom, smooth: true, capTriangles: circleCapTriangles(ring.length), into });
 }
 
 /** The skirt as a tube: outside the worst diameter reading, inside the bore, from the deck down by the core's protrusion. */

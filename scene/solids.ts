@@ -26,6 +26,10 @@ export interface ExtrudeOptions {
   readonly shiftBottom?: Vec2;
   /** Smooth side normals (circles) instead of flat faces (polygons). */
   readonly smooth?: boolean;
+  /** The caps' triangles of a single region (indices into its outer ring, then its holes), when the caller already has them. */
+  readonly capTriangles?: readonly (readonly number[])[];
+  /** A geometry to write into when it holds as many vertices (a solid that follows a slider keeps its buffers); else a new one is made. */
+  readonly into?: BufferGeometry;
 }
 
 /**
@@ -46,10 +50,13 @@ export function extrudeRegions(regions: readonly Region[], zTop: number, zBottom
     const outer = ccw(region.outer);
     const holes = region.holes.map((h) => ccw(h).reverse());
     const all = [outer, ...holes].flat();
-    const tris = ShapeUtils.triangulateShape(
-      outer.map(([x, y]) => new Vector2(x, y)),
-      holes.map((h) => h.map(([x, y]) => new Vector2(x, y))),
-    );
+    const tris =
+      options.capTriangles && regions.length === 1
+        ? options.capTriangles
+        : ShapeUtils.triangulateShape(
+            outer.map(([x, y]) => new Vector2(x, y)),
+            holes.map((h) => h.map(([x, y]) => new Vector2(x, y))),
+          );
     for (const [a, b, c] of tris) {
       // Top cap faces up (−z); seen from above, counter-clockwise in the (x, y) plane stays counter-clockwise in the world.
       for (const i of [a, b, c]) push(all[i][0] + st[0], all[i][1] + st[1], zTop, [0, 0, -1]);
@@ -57,9 +64,19 @@ export function extrudeRegions(regions: readonly Region[], zTop: number, zBottom
     }
     for (const ring of [outer, ...holes]) sideWalls(ring, zTop, zBottom, st, sb, options.smooth ?? false, push);
   }
-  const g = new BufferGeometry();
-  g.setAttribute("position", new Float32BufferAttribute(pos, 3));
-  g.setAttribute("normal", new Float32BufferAttribute(nor, 3));
+  const into = options.into;
+  const reuse = into?.getAttribute("position")?.array.length === pos.length && into.getAttribute("normal")?.array.length === nor.length;
+  const g = reuse ? into : new BufferGeometry();
+  if (reuse) {
+    for (const [name, values] of [["position", pos], ["normal", nor]] as const) {
+      const a = g.getAttribute(name) as Float32BufferAttribute;
+      (a.array as Float32Array).set(values);
+      a.needsUpdate = true;
+    }
+  } else {
+    g.setAttribute("position", new Float32BufferAttribute(pos, 3));
+    g.setAttribute("normal", new Float32BufferAttribute(nor, 3));
+  }
   g.computeBoundingBox();
   g.computeBoundingSphere();
   return g;

@@ -30,6 +30,8 @@ export class FitObjects {
   readonly ports = new Group();
   readonly portMaterials: PortOverlayMaterials;
   private applied: { snap: FitSnapshot | null; view: ViewState | null; kit: unknown } = { snap: null, view: null, kit: null };
+  /** What the port overlay was drawn from: the case's pockets, the kit and the core's verdict on each window. */
+  private portsFrom: { pockets: unknown; kit: unknown; verdicts: string } = { pockets: null, kit: null, verdicts: "" };
   private view: ViewState | null = null;
 
   constructor() {
@@ -86,14 +88,15 @@ export class FitObjects {
     this.colourSkirts(snap);
     // The rest depends only on the kit on show: skip it when only the other kits' results arrived.
     if (!kitChanged) return;
-    this.cut.geometry.dispose();
-    this.cut.geometry = cutGeometry(k, v.exaggeration) ?? new BufferGeometry();
+    const cutGeom = cutGeometry(k, v.exaggeration, this.cut.geometry);
+    if (cutGeom !== this.cut.geometry) {
+      this.cut.geometry.dispose();
+      this.cut.geometry = cutGeom ?? new BufferGeometry();
+    }
     this.hit.geometry.dispose();
     const hitGeom = interferenceGeometry(study, k);
     this.hit.geometry = hitGeom ?? new BufferGeometry();
-    for (const g of this.ports.children) disposeOverlay(g as Group);
-    this.ports.clear();
-    this.ports.add(portOverlay(study, snap.kitIndex, k, this.portMaterials));
+    this.drawPorts(snap);
 
     const size = v.customer ? LABEL_CUSTOMER_MM : LABEL_MM;
     const L = this.labels;
@@ -133,6 +136,17 @@ export class FitObjects {
       L.hit.sprite.position.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
       L.hit.resize();
     }
+  }
+
+  /** Redraws the port overlay when what it is drawn from changed (a cut being dragged seldom changes it). */
+  private drawPorts({ study, result, kitIndex }: FitSnapshot) {
+    const from = { pockets: study.case.pockets, kit: study.kits[kitIndex], verdicts: result.kits[kitIndex].ports.map((p) => `${p.portLabel}:${p.ok}`).join("|") };
+    const was = this.portsFrom;
+    if (from.pockets === was.pockets && from.kit === was.kit && from.verdicts === was.verdicts) return;
+    this.portsFrom = from;
+    for (const g of this.ports.children) disposeOverlay(g as Group);
+    this.ports.clear();
+    this.ports.add(portOverlay(study, kitIndex, result.kits[kitIndex], this.portMaterials));
   }
 
   private colourSkirts({ result, kitIndex }: FitSnapshot) {
