@@ -368,6 +368,17 @@ describe("what is wrong with a shape, each case", () => {
     expect(shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 20 }] })).toEqual([]);
   });
 
+  it("a round passage that reaches out past the deck's top edge only is reported", () => {
+    // The deck's top edge is at y = 40; a Ø10 passage centred at (0, 37) reaches y = 42 at its top.
+    expect(shapeIssues({ deck, mouth: null, studs: [], pockets: [{ kind: "circle", diameterMm: 10, centerMm: [0, 37] }] })).toEqual([
+      { at: "pockets.0", message: "passage 1 reaches outside the deck" },
+    ]);
+  });
+
+  it("a stud not yet placed is passed over, and the next is still numbered by its place", () => {
+    expect(shapeIssues({ deck, mouth: null, studs: [null, { positionMm: [200, 0] }], pockets: [] })).toEqual([{ at: "studs.1", message: "stud 2 is off the deck" }]);
+  });
+
   it("a mouth off the axis: a stud inside it is reported, one inside its mirror image is not", () => {
     const mouth = { kind: "circle" as const, diameterMm: 20, centerMm: [20, 10] as [number, number] };
     const issues = shapeIssues({ deck, mouth, studs: [{ positionMm: [25, 12] }, { positionMm: [-25, -12] }], pockets: [] });
