@@ -43,6 +43,8 @@ export function TraceMarks({ photoSizePx, mode, refPx, points, traced, cursor }:
     try {
       return orderAsRectangle(refPx);
     } catch {
+      // Four points that make no rectangle (two coincide, three in a line): the reference panel says so and
+      // refuses the scale; here they are drawn joined in the order they were clicked.
       return refPx;
     }
   }, [refPx]);

@@ -48,6 +48,8 @@ export function useDrawingImport(allowed: ShapeRole[], onApply: (shapes: Capture
       setUnit(first.declaredUnit ?? "mm");
       setRoles(guessRoles(first, allowed));
     } catch {
+      // Only the first guess of the unit and the roles is lost: the same file is read again for the view just
+      // below, and that reading's message (what was found, why it cannot be used) is what the picker shows.
       setUnit("mm");
       setRoles({});
     }

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useLayoutEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useRef, useState, type RefObject } from "react";
 import { callApi } from "../api-client";
 import { photoProblem, sniffPhotoType, type PhotoType } from "./photo-file";
 import { storeCasePhoto } from "./photo-upload";
@@ -26,6 +26,58 @@ type Options = {
   onPhotoChosen?: (photo: ChosenPhoto) => void;
 };
 
+/** A chosen file's checked type and its picture turned upright by its EXIF orientation, or why it cannot be used. */
+async function readPhoto(file: File): Promise<{ ok: true; bitmap: ImageBitmap; type: PhotoType } | { ok: false; message: string; clearInput: boolean }> {
+  const type = sniffPhotoType(new Uint8Array(await file.slice(0, 16).arrayBuffer()));
+  const problem = photoProblem(file.size, type);
+  if (problem || !type) return { ok: false, message: `${problem} Nothing was saved.`, clearInput: true };
+  try {
+    return { ok: true, bitmap: await createImageBitmap(file, { imageOrientation: "from-image" }), type };
+  } catch {
+    return { ok: false, message: "The file could not be read as an image (it may be damaged). Nothing was saved.", clearInput: false };
+  }
+}
+
+/** Draws the decoded picture into the canvas at display size (the longest side at most DISPLAY_MAX_PX) once both are there. */
+function useDisplayCanvas(canvasRef: RefObject<HTMLCanvasElement | null>, picture: RefObject<CanvasImageSource | null>, photo: TracePhoto | null) {
+  useLayoutEffect(() => {
+    const canvas = canvasRef.current;
+    const source = picture.current;
+    if (!canvas || !source || !photo) return;
+    const k = Math.min(1, DISPLAY_MAX_PX / Math.max(photo.widthPx, photo.heightPx));
+    canvas.width = Math.round(photo.widthPx * k);
+    canvas.height = Math.round(photo.heightPx * k);
+    canvas.getContext("2d")?.drawImage(source, 0, 0, canvas.width, canvas.height);
+  }, [canvasRef, picture, photo]);
+}
+
+/** The photo last kept with the case profile, shown when the panel opens unless a file is chosen before it arrives. */
+function useKeptPhoto(caseId: string | null, photoTurn: RefObject<number>, show: (img: HTMLImageElement, item: { id: string; url: string }) => void, setNotice: (n: PhotoNotice) => void) {
+  useEffect(() => {
+    if (!caseId) return;
+    let live = true;
+    const turn = photoTurn.current;
+    const current = () => live && turn === photoTurn.current;
+    void callApi<{ items: { id: string; state: string; url: string | null }[] }>(`/api/v1/cases/${caseId}/photos`).then((res) => {
+      if (!current()) return;
+      if (!res.ok) {
+        if (res.status !== 404) setNotice({ tone: "error", text: res.error.message });
+        return;
+      }
+      const latest = res.data.items.find((p) => p.state === "ready");
+      if (!latest?.url) return;
+      const item = { id: latest.id, url: latest.url };
+      const img = new Image();
+      img.onload = () => current() && show(img, item);
+      img.onerror = () => current() && setNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
+      img.src = item.url;
+    });
+    return () => {
+      live = false;
+    };
+  }, [caseId, photoTurn, show, setNotice]);
+}
+
 export function useTracePhoto({ caseId, onNewPhoto, onPhotoChosen }: Options) {
   const [photo, setPhoto] = useState<TracePhoto | null>(null);
   const [notice, setNotice] = useState<PhotoNotice | null>(null);
@@ -40,75 +92,26 @@ export function useTracePhoto({ caseId, onNewPhoto, onPhotoChosen }: Options) {
 
   // The decoded picture waits here until the canvas for it is on the page, then is drawn at display size.
   const picture = useRef<CanvasImageSource | null>(null);
-  useLayoutEffect(() => {
-    const canvas = canvasRef.current;
-    const source = picture.current;
-    if (!canvas || !source || !photo) return;
-    const k = Math.min(1, DISPLAY_MAX_PX / Math.max(photo.widthPx, photo.heightPx));
-    canvas.width = Math.round(photo.widthPx * k);
-    canvas.height = Math.round(photo.heightPx * k);
-    canvas.getContext("2d")?.drawImage(source, 0, 0, canvas.width, canvas.height);
-  }, [photo]);
+  useDisplayCanvas(canvasRef, picture, photo);
 
-  const showStored = useCallback((item: { id: string; url: string | null }, turn: number) => {
-    if (!item.url) return;
-    const img = new Image();
-    img.onload = () => {
-      if (turn !== photoTurn.current) return;
-      picture.current = img;
-      setPhoto({ src: item.url!, widthPx: img.naturalWidth, heightPx: img.naturalHeight, storedId: item.id });
-    };
-    img.onerror = () => {
-      if (turn === photoTurn.current) setNotice({ tone: "error", text: "The stored photo could not be shown; upload it again." });
-    };
-    img.src = item.url;
+  const showKept = useCallback((img: HTMLImageElement, item: { id: string; url: string }) => {
+    picture.current = img;
+    setPhoto({ src: item.url, widthPx: img.naturalWidth, heightPx: img.naturalHeight, storedId: item.id });
   }, []);
-
-  useEffect(() => {
-    if (!caseId) return;
-    let live = true;
-    const turn = photoTurn.current;
-    void callApi<{ items: { id: string; state: string; url: string | null }[] }>(`/api/v1/cases/${caseId}/photos`).then((res) => {
-      if (!live || turn !== photoTurn.current) return;
-      if (!res.ok) {
-        if (res.status !== 404) setNotice({ tone: "error", text: res.error.message });
-        return;
-      }
-      const latest = res.data.items.find((p) => p.state === "ready");
-      if (latest) showStored(latest, turn);
-    });
-    return () => {
-      live = false;
-    };
-  }, [caseId, showStored]);
+  useKeptPhoto(caseId, photoTurn, showKept, setNotice);
 
   /** Decodes a chosen file upright, or says why not; null when a later choice took over meanwhile. */
   async function decode(file: File, turn: number): Promise<{ bitmap: ImageBitmap; type: PhotoType } | null> {
-    const refuse = (text: string) => {
-      if (turn !== photoTurn.current) return null;
-      setDecoding(false);
-      setNotice({ tone: "error", text });
-      return null;
-    };
-    const type = sniffPhotoType(new Uint8Array(await file.slice(0, 16).arrayBuffer()));
-    const problem = photoProblem(file.size, type);
-    if (problem || !type) {
-      if (fileRef.current) fileRef.current.value = "";
-      return refuse(`${problem} Nothing was saved.`);
-    }
-    let bitmap: ImageBitmap;
-    try {
-      // Turned upright by its EXIF orientation, as the camera meant it.
-      bitmap = await createImageBitmap(file, { imageOrientation: "from-image" });
-    } catch {
-      return refuse("The file could not be read as an image (it may be damaged). Nothing was saved.");
-    }
+    const read = await readPhoto(file);
     if (turn !== photoTurn.current) {
-      bitmap.close();
+      if (read.ok) read.bitmap.close();
       return null;
     }
     setDecoding(false);
-    return { bitmap, type };
+    if (read.ok) return read;
+    if (read.clearInput && fileRef.current) fileRef.current.value = "";
+    setNotice({ tone: "error", text: read.message });
+    return null;
   }
 
   async function choose(file: File | undefined) {

@@ -26,6 +26,52 @@ type Options = {
   onRestored: () => void;
 };
 
+const POINTS_NEEDED: Record<Mode, number> = { rectangle: 4, "two-point": 2 };
+
+/** The lengths measured on the part that the clicked points stand for, in mm (undefined: not given yet). */
+type Measured = { mode: Mode; acrossMm?: number; alongMm?: number; distanceMm?: number };
+
+/** The photo's scale or perspective from the clicked points and the measured lengths, how well they fit, or why they cannot be used. */
+function solveReference(photo: TracePhoto, refPx: Point[], m: Measured, units: LengthUnits): Reference {
+  if (refPx.length < POINTS_NEEDED[m.mode]) return null;
+  try {
+    if (m.mode === "rectangle") {
+      if (m.acrossMm === undefined || m.alongMm === undefined) return null;
+      const fit = rectangleFit(refPx, m.acrossMm, m.alongMm, { width: photo.widthPx, height: photo.heightPx }, (mm) => lengthLabel(mm, units));
+      return { map: fit.map, summary: fit.summary, fits: fit.fits };
+    }
+    if (m.distanceMm === undefined) return null;
+    return { map: twoPointScale(refPx[0], refPx[1], m.distanceMm), summary: `Scale set: ${lengthLabel(m.distanceMm, units)} between the two points.`, fits: true };
+  } catch (error) {
+    if (error instanceof ReferencePointsError) return { error: error.message };
+    throw error;
+  }
+}
+
+/** What is kept with the photo for a reference that solved: the clicked points and the measured lengths. */
+function referenceToKeep(refPx: Point[], m: Measured): PhotoReference | null {
+  const pts = refPx.map((p): [number, number] => [p[0], p[1]]);
+  if (m.mode === "rectangle" && pts.length === 4 && m.acrossMm !== undefined && m.alongMm !== undefined) return { kind: "rectangle", points: [pts[0], pts[1], pts[2], pts[3]], widthMm: m.acrossMm, heightMm: m.alongMm };
+  if (m.mode === "two-point" && pts.length === 2 && m.distanceMm !== undefined) return { kind: "scale", points: [pts[0], pts[1]], distanceMm: m.distanceMm };
+  return null;
+}
+
+/** Tells the keeper of the photo each new reference, but not the one it just handed back. */
+function useReportReference(current: PhotoReference | null, photo: TracePhoto | null, restoredKey: string, onReferenceChange?: (ref: PhotoReference | null) => void) {
+  const reported = useRef(restoredKey);
+  const restoredSeen = useRef(restoredKey);
+  useEffect(() => {
+    const key = JSON.stringify(current);
+    // What was just restored came from the keeper: no news to it.
+    if (restoredSeen.current !== restoredKey) reported.current = restoredSeen.current = restoredKey;
+    if (key === reported.current) return;
+    // A photo still being shown has not lost its reference yet: nothing to report until it is on screen.
+    if (!current && !photo) return;
+    reported.current = key;
+    onReferenceChange?.(current);
+  }, [current, photo, onReferenceChange, restoredKey]);
+}
+
 export function useTraceReference({ photo, units, initialReference, onReferenceChange, onRestored }: Options) {
   const [mode, setModeState] = useState<Mode>("rectangle");
   const [refPx, setRefPx] = useState<Point[]>([]);
@@ -43,23 +89,9 @@ export function useTraceReference({ photo, units, initialReference, onReferenceC
   const acrossMm = exact(acrossText, across, kept.across);
   const alongMm = exact(alongText, along, kept.along);
   const distanceMm = exact(distanceText, distance, kept.distance);
-  const need = mode === "rectangle" ? 4 : 2;
+  const need = POINTS_NEEDED[mode];
 
-  const reference = useMemo((): Reference => {
-    if (!photo || refPx.length < need) return null;
-    try {
-      if (mode === "rectangle") {
-        if (acrossMm === undefined || alongMm === undefined) return null;
-        const fit = rectangleFit(refPx, acrossMm, alongMm, { width: photo.widthPx, height: photo.heightPx }, (mm) => lengthLabel(mm, units));
-        return { map: fit.map, summary: fit.summary, fits: fit.fits };
-      }
-      if (distanceMm === undefined) return null;
-      return { map: twoPointScale(refPx[0], refPx[1], distanceMm), summary: `Scale set: ${lengthLabel(distanceMm, units)} between the two points.`, fits: true };
-    } catch (error) {
-      if (error instanceof ReferencePointsError) return { error: error.message };
-      throw error;
-    }
-  }, [photo, refPx, need, mode, acrossMm, alongMm, distanceMm, units]);
+  const reference = useMemo(() => (photo ? solveReference(photo, refPx, { mode, acrossMm, alongMm, distanceMm }, units) : null), [photo, refPx, mode, acrossMm, alongMm, distanceMm, units]);
   const map = reference && "map" in reference ? reference.map : null;
 
   // Restored from what was kept (whenever that changes), in the render that sees it.
@@ -80,26 +112,8 @@ export function useTraceReference({ photo, units, initialReference, onReferenceC
     }
   }
 
-  const current = useMemo((): PhotoReference | null => {
-    if (!map) return null;
-    const pts = refPx.map((p): [number, number] => [p[0], p[1]]);
-    if (mode === "rectangle" && pts.length === 4 && acrossMm !== undefined && alongMm !== undefined) return { kind: "rectangle", points: [pts[0], pts[1], pts[2], pts[3]], widthMm: acrossMm, heightMm: alongMm };
-    if (mode === "two-point" && pts.length === 2 && distanceMm !== undefined) return { kind: "scale", points: [pts[0], pts[1]], distanceMm };
-    return null;
-  }, [map, refPx, mode, acrossMm, alongMm, distanceMm]);
-
-  const reported = useRef(restoredKey);
-  const restoredSeen = useRef(restoredKey);
-  useEffect(() => {
-    const key = JSON.stringify(current);
-    // What was just restored came from the keeper: no news to it.
-    if (restoredSeen.current !== restoredKey) reported.current = restoredSeen.current = restoredKey;
-    if (key === reported.current) return;
-    // A photo still being shown has not lost its reference yet: nothing to report until it is on screen.
-    if (!current && !photo) return;
-    reported.current = key;
-    onReferenceChange?.(current);
-  }, [current, photo, onReferenceChange, restoredKey]);
+  const current = useMemo(() => (map ? referenceToKeep(refPx, { mode, acrossMm, alongMm, distanceMm }) : null), [map, refPx, mode, acrossMm, alongMm, distanceMm]);
+  useReportReference(current, photo, restoredKey, onReferenceChange);
 
   const setMode = (m: Mode) => {
     setModeState(m);
