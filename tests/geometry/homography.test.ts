@@ -6,6 +6,7 @@ import {
   checkReferencePoints,
   invertHomography,
   mmToPx,
+  seenAspect,
   orderAsRectangle,
   pxToMm,
   rectangleFit,
@@ -258,6 +259,25 @@ describe("the corners of a clicked rectangle", () => {
     const clicks = [bl, br, tr, tl];
     const orders = [[0, 1, 2, 3], [3, 2, 1, 0], [2, 0, 3, 1], [1, 3, 0, 2], [2, 3, 0, 1], [1, 0, 3, 2]];
     for (const o of orders) expect(orderAsRectangle(o.map((i) => clicks[i]))).toEqual([bl, br, tr, tl]);
+  });
+});
+
+describe("the corners of a rectangle turned in the photo", () => {
+  it("a square turned 30° keeps the corner nearest the lower left as bottom-left, in any click order", () => {
+    // Corners 300 px from (1200, 1000) at −105°, −15°, 75° and 165° (counter-clockwise, y up): x = 1200 + 300·cos θ,
+    // y = 1000 − 300·sin θ (photo y down).
+    const at = (deg: number): Point => [1200 + 300 * Math.cos((deg * Math.PI) / 180), 1000 - 300 * Math.sin((deg * Math.PI) / 180)];
+    const [bl, br, tr, tl] = [at(-105), at(-15), at(75), at(165)];
+    for (const o of [[0, 1, 2, 3], [3, 1, 0, 2], [2, 3, 1, 0]]) expect(orderAsRectangle(o.map((i) => [bl, br, tr, tl][i]))).toEqual([bl, br, tr, tl]);
+  });
+});
+
+describe("the proportions a photo shows", () => {
+  it("a four-sided figure no centred camera could give is judged as a parallelogram", () => {
+    // For these corners the focal length that the pinhole model asks for comes out with f² < 0 (no real camera).
+    const r = seenAspect([[-100, 120], [110, 100], [-90, -100], [95, -95]], [0, 0]);
+    expect(r.flat).toBe(true);
+    expect(Number.isFinite(r.aspect) && r.aspect > 0).toBe(true);
   });
 });
 
