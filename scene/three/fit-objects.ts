@@ -15,6 +15,17 @@ const LABEL_MM = 4.2;
 const LABEL_CUSTOMER_MM = 7.5;
 
 /**
+ * Whether two snapshots draw the same picture in a view: the same study and kit on show with the same result
+ * for it, and the other kits' skirts hidden (no overlay), so only their unseen colours could differ. The
+ * other kits' results arriving after a slider step is such a change: no new frame is drawn for it.
+ */
+export function drawsTheSame(a: FitSnapshot, b: FitSnapshot, view: ViewState): boolean {
+  if (view.overlay || a.study !== b.study || a.kitIndex !== b.kitIndex || a.result.kits[a.kitIndex] !== b.result.kits[b.kitIndex]) return false;
+  // The colour of the kit on show also reads the tolerance and the shop's minimum clearance.
+  return a.result.toleranceMm === b.result.toleranceMm && a.result.limits.values.minRadialClearanceMm === b.result.limits.values.minRadialClearanceMm;
+}
+
+/**
  * The parts of the fit view that follow every slider step: the cut and interference solids, the skirt
  * colours, the thinnest-wall mark and the labels. Updated in place from the store inside useFrame.
  */

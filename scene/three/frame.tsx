@@ -4,6 +4,7 @@ import { useFrame, useThree } from "@react-three/fiber";
 import { useEffect, useRef } from "react";
 import type { FitStore } from "../store";
 import { drawnKey } from "./drawn-key";
+import { drawsTheSame } from "./fit-objects";
 import { TARGET, cameraPosition, type ViewState } from "./view";
 
 /** What the studio can ask of the canvas. */
@@ -37,15 +38,16 @@ export function FrameRenderer({ store, view, onReady }: { store: FitStore; view:
 
   // A cut input is drawn at once, inside the input's own task, so the canvas is ready for the next
   // composited frame; anything else waits for the next animation frame.
-  useEffect(
-    () =>
-      store.subscribe(() => {
-        const at = store.get().inputAt;
-        if (at > 0 && at !== measured.current) advance(performance.now());
-        else invalidate();
-      }),
-    [store, invalidate, advance],
-  );
+  useEffect(() => {
+    let last = store.get();
+    return store.subscribe(() => {
+      const snap = store.get();
+      const at = snap.inputAt;
+      if (at > 0 && at !== measured.current) advance(performance.now());
+      else if (!drawsTheSame(last, snap, viewRef.current)) invalidate();
+      last = snap;
+    });
+  }, [store, invalidate, advance]);
   useEffect(() => {
     onReady?.({
       snapshot: () => {
