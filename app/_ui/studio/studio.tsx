@@ -37,7 +37,7 @@ export interface StudioProps {
 /** The fit studio: the 3D view, the results in words, the cut controls with the walls, rig set-up and tilt they give, the kit lineup and the drawings. */
 export function Studio({ study, result, units, onCutChange, customerMode = false, chosenKitId, lockCustomerMode = false, kitPrices }: StudioProps) {
   const initialKit = Math.max(0, result.kits.findIndex((k) => k.kitId === chosenKitId));
-  const { store, snap, setCut, setKit } = useLiveFit(study, result, initialKit);
+  const { store, snap, setCut, setKit, settle } = useLiveFit(study, result, initialKit);
   // The panels may lag behind a drag (deferred); the kit pickers follow `snap` itself, or a clicked radio would
   // spring back until the deferred render lands.
   const live = useDeferredValue(snap);
@@ -65,10 +65,11 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
       const next = { diameterMm: cur?.diameterMm, depthMm: cur?.depthMm, ...patch };
       // A drag's end repeats the last live value: save it without evaluating it again.
       const same = next.diameterMm === cur?.diameterMm && next.depthMm === cur?.depthMm;
-      if (!(final && same)) setCut(next, at);
+      if (!(final && same)) setCut(next, at, final);
+      else settle();
       onCutChange?.(next, final);
     },
-    [store, setCut, onCutChange],
+    [store, setCut, settle, onCutChange],
   );
 
   const k = snap.result.kits[snap.kitIndex];

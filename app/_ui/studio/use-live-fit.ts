@@ -11,16 +11,54 @@ export function withCut(study: Study, cut: CutDraft): Study {
   return { ...study, cut: { ...study.cut, diameterMm: cut.diameterMm, depthMm: cut.depthMm } };
 }
 
+/** How long a drag must rest before every kit is evaluated for the cut it rests at. */
+export const SETTLE_MS = 150;
+
 /**
  * The live fit: a store the 3D view reads every frame, and a React view of it for the panels. A cut
- * change re-evaluates with the core in the browser, at once, and the panels follow one render later.
+ * change re-evaluates the kit on show with the core in the browser, at once; the other kits (the lineup,
+ * the overlays) follow once the cut settles: after the next frame when the drag ends or a value is typed,
+ * or when a drag has rested for SETTLE_MS.
  */
 export function useLiveFit(study: Study, result: StudyResult, initialKit: number) {
   const store = useMemo(() => createFitStore({ study, result, kitIndex: initialKit, inputAt: 0 }), [study, result, initialKit]);
   const snap: FitSnapshot = useSyncExternalStore(store.subscribe, store.get, store.get);
-  const pending = useRef<number | null>(null);
+  const pending = useRef<{ frame: number | null; timer: ReturnType<typeof setTimeout> | null }>({ frame: null, timer: null });
+  // The study the other kits' results are for.
+  const restFor = useRef<Study>(study);
+
+  const cancelRest = useCallback(() => {
+    const p = pending.current;
+    if (p.frame !== null) cancelAnimationFrame(p.frame);
+    if (p.timer !== null) clearTimeout(p.timer);
+    pending.current = { frame: null, timer: null };
+  }, []);
+  const evaluateRest = useCallback(() => {
+    cancelRest();
+    const now = store.get();
+    if (restFor.current === now.study) return;
+    restFor.current = now.study;
+    const full = evaluateStudy(now.study);
+    // The kit on show keeps its result object (the same figures), so the scene has nothing to rebuild.
+    store.set({ result: { ...full, kits: full.kits.map((k, i) => (i === now.kitIndex ? now.result.kits[i] : k)) } });
+  }, [store, cancelRest]);
+  /** Evaluates the other kits after the next frame (`soon`), or once no change came for SETTLE_MS. */
+  const settle = useCallback(
+    (soon = true) => {
+      cancelRest();
+      if (!soon) pending.current.timer = setTimeout(evaluateRest, SETTLE_MS);
+      else
+        pending.current.frame = requestAnimationFrame(() => {
+          pending.current.frame = null;
+          pending.current.timer = setTimeout(evaluateRest, 0);
+        });
+    },
+    [cancelRest, evaluateRest],
+  );
+  useEffect(() => cancelRest, [store, cancelRest]);
+
   const setCut = useCallback(
-    (cut: CutDraft, inputAt = performance.now()) => {
+    (cut: CutDraft, inputAt = performance.now(), final = true) => {
       const s = store.get();
       const next = withCut(s.study, cut);
       // The kit on show first, so its frame is not kept waiting; each kit's result depends only on the
@@ -29,22 +67,19 @@ export function useLiveFit(study: Study, result: StudyResult, initialKit: number
       const shown = evaluateStudy({ ...next, kits: [next.kits[s.kitIndex]] }).kits[0];
       performance.measure("studio:evaluate", { start: t0, duration: performance.now() - t0 });
       store.set({ study: next, result: { ...s.result, kits: s.result.kits.map((k, i) => (i === s.kitIndex ? shown : k)) }, inputAt });
-      // Then every kit, after that frame, for the lineup and the overlays (coalesced while dragging).
-      if (pending.current !== null) cancelAnimationFrame(pending.current);
-      pending.current = requestAnimationFrame(() => {
-        pending.current = null;
-        setTimeout(() => {
-          const now = store.get();
-          if (now.study !== next) return;
-          const full = evaluateStudy(next);
-          store.set({ result: { ...full, kits: full.kits.map((k, i) => (i === now.kitIndex ? now.result.kits[i] : k)) } });
-        }, 0);
-      });
+      settle(final);
     },
-    [store],
+    [store, settle],
   );
-  const setKit = useCallback((kitIndex: number) => store.set({ kitIndex }), [store]);
-  return { store, snap, setCut, setKit };
+  // Another kit goes on show with its result for the cut as it is now.
+  const setKit = useCallback(
+    (kitIndex: number) => {
+      evaluateRest();
+      store.set({ kitIndex });
+    },
+    [store, evaluateRest],
+  );
+  return { store, snap, setCut, setKit, settle };
 }
 
 /** A value that follows `value` but lags behind it while it changes quickly (for heavy panels such as SVG drawings). */
