@@ -2,11 +2,12 @@
 // with the reference points clicked on it, and they come back when the case is opened again; when the photo
 // cannot be kept the case is still saved and its form says why; the optional crank chamber lengths are all or
 // nothing, with the message next to the missing one.
-import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
+import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
+import { closeBrowser, launchSignedIn } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
-import { textOf } from "../support/photo-surface";
+import { openNewForm, typeReadings, typeSquareStudCase } from "../support/library-forms";
+import { clickPhotoPixel, openPhotoPanel, textOf } from "../support/photo-surface";
 import { greyPng } from "../support/png";
 import { kitData, ok } from "../integration/library-fixtures";
 import { signedLengthLabel } from "@/model/units";
@@ -14,11 +15,11 @@ import { signedLengthLabel } from "@/model/units";
 const W = 800;
 const H = 600;
 const PHOTO = greyPng(W, H);
+const PHOTO_SIZE = { widthPx: W, heightPx: H };
 /** Four stud centres clicked on the photo, in its pixels: a square seen square on. */
 const STUDS: [number, number][] = [[200, 500], [600, 500], [600, 100], [200, 100]];
 
 let browser: Browser;
-let context: BrowserContext;
 let page: Page;
 let api: Http;
 const pageErrors: string[] = [];
@@ -26,17 +27,10 @@ const uid = Date.now().toString(36);
 
 beforeAll(async () => {
   api = await signIn(DEMO.owner.email, DEMO.owner.password);
-  browser = await launchBrowser();
-  context = await newPerson(browser, { width: 1500, height: 1900 });
-  page = await context.newPage();
-  page.on("pageerror", (e) => pageErrors.push(e.message));
-  await signInThroughForm(page, DEMO.owner.email, DEMO.owner.password);
+  ({ browser, page } = await launchSignedIn(DEMO.owner, { width: 1500, height: 1900, pageErrors }));
 });
 
-afterAll(async () => {
-  await browser?.close();
-  expect(pageErrors).toEqual([]);
-});
+afterAll(() => closeBrowser(browser, pageErrors));
 
 type PhotoItem = { id: string; state: string; widthPx: number | null; heightPx: number | null; reference: { kind: string; points: [number, number][]; widthMm?: number; heightMm?: number } | null };
 
@@ -51,27 +45,10 @@ async function photosOf(caseId: string): Promise<PhotoItem[]> {
 
 /** A new case profile's form in mm with every field a case needs filled in. */
 async function newCaseForm(name: string) {
-  await page.goto("/library/cases/new");
-  await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+  await openNewForm(page, "cases");
   await page.locator("#f-name").fill(name);
-  await page.locator("#f-mouthReadingsMm-0").fill("46");
-  await page.locator("#f-mouth-depthMm").fill("26");
-  await page.getByLabel("Square pattern side (mm)").fill("56");
-  await page.getByRole("button", { name: "Fill four studs" }).click();
-  await page.locator("#f-studHoleDiameterMm").fill("7.5");
-  await page.locator("#f-deck-diameterMm").fill("110");
-  await page.locator("#f-stockBoreMm").fill("40");
-  await page.locator("#f-strokeMm").fill("39.2");
-}
-
-/** The photo panel of the form on show, opened. */
-async function photoPanel(): Promise<Locator> {
-  const opener = page.locator("summary", { hasText: "Trace over a photo" });
-  await opener.or(page.getByRole("region", { name: "Trace from a photo" })).first().waitFor();
-  if (await opener.count()) await opener.click();
-  const panel = page.getByRole("region", { name: "Trace from a photo" });
-  await panel.waitFor();
-  return panel;
+  await typeReadings(page, "mouthReadingsMm", ["46"]);
+  await typeSquareStudCase(page);
 }
 
 /** Chooses the photo and clicks the four studs as the reference with their measured spacing. */
@@ -81,14 +58,7 @@ async function chooseAndRefer(panel: Locator) {
   await panel.getByLabel(/Stud spacing across/).fill("56");
   await panel.getByLabel(/Stud spacing along/).fill("56");
   const surface = panel.getByTestId("trace-surface");
-  for (const [x, y] of STUDS) {
-    await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
-    const before = Number(await surface.getAttribute("data-points"));
-    const box = await surface.boundingBox();
-    if (!box) throw new Error("the photo is not shown");
-    await surface.click({ position: { x: (x / W) * box.width, y: (y / H) * box.height } });
-    await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
-  }
+  for (const stud of STUDS) await clickPhotoPixel(surface, stud, PHOTO_SIZE);
   await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle/);
 }
 
@@ -96,7 +66,7 @@ describe("a photo chosen for a new case profile", () => {
   it("is kept with it at the first save, with its reference points, which come back when the case is opened", async () => {
     const name = `Photo case ${uid}`;
     await newCaseForm(name);
-    await chooseAndRefer(await photoPanel());
+    await chooseAndRefer(await openPhotoPanel(page));
     await page.getByRole("button", { name: "Create" }).click();
     await page.waitForURL(/\/library\?kind=cases/);
 
@@ -111,7 +81,7 @@ describe("a photo chosen for a new case profile", () => {
     for (const s of STUDS) expect(Math.min(...kept.map((p) => Math.hypot(p[0] - s[0], p[1] - s[1])))).toBeLessThan(3);
 
     await page.goto(`/library/cases/${saved!.id}`);
-    const panel = await photoPanel();
+    const panel = await openPhotoPanel(page);
     const surface = panel.getByTestId("trace-surface");
     await expect.poll(() => surface.getAttribute("data-photo-width")).toBe(String(W));
     await expect.poll(() => panel.getByLabel(/Stud spacing across/).inputValue()).toMatch(/^56(\.0+)?$|^2\.205$/);
@@ -121,13 +91,7 @@ describe("a photo chosen for a new case profile", () => {
     // A new reference, two points and their distance, is kept with the photo when the case is saved.
     await panel.getByRole("radio", { name: /Two points and their distance/ }).check();
     await panel.getByLabel(/Measured distance between the two points/).fill("79.2");
-    for (const [x, y] of [STUDS[0], STUDS[2]]) {
-      const before = Number(await surface.getAttribute("data-points"));
-      const box = await surface.boundingBox();
-      if (!box) throw new Error("the photo is not shown");
-      await surface.click({ position: { x: (x / W) * box.width, y: (y / H) * box.height } });
-      await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
-    }
+    for (const stud of [STUDS[0], STUDS[2]]) await clickPhotoPixel(surface, stud, PHOTO_SIZE);
     await expect.poll(() => textOf(page.getByText(/^(Unsaved changes|No unsaved changes)$/))).toBe("Unsaved changes");
     await page.getByRole("button", { name: "Save changes" }).click();
     await expect.poll(() => textOf(page.getByRole("status").filter({ hasText: /^Saved “/ }))).toBe(`Saved “${name}”.`);
@@ -139,7 +103,7 @@ describe("a photo chosen for a new case profile", () => {
   it("that cannot be uploaded leaves the case saved, and its form says the photo was not kept and why", async () => {
     const name = `Photo case unkept ${uid}`;
     await newCaseForm(name);
-    await chooseAndRefer(await photoPanel());
+    await chooseAndRefer(await openPhotoPanel(page));
     // The object store is out of reach for this page: the upload's PUT never gets through.
     await page.route(/\/borewright-photos\//, (route) => (route.request().method() === "PUT" ? route.abort("connectionrefused") : route.fallback()));
     await page.getByRole("button", { name: "Create" }).click();

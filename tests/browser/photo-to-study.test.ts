@@ -3,14 +3,15 @@
 // known shapes DEMO_CASE seen by DEMO_CAMERA) without typing a coordinate, and a study of it with one demo kit
 // gives the same least cut, thinnest wall and smallest sealing land as the same case typed in, within 0.2 mm.
 import { readFileSync } from "node:fs";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { arcSlot, circle, type Mm } from "../../scripts/deck-photo";
 import { DEMO_CAMERA, DEMO_CASE } from "../../scripts/render-demo-case-photo";
 import { DEMO_KITS } from "../../db/seed-library";
-import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
+import { closeBrowser, launchSignedIn } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
-import { clickOnPhoto, textOf } from "../support/photo-surface";
+import { openNewForm } from "../support/library-forms";
+import { clickOnPhoto, openPhotoPanel, textOf } from "../support/photo-surface";
 import { ok } from "../integration/library-fixtures";
 
 const PHOTO = readFileSync("public/demo/eight-sided-case-deck.jpg");
@@ -22,27 +23,19 @@ const PASSAGES: Mm[][] = [arcSlot(31, 38, 0, 44, 6), arcSlot(31, 38, 180, 44, 6)
 // The demo library's 57 mm kit (the test database holds the demo shop without its library, so the test writes
 // it): its Ø 63.2 mm skirt is larger than the Ø 62 mm mouth, so a cut is needed.
 const KIT = DEMO_KITS.find((k) => k.id === "demo-kit-57")!;
-const uid = Date.now().toString(36);
 
 let browser: Browser;
-let context: BrowserContext;
 let page: Page;
 let api: Http;
+const uid = Date.now().toString(36);
 const pageErrors: string[] = [];
 
 beforeAll(async () => {
   api = await signIn(DEMO.owner.email, DEMO.owner.password);
-  browser = await launchBrowser();
-  context = await newPerson(browser, { width: 1500, height: 1900 });
-  page = await context.newPage();
-  page.on("pageerror", (e) => pageErrors.push(e.message));
-  await signInThroughForm(page, DEMO.owner.email, DEMO.owner.password);
+  ({ browser, page } = await launchSignedIn(DEMO.owner, { width: 1500, height: 1900, pageErrors }));
 });
 
-afterAll(async () => {
-  await browser?.close();
-  expect(pageErrors).toEqual([]);
-});
+afterAll(() => closeBrowser(browser, pageErrors));
 
 type Wall = { kind: string; label: string; minWallMm: number; reached: boolean };
 type KitResult = { leastCut: { diameterMm: number; depthMm: number } | null; thinnestWall: Wall | null; walls: Wall[] };
@@ -60,13 +53,9 @@ async function studyFigures(caseId: string, name: string) {
 describe("the demo case traced from its photo", () => {
   it("makes a case profile whose study agrees with the typed-in profile within 0.2 mm", async () => {
     const name = `Traced eight-sided case ${uid}`;
-    await page.goto("/library/cases/new");
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await openNewForm(page, "cases");
 
-    const opener = page.locator("summary", { hasText: "Trace over a photo" });
-    await opener.or(page.getByRole("region", { name: "Trace from a photo" })).first().waitFor();
-    if (await opener.count()) await opener.click();
-    const panel = page.getByRole("region", { name: "Trace from a photo" });
+    const panel = await openPhotoPanel(page);
     await panel.getByLabel(/Photo of the deck/).setInputFiles({ name: "eight-sided-case-deck.jpg", mimeType: "image/jpeg", buffer: PHOTO });
     await expect.poll(() => textOf(panel.getByRole("status"))).toMatch(/kept with the case profile/);
 
