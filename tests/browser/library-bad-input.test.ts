@@ -1,13 +1,11 @@
 // Bad input in the library forms, in Chromium: a negative diameter, a comma for a decimal point and a
 // 500 mm skirt each get a message next to the field, and a refused save loses nothing that was typed.
-import { mkdirSync } from "node:fs";
-import { chromium, type Browser, type Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { FIT, printed } from "@/model/palette";
-import { DEMO, freshAddress } from "../support/http";
-
-const SHOTS = "test-results/screenshots";
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"];
+import { closeBrowser, launchSignedIn, screenshot } from "../support/browser";
+import { DEMO } from "../support/http";
+import { inMillimetres, openNewForm } from "../support/library-forms";
 
 let browser: Browser;
 let page: Page;
@@ -20,25 +18,15 @@ async function messageNear(p: Page, inputId: string): Promise<string> {
 }
 
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
-  browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ARGS });
-  const context = await browser.newContext({ viewport: { width: 1024, height: 1300 }, extraHTTPHeaders: { "x-forwarded-for": freshAddress() } });
-  page = await context.newPage();
-  await page.goto(`${inject("baseURL")}/sign-in`);
-  await page.getByLabel("E-mail").fill(DEMO.builder.email);
-  await page.getByLabel("Password").fill(DEMO.builder.password);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  ({ browser, page } = await launchSignedIn(DEMO.builder, { width: 1024, height: 1300 }));
   await page.waitForURL(/\/home/);
 });
 
-afterAll(async () => {
-  await browser?.close();
-});
+afterAll(() => closeBrowser(browser));
 
 describe("bad input in the kit form", () => {
   it("names what is wrong next to each field and keeps every character typed", async () => {
-    await page.goto(`${inject("baseURL")}/library/kits/new`);
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await openNewForm(page, "kits");
     await page.locator("#f-name").fill("Bad input kit");
 
     await page.locator("#f-boreMm").fill("-47");
@@ -58,7 +46,7 @@ describe("bad input in the kit form", () => {
     expect(await page.locator("#f-boreMm").inputValue()).toBe("-47");
     expect(await page.locator("#f-skirtDiameterReadingsMm-0").inputValue()).toBe("54,5");
     expect(await page.locator("#f-skirtDiameterReadingsMm-1").inputValue()).toBe("500");
-    await page.screenshot({ path: `${SHOTS}/library-bad-input.png`, fullPage: true });
+    await screenshot(page, "library-bad-input");
 
     // Switching to inches converts what can be read and leaves the rest exactly as typed.
     await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "in" }).click();
@@ -67,7 +55,7 @@ describe("bad input in the kit form", () => {
     await expect.poll(() => messageNear(page, "f-skirtDiameterReadingsMm-1")).toMatch(/at most 7\.874 in/);
 
     // Fixing the values clears the messages.
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await inMillimetres(page);
     await page.locator("#f-boreMm").fill("47");
     await page.locator("#f-skirtDiameterReadingsMm-0").fill("54.5");
     await page.locator("#f-skirtDiameterReadingsMm-1").fill("54.55");
@@ -79,8 +67,7 @@ describe("bad input in the kit form", () => {
 
 describe("bad input in the case form", () => {
   it("shows a deck whose edges cross in the warning colour, says which edges, and refuses to save it", async () => {
-    await page.goto(`${inject("baseURL")}/library/cases/new`);
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await openNewForm(page, "cases");
     await page.locator("#f-name").fill("Crossed deck case");
     await page.getByRole("radiogroup", { name: "Deck shape" }).getByLabel("Polygon (corners)").check();
     // A bow tie: (−50, −50) → (50, 50) → (50, −50) → (−50, 50) crosses itself between edges 1 and 3.

@@ -5,9 +5,9 @@ import { createRequire } from "node:module";
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { chamferedDeck, circle, project, renderDeckPhoto, type Camera, type DeckScene, type Mm } from "../../scripts/deck-photo";
-import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { closeBrowser, collectPageErrors, launchSignedIn, screenshot } from "../support/browser";
 import { DEMO, signIn, type Http } from "../support/http";
-import { clickOnPhoto, textOf } from "../support/photo-surface";
+import { clickOnPhoto, openPhotoPanel, openRegion, textOf } from "../support/photo-surface";
 import { newCase, ok } from "../integration/library-fixtures";
 import { demoCaseDxf } from "../../scripts/render-demo-case-photo";
 
@@ -27,31 +27,40 @@ const pageErrors: string[] = [];
 beforeAll(async () => {
   api = await signIn(DEMO.owner.email, DEMO.owner.password);
   caseId = (await newCase(api)).id;
-  browser = await launchBrowser();
-  context = await newPerson(browser, { width: 1500, height: 1900 });
-  page = await context.newPage();
-  page.on("pageerror", (e) => pageErrors.push(e.message));
-  await signInThroughForm(page, DEMO.owner.email, DEMO.owner.password);
+  ({ browser, context, page } = await launchSignedIn(DEMO.owner, { width: 1500, height: 1900, pageErrors }));
 });
 
-afterAll(async () => {
-  await browser?.close();
-  expect(pageErrors).toEqual([]);
-});
+afterAll(() => closeBrowser(browser, pageErrors));
 
 async function photos(): Promise<{ id: string; state: string; widthPx: number | null; heightPx: number | null }[]> {
   return ok<{ items: { id: string; state: string; widthPx: number | null; heightPx: number | null }[] }>(await api.get(`/api/v1/cases/${caseId}/photos`)).items;
 }
 
-/** The case profile's form with its photo panel open (the panel may sit in a section that opens on request). */
+/** The case profile's form with its photo panel open. */
 async function openPanel(): Promise<Locator> {
   await page.goto(`/library/cases/${caseId}`);
-  const opener = page.locator("summary", { hasText: "Trace over a photo" });
-  await opener.or(page.getByRole("region", { name: "Trace from a photo" })).first().waitFor();
-  if (await opener.count()) await opener.click();
-  const panel = page.getByRole("region", { name: "Trace from a photo" });
-  await panel.waitFor();
-  return panel;
+  return openPhotoPanel(page);
+}
+
+/**
+ * The case profile's photo panel in a tab of its own, with the reference set to four studs 56 mm apart each way
+ * and the kept photo on show. A new tab: the last one holds unsaved changes, which the form guards when leaving.
+ */
+async function panelInNewTab(): Promise<{ panel: Locator; surface: Locator }> {
+  await page.close();
+  page = await context.newPage();
+  collectPageErrors(page, pageErrors);
+  const panel = await openPanel();
+  // The kept photo comes back with the case profile.
+  const surface = panel.getByTestId("trace-surface");
+  await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
+  return { panel, surface };
+}
+
+/** Types the measured stud spacing, 56 mm each way, in the units the panel's fields are in. */
+async function typeStudSpacing(panel: Locator) {
+  await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
+  await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
 }
 
 /** Serious or critical accessibility violations inside one region, by axe-core's rules. */
@@ -100,8 +109,7 @@ describe("trace a deck from a photo", () => {
     expect(inMouth).toBeLessThan(60);
     expect(onFace).toBeGreaterThan(140);
 
-    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
-    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    await typeStudSpacing(panel);
     // The studs in an order of their own: the panel sorts them into the rectangle's corners.
     for (const s of [STUDS[2], STUDS[0], STUDS[1], STUDS[3]]) await clickOnPhoto(surface, CAMERA, s);
     await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a 56(\.0+)? mm × 56(\.0+)? mm rectangle within 0\.\d+ mm\.$|^The four points fit a 2\.205 in × 2\.205 in rectangle within/);
@@ -128,48 +136,25 @@ describe("trace a deck from a photo", () => {
   });
 
   it("refuses reference points that coincide, saying so next to the fields", async () => {
-    // A page of its own: the first one holds unsaved changes, which the form guards when leaving.
-    await page.close();
-    page = await context.newPage();
-    page.on("pageerror", (e) => pageErrors.push(e.message));
-    const panel = await openPanel();
-    // The kept photo comes back with the case profile.
-    const surface = panel.getByTestId("trace-surface");
-    await surface.waitFor();
-    await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
-    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
-    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    const { panel, surface } = await panelInNewTab();
+    await typeStudSpacing(panel);
     for (const s of [STUDS[0], STUDS[1], STUDS[1], STUDS[2]]) await clickOnPhoto(surface, CAMERA, s);
     await expect.poll(() => textOf(panel.getByRole("alert"))).toMatch(/are on the same spot/);
     await expect.poll(() => panel.getByRole("button", { name: "Put the traced shapes into the form" }).isDisabled()).toBe(true);
   });
 
   it("places each point on the photo's pixel under the pointer when the photo is zoomed in", async () => {
-    await page.close();
-    page = await context.newPage();
-    page.on("pageerror", (e) => pageErrors.push(e.message));
-    const panel = await openPanel();
-    const surface = panel.getByTestId("trace-surface");
-    await expect.poll(() => surface.locator("canvas").evaluate((c: HTMLCanvasElement) => c.width)).toBe(1200);
+    const { panel, surface } = await panelInNewTab();
     await panel.getByRole("button", { name: "Start over" }).click();
     await panel.getByLabel(/Four studs of a measured pattern/).check();
-    await panel.getByLabel(/Stud spacing across/).fill(await lengthFor(panel, /Stud spacing across/, 56));
-    await panel.getByLabel(/Stud spacing along/).fill(await lengthFor(panel, /Stud spacing along/, 56));
+    await typeStudSpacing(panel);
     // + zooms in one step of 1.5 about the middle: the window shown starts at 0.5 − 0.5 / 1.5 of the photo
     // across and down, and is 1 / 1.5 of it wide and tall.
     await surface.focus();
     await page.keyboard.press("+");
     await expect.poll(() => surface.getAttribute("data-zoom")).toBe("1.5");
     const zoom = 1.5, left = 0.5 - 0.5 / zoom;
-    for (const p of STUDS) {
-      await expect.poll(() => surface.getAttribute("data-ready")).toBe("true");
-      const before = Number(await surface.getAttribute("data-points"));
-      const box = await surface.boundingBox();
-      if (!box) throw new Error("the photo is not shown");
-      const [x, y] = project(CAMERA, p);
-      await surface.click({ position: { x: (x / CAMERA.widthPx - left) * zoom * box.width, y: (y / CAMERA.heightPx - left) * zoom * box.height } });
-      await expect.poll(async () => Number(await surface.getAttribute("data-points"))).toBe(before + 1);
-    }
+    for (const p of STUDS) await clickOnPhoto(surface, CAMERA, p, { zoom, left, top: left });
     await expect.poll(() => textOf(panel.getByTestId("trace-fit"))).toMatch(/^The four points fit a (56(\.0+)? mm × 56(\.0+)? mm|2\.205 in × 2\.205 in) rectangle within/);
     const readout = panel.getByTestId("trace-readout");
     await expect.poll(async () => JSON.parse((await readout.getAttribute("data-shapes")) ?? "{}").studs?.length ?? 0).toBe(4);
@@ -184,11 +169,7 @@ describe("trace a deck from a photo", () => {
 
   it("imports the same deck from a DXF drawing, each shape picked by its layer", async () => {
     await page.goto(`/library/cases/${caseId}`);
-    const opener = page.locator("summary", { hasText: "Import a drawing" });
-    await opener.or(page.getByRole("region", { name: "Import a drawing" })).first().waitFor();
-    if (await opener.count()) await opener.click();
-    const panel = page.getByRole("region", { name: "Import a drawing" });
-    await panel.waitFor();
+    const panel = await openRegion(page, "Import a drawing", "Import a drawing");
 
     await panel.getByLabel(/^Drawing \(DXF or SVG/).setInputFiles({ name: "empty.dxf", mimeType: "application/dxf", buffer: Buffer.from("") });
     await expect.poll(() => textOf(panel.getByRole("alert"))).toBe("The file is empty. Nothing was put into the form.");
