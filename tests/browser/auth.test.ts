@@ -1,6 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { confirmAndAcceptInvitation, launchBrowser, newPerson, screenshot, signedInTab, signInThroughForm, signUpThroughForm } from "../support/browser";
 import { DEMO, uniqueEmail, waitForMail } from "../support/http";
 
 let browser: Browser;
@@ -14,17 +14,20 @@ afterAll(async () => {
 const navOf = async (page: import("playwright-core").Page) =>
   (await page.getByRole("navigation", { name: "Main" }).getByRole("link").allTextContents()).map((t) => t.trim());
 
+/** A new person in a context of their own, signed up through the form and landed on their home page. */
+async function signedUpPerson(tag: string, name: string, password: string) {
+  const context = await newPerson(browser);
+  const page = await context.newPage();
+  const email = uniqueEmail(tag);
+  await page.goto("/sign-up");
+  await signUpThroughForm(page, { name, email, password });
+  await page.waitForURL("**/home");
+  return { context, page, email };
+}
+
 describe("in the browser", () => {
   it("a new person signs up, lands in a shop of their own and confirms the e-mail from the mail in the sink", async () => {
-    const context = await newPerson(browser);
-    const page = await context.newPage();
-    const email = uniqueEmail("browser-signup");
-    await page.goto("/sign-up");
-    await page.getByLabel("Your name").fill("Rowan Test");
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill("a-long-browser-password");
-    await page.getByRole("button", { name: "Create account" }).click();
-    await page.waitForURL("**/home");
+    const { context, page, email } = await signedUpPerson("browser-signup", "Rowan Test", "a-long-browser-password");
     expect(await page.getByTestId("who").textContent()).toContain("Rowan Test's shop");
     expect(await page.getByText("Confirm your e-mail address: the link").isVisible()).toBe(true);
     expect(await navOf(page)).toEqual(["Studies", "Library", "Jobs", "Shop settings", "Outbox"]);
@@ -43,10 +46,7 @@ describe("in the browser", () => {
     const context = await newPerson(browser);
     const page = await context.newPage();
     await page.goto("/sign-up");
-    await page.getByLabel("Your name").fill("Kept Name");
-    await page.getByLabel("E-mail").fill("not-an-address");
-    await page.getByLabel("Password").fill("short");
-    await page.getByRole("button", { name: "Create account" }).click();
+    await signUpThroughForm(page, { name: "Kept Name", email: "not-an-address", password: "short" });
     await expect.poll(() => page.getByText("That does not look like an e-mail address").count()).toBe(1);
     expect(await page.getByText("Use at least 10 characters.").count()).toBe(1);
     expect(await page.getByLabel("Your name").inputValue()).toBe("Kept Name");
@@ -67,9 +67,7 @@ describe("in the browser", () => {
     ["builder", ["Studies", "Library", "Jobs"]],
     ["customer", ["Consult"]],
   ] as const)("signs in as the demo %s and sees that role's navigation", async (role, nav) => {
-    const context = await newPerson(browser);
-    const page = await context.newPage();
-    await signInThroughForm(page, DEMO[role].email, DEMO[role].password);
+    const { context, page } = await signedInTab(browser, DEMO[role]);
     expect(await navOf(page)).toEqual(nav);
     expect(await page.getByTestId("who").textContent()).toContain(role);
     await screenshot(page, `auth-04-${role}-navigation`);
@@ -77,9 +75,7 @@ describe("in the browser", () => {
   });
 
   it("an owner invites a builder; the builder accepts from the mailed link and works in the shop", async () => {
-    const ownerContext = await newPerson(browser);
-    const owner = await ownerContext.newPage();
-    await signInThroughForm(owner, DEMO.owner.email, DEMO.owner.password);
+    const { context: ownerContext, page: owner } = await signedInTab(browser, DEMO.owner);
     await owner.goto("/settings");
     const builderEmail = uniqueEmail("browser-builder");
     await owner.getByLabel("E-mail").fill(builderEmail);
@@ -97,16 +93,11 @@ describe("in the browser", () => {
     await builder.goto(link);
     await builder.getByRole("link", { name: "Create an account" }).click();
     expect(await builder.getByLabel("E-mail").inputValue()).toBe(builderEmail);
-    await builder.getByLabel("Your name").fill("Invited Machinist");
-    await builder.getByLabel("Password").fill("a-long-builder-password");
-    await builder.getByRole("button", { name: "Create account" }).click();
+    await signUpThroughForm(builder, { name: "Invited Machinist", password: "a-long-builder-password" });
     await builder.waitForURL("**/invite/**");
     // Only a confirmed address may accept: the page asks for the link mailed at sign-up, which leads back.
     await expect.poll(() => builder.getByRole("heading", { name: /Confirm your e-mail/ }).count()).toBe(1);
-    const confirmation = new URL((await waitForMail(builderEmail, /confirm/i)).links.find((l) => l.includes("/verify-email"))!);
-    await builder.goto(confirmation.pathname + confirmation.search);
-    await builder.waitForURL("**/invite/**");
-    await builder.getByRole("button", { name: "Accept the invitation" }).click();
+    await confirmAndAcceptInvitation(builder, builderEmail);
     await builder.waitForURL("**/home");
     expect(await builder.getByTestId("who").textContent()).toContain("Quillfern Engine Works");
     expect(await navOf(builder)).toEqual(["Studies", "Library", "Jobs"]);
@@ -116,15 +107,7 @@ describe("in the browser", () => {
   });
 
   it("resets a forgotten password from the mailed link, then signs in with the new one and out again", async () => {
-    const context = await newPerson(browser);
-    const page = await context.newPage();
-    const email = uniqueEmail("browser-reset");
-    await page.goto("/sign-up");
-    await page.getByLabel("Your name").fill("Forgetful Person");
-    await page.getByLabel("E-mail").fill(email);
-    await page.getByLabel("Password").fill("the-old-password-1");
-    await page.getByRole("button", { name: "Create account" }).click();
-    await page.waitForURL("**/home");
+    const { context, page, email } = await signedUpPerson("browser-reset", "Forgetful Person", "the-old-password-1");
     await page.getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL("**/sign-in");
 
