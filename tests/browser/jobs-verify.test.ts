@@ -1,6 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { launchBrowser, screenshot, signedInTab } from "../support/browser";
 import { DEMO, signIn, uniqueEmail, type Http } from "../support/http";
 import { FAILING_READINGS, insertExampleStudy, jobBody, me } from "../integration/jobs-support";
 
@@ -28,9 +28,7 @@ afterAll(async () => {
 
 describe("verifying readings outside the plan", () => {
   it("the owner is offered a reason field under the readings, not a plain 'Mark verified'; an empty reason is refused at the field", async () => {
-    const person = await newPerson(browser, { width: 1280, height: 900 });
-    const page = await person.newPage();
-    await signInThroughForm(page, DEMO.owner.email, DEMO.owner.password);
+    const { context: person, page } = await signedInTab(browser, DEMO.owner, { width: 1280, height: 900 });
     await page.goto(`/jobs/${jobId}`);
     await expect.poll(() => page.getByTestId("verdict").textContent(), { timeout: 10_000 }).toMatch(/^Outside the plan/);
     expect(await page.getByRole("button", { name: "Mark verified" }).count()).toBe(0);

@@ -1,6 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, screenshot, signInThroughForm } from "../support/browser";
+import { confirmAndAcceptInvitation, launchBrowser, newPerson, screenshot, signedInTab, signUpThroughForm, waitUntilDrawn } from "../support/browser";
 import { TERM } from "@/model/glossary";
 import { QUOTE_CHANGED } from "@/model/quote";
 import { DEMO, signIn, uniqueEmail, waitForMail } from "../support/http";
@@ -23,9 +23,7 @@ describe("a job in the browser, from the study to verified", () => {
   it("a builder opens a job from a study and shares it; the new customer joins from the mail, sees the fit, approves and pays; the builder records readings and verifies; the setup card prints on one page", async () => {
     const customerEmail = uniqueEmail("browser-customer");
     // ── The builder opens the job from the study and shares it.
-    const shop = await newPerson(browser, { width: 1280, height: 900 });
-    const bench = await shop.newPage();
-    await signInThroughForm(bench, DEMO.builder.email, DEMO.builder.password);
+    const { context: shop, page: bench } = await signedInTab(browser, DEMO.builder, { width: 1280, height: 900 });
     // The study page shows the library's kit prices as money with their currency (289 and 349 EUR in the example), in the studio's kit switcher and the lineup.
     await bench.goto(`/studies/${studyId}`);
     const kitOnShow = bench.getByRole("group", { name: "Kit on show" });
@@ -93,16 +91,11 @@ describe("a job in the browser, from the study to verified", () => {
     const sofa = await home.newPage();
     await sofa.goto(new URL(inviteLink).pathname);
     await sofa.getByRole("link", { name: "Create an account" }).click();
-    await sofa.getByLabel("Your name").fill("Wren Calloway");
     expect(await sofa.getByLabel("E-mail").inputValue()).toBe(customerEmail);
-    await sofa.getByLabel("Password").fill("a-long-customer-password");
-    await sofa.getByRole("button", { name: "Create account" }).click();
+    await signUpThroughForm(sofa, { name: "Wren Calloway", password: "a-long-customer-password" });
     await sofa.waitForURL(/\/invite\//);
     // Only a confirmed address may accept: the link mailed at sign-up leads back to the invitation.
-    const confirmation = new URL((await waitForMail(customerEmail, /confirm/i)).links.find((l) => l.includes("/verify-email"))!);
-    await sofa.goto(confirmation.pathname + confirmation.search);
-    await sofa.waitForURL(/\/invite\//);
-    await sofa.getByRole("button", { name: "Accept the invitation" }).click();
+    await confirmAndAcceptInvitation(sofa, customerEmail);
     await sofa.waitForURL(/\/consult$/);
     await sofa.getByRole("link", { name: "Harrow's 50 cc scooter, big bore" }).click();
     await sofa.waitForURL(`**/consult/${jobId}`);
@@ -111,16 +104,8 @@ describe("a job in the browser, from the study to verified", () => {
     expect(cautions).toMatch(/legal class/);
     expect(cautions).toMatch(/local rules decide/);
     expect(await sofa.getByText("Fits after the cut — once the case mouth is cut to size.").count()).toBeGreaterThan(0);
-    // The 3D view has drawn what the studio asks for (the canvas's last frame key matches the view's).
-    await sofa.waitForFunction(
-      () => {
-        const view = document.querySelector<HTMLElement>("[data-testid=view]");
-        const canvas = view?.querySelector("canvas");
-        return Boolean(view && canvas && canvas.dataset.drawn === view.dataset.wanted);
-      },
-      undefined,
-      { timeout: 30_000 },
-    );
+    // The 3D view has drawn what the studio asks for.
+    await waitUntilDrawn(sofa, 30_000);
     await screenshot(sofa, "jobs-02-consult-fit");
     // The customer's studio is locked in customer mode: no way to the bench view and its cut controls.
     expect(await sofa.getByTestId("studio").getAttribute("data-customer")).toBe("true");

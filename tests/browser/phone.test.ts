@@ -2,7 +2,7 @@
 // scrolls sideways (document.scrollingElement.scrollWidth ≤ innerWidth).
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
+import { launchBrowser, newPerson, signedInTab } from "../support/browser";
 import { DEMO, signIn } from "../support/http";
 import { insertExampleStudy, jobBody, me } from "../integration/jobs-support";
 
@@ -93,18 +93,14 @@ describe("every page at 390 px, by role", () => {
 
   for (const role of ["owner", "builder"] as const) {
     it(`the ${role}'s pages`, async () => {
-      const person = await newPerson(browser, PHONE);
-      const page = await person.newPage();
-      await signInThroughForm(page, DEMO[role].email, DEMO[role].password);
+      const { context: person, page } = await signedInTab(browser, DEMO[role], PHONE);
       await checkPages(page, await staffPages(page, role));
       await person.close();
     });
   }
 
   it("the customer's pages", async () => {
-    const person = await newPerson(browser, PHONE);
-    const page = await person.newPage();
-    await signInThroughForm(page, DEMO.customer.email, DEMO.customer.password);
+    const { context: person, page } = await signedInTab(browser, DEMO.customer, PHONE);
     await page.goto("/consult");
     const consult = await firstHref(page, 'main a[href^="/consult/"]');
     expect(consult, "the customer has a shared job").toBeTruthy();
