@@ -20,15 +20,15 @@ export type OutsideValues<FV> = { merge: (values: FV) => FV; switchUnits: (to: L
 /** What a library form is: its row, its schema, its first texts and how they become the core's input and the request. */
 export type LibraryFormOptions<FV extends FieldValues, S extends z.ZodType> = {
   kind: LibraryKind;
-  id: string | null;
-  version: number | null;
+  /** The row being edited (its id and the version it was read at), or null for a new one. */
+  row: { id: string; version: number } | null;
   schema: S;
   initialUnits: LengthUnits;
   /** The form's first texts, lengths in mm (shown in the initial units). */
   defaults: DefaultValues<FV>;
   toCore: (values: FV, read: FormReader) => unknown;
   toBody: (core: z.output<S>, values: FV, units: LengthUnits) => Record<string, unknown>;
-  /** Server field paths (e.g. "data.boreMm") to form paths. */
+  /** Server field paths to form paths; by default "data.boreMm" is the form's "boreMm". */
   fieldPath?: (serverPath: string) => string;
   /** Fields kept outside react-hook-form (the shapes in their own store): merged into the values that are validated and saved. */
   outside?: OutsideValues<FV>;
@@ -47,9 +47,10 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
   const router = useRouter();
   const [units, setUnitsState] = useState<LengthUnits>(opts.initialUnits);
   const [notice, setNotice] = useState<Notice>(null);
-  const [version, setVersion] = useState(opts.version);
+  const id = opts.row?.id ?? null;
+  const [version, setVersion] = useState(opts.row?.version ?? null);
   const [finishing, setFinishing] = useState(false);
-  const save = useSaveLibraryRow(opts.kind, opts.id);
+  const save = useSaveLibraryRow(opts.kind, id);
   const [resolver] = useState(() => coreResolver<FV, S>(opts.schema, (v, read) => opts.toCore(opts.outside ? opts.outside.merge(v) : v, read)));
   const all = () => (opts.outside ? opts.outside.merge(form.getValues()) : form.getValues());
   // Remembers the texts each unit switch replaced, so that switching back restores them as typed.
@@ -85,13 +86,13 @@ export function useLibraryForm<FV extends FieldValues, S extends z.ZodType>(opts
       const mm = inMm(core);
       const body = opts.toBody(mm.core, mm.values, mm.units);
       try {
-        const row = await save.mutateAsync(opts.id ? { ...body, version } : body);
+        const row = await save.mutateAsync(id ? { ...body, version } : body);
         setVersion(row.version);
         form.reset(form.getValues());
         opts.outside?.saved();
         setFinishing(Boolean(opts.afterSave));
-        const after = opts.afterSave ? await opts.afterSave(row, !opts.id).finally(() => setFinishing(false)) : undefined;
-        if (!opts.id) router.push(after?.goTo ?? `/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
+        const after = opts.afterSave ? await opts.afterSave(row, !id).finally(() => setFinishing(false)) : undefined;
+        if (!id) router.push(after?.goTo ?? `/library?kind=${opts.kind}&saved=${encodeURIComponent(row.name)}`);
         else setNotice(after?.notice ?? { tone: "ok", text: `Saved “${row.name}”.` });
       } catch (error) {
         if (error instanceof ApiFailure) {

@@ -36,8 +36,7 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
   const photo = useCasePhoto(row);
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "cases",
-    id: row?.id ?? null,
-    version: row?.version ?? null,
+    row,
     schema: CaseProfileSchema,
     initialUnits,
     defaults: caseFieldDefaults(first) as CaseFormValues,
@@ -50,7 +49,6 @@ export function CaseForm({ row, units: initialUnits }: { row: CaseRow | null; un
         : [];
       return { name, notes: values.notes, data, ...(round ? { mouthReadingsMm: readings } : {}) };
     },
-    fieldPath: (p) => p.replace(/^data\./, ""),
     outside,
     afterSave: photo.afterSave,
   });

@@ -4,6 +4,7 @@ import type { LengthUnits } from "@/geometry";
 import { useFormContext } from "react-hook-form";
 import { useLibraryOptions } from "../../../_ui/query/library/use-library-list";
 import { studsText } from "@/app/_ui/form/read-shapes";
+import { RowOptions } from "@/app/_ui/form/row-options";
 
 /** Copies a case profile's studs into the kit, for a kit made for that stud pattern. */
 export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
@@ -26,12 +27,7 @@ export function CopyStudsFromCase({ units }: { units: LengthUnits }) {
           if (c.data.studThread && !String(getValues("studThread") ?? "").trim()) setValue("studThread", c.data.studThread, { shouldDirty: true, shouldValidate: true });
         }}
       >
-        <option value="">choose…</option>
-        {items.map((c) => (
-          <option key={c.id} value={c.id}>
-            {c.name}
-          </option>
-        ))}
+        <RowOptions rows={items} empty="choose…" />
       </select>
     </label>
   );

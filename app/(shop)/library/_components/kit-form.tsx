@@ -26,8 +26,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
   const { store, outside, shapesDirty } = useShapeForm<KitFormValues>(() => kitDoc(row), initialUnits, mergeKit);
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "kits",
-    id: row?.id ?? null,
-    version: row?.version ?? null,
+    row,
     schema: KitFormSchema,
     initialUnits,
     defaults: kitDefaults(row, "mm"),
@@ -37,7 +36,6 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
       void _id;
       return { name, notes: values.notes, data };
     },
-    fieldPath: (p) => p.replace(/^data\./, ""),
     outside,
   });
   const scope = useRef<HTMLFormElement>(null);

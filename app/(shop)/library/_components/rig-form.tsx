@@ -15,8 +15,7 @@ import { rigDefaults, rigToCore, type RigFormValues } from "./rig-values";
 export function RigForm({ row, units: initialUnits }: { row: RigRow | null; units: LengthUnits }) {
   const { form, units, setUnits, notice, onSubmit, busy } = useLibraryForm({
     kind: "rigs",
-    id: row?.id ?? null,
-    version: row?.version ?? null,
+    row,
     schema: BoringRigSchema,
     initialUnits,
     defaults: rigDefaults(row, "mm"),

@@ -12,6 +12,7 @@ import type { KitRow } from "@/app/_ui/query/types";
 import { VERDICT_TEXT } from "@/app/_ui/studio/words";
 import { caseToCore, mergeCase, type CaseFormValues } from "../case-values";
 import type { ShapeStore } from "./shape-store";
+import { RowOptions } from "@/app/_ui/form/row-options";
 
 type Trial = { name: string; text: string; wall: string | null; ok: boolean };
 
@@ -78,12 +79,7 @@ export function CaseTrial({ store }: { store: ShapeStore }) {
             value={ids[i] ?? ""}
             onChange={(e) => setIds((now) => Object.assign([...now], { [i]: e.target.value }).filter(Boolean))}
           >
-            <option value="">no kit</option>
-            {rows.map((r) => (
-              <option key={r.id} value={r.id}>
-                {r.name}
-              </option>
-            ))}
+            <RowOptions rows={rows} empty="no kit" />
           </select>
         ))}
       </div>

@@ -7,6 +7,12 @@ import type { ShapeStore } from "./shape-store";
 /** True for a key press that a text field undoes by itself. */
 const inText = (t: EventTarget | null) => t instanceof HTMLElement && (t.tagName === "INPUT" || t.tagName === "TEXTAREA" || t.isContentEditable);
 
+/** The two steps through the shapes' history, with their keys. */
+const STEPS = [
+  { label: "Undo", keys: "Control+Z", take: (store: ShapeStore) => store.temporal.getState().undo() },
+  { label: "Redo", keys: "Control+Shift+Z", take: (store: ShapeStore) => store.temporal.getState().redo() },
+] as const;
+
 /**
  * Undo and redo of the shapes, as buttons and as Ctrl+Z / Ctrl+Shift+Z (or Ctrl+Y) anywhere in the
  * form except inside a text field, which keeps its own undo of what is being typed.
@@ -32,30 +38,21 @@ export function HistoryBar({ store, scope, onChange }: { store: ShapeStore; scop
   }, [store, scope, onChange]);
   return (
     <div className="flex items-center gap-2" role="group" aria-label="Undo and redo of the shapes">
-      <button
-        type="button"
-        className="btn-quiet"
-        disabled={past === 0}
-        aria-keyshortcuts="Control+Z"
-        onClick={() => {
-          store.temporal.getState().undo();
-          onChange();
-        }}
-      >
-        Undo
-      </button>
-      <button
-        type="button"
-        className="btn-quiet"
-        disabled={future === 0}
-        aria-keyshortcuts="Control+Shift+Z"
-        onClick={() => {
-          store.temporal.getState().redo();
-          onChange();
-        }}
-      >
-        Redo
-      </button>
+      {STEPS.map((step) => (
+        <button
+          key={step.label}
+          type="button"
+          className="btn-quiet"
+          disabled={(step.label === "Undo" ? past : future) === 0}
+          aria-keyshortcuts={step.keys}
+          onClick={() => {
+            step.take(store);
+            onChange();
+          }}
+        >
+          {step.label}
+        </button>
+      ))}
       <span className="text-xs text-ink-3 num" aria-live="polite">
         {past ? `${past} change${past === 1 ? "" : "s"} to undo` : "nothing to undo"}
       </span>

@@ -4,6 +4,7 @@ import type { LengthUnits } from "@/geometry";
 import { ShapeParamsSchema, type ShapeParams } from "@/geometry/shapes";
 import { useState } from "react";
 import { lengthFieldText as lengthText, parseLengthText, parseNumberText } from "@/model/units";
+import { RowOptions } from "@/app/_ui/form/row-options";
 
 type Field = { name: string; label: string; length?: boolean };
 export type MeasureSpec = { kind: ShapeParams["kind"]; label: string; fields: Field[] };
@@ -69,11 +70,7 @@ export function MeasurePanel({ specs, params, units, what, onApply }: { specs: M
               setTexts(textsOf(next, params, units));
             }}
           >
-            {specs.map((s) => (
-              <option key={s.kind} value={s.kind}>
-                {s.label}
-              </option>
-            ))}
+            <RowOptions rows={specs.map((s) => ({ id: s.kind, name: s.label }))} />
           </select>
         </label>
         <div className="flex flex-wrap items-end gap-3">
