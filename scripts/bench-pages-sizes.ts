@@ -47,11 +47,16 @@ function routeEntryFiles(distDir: string, route: string): string[] | null {
   const file = join(distDir, "server", "app", route, "page_client-reference-manifest.js");
   if (!existsSync(file)) return null;
   const text = readFileSync(file, "utf8");
-  // The file is `globalThis.__RSC_MANIFEST["/route/page"] = {…};`: the JSON after the last assignment.
-  const start = text.indexOf("{", text.lastIndexOf("] = "));
+  // The file is `globalThis.__RSC_MANIFEST["/route/page"] = {…};` (Turbopack; webpack writes it without the
+  // spaces): the JSON after the assignment.
+  const assignment = /__RSC_MANIFEST\["[^"]*"\]\s*=\s*/.exec(text);
+  if (!assignment) throw new Error(`${file}: no client reference manifest in it`);
+  const start = assignment.index + assignment[0].length;
   const manifest = JSON.parse(text.slice(start, text.lastIndexOf("}") + 1)) as { entryJSFiles?: Record<string, string[]> };
+  // A webpack build (`next build --webpack`) names no entry files here: only its root scripts are measured.
+  if (!manifest.entryJSFiles) return null;
   const files = new Set<string>();
-  for (const list of Object.values(manifest.entryJSFiles ?? {})) for (const f of list) files.add(f);
+  for (const list of Object.values(manifest.entryJSFiles)) for (const f of list) files.add(f);
   return [...files];
 }
 
