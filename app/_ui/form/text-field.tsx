@@ -23,7 +23,9 @@ export function TextField<FV extends FieldValues>({
   placeholder?: string;
   className?: string;
 }) {
-  const { register, formState } = useFormContext<FV>();
+  const { register, formState, getValues } = useFormContext<FV>();
+  // The value as the form holds it, so the server's HTML shows it too (the form alone sets it only in the browser).
+  const initial: unknown = getValues(name);
   return (
     <div className={className}>
       <Field
@@ -36,6 +38,7 @@ export function TextField<FV extends FieldValues>({
         autoComplete="off"
         placeholder={placeholder}
         className={`field-input ${numeric ? "num" : ""}`}
+        defaultValue={typeof initial === "string" || typeof initial === "number" ? initial : undefined}
         {...register(name)}
       />
     </div>

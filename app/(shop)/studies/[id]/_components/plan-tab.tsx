@@ -51,7 +51,7 @@ export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLi
             <label htmlFor="study-notes" className="font-semibold">
               Notes
             </label>
-            <textarea id="study-notes" rows={3} className="field-input" {...form.register("notes")} />
+            <textarea id="study-notes" rows={3} className="field-input" defaultValue={form.getValues("notes")} {...form.register("notes")} />
           </section>
           <HistoryPanel id={studyId} />
         </div>

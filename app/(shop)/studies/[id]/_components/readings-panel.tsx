@@ -22,7 +22,7 @@ export function ReadingsPanel({ units, studs }: { units: LengthUnits; studs: str
           <div key={f.id} className="flex flex-wrap items-end gap-2 border-b border-rule pb-2 last:border-0">
             <label className="block">
               <span className="field-label">At stud</span>
-              <select className="field-input w-36" {...register(`readings.holderHeights.${i}.stud`)}>
+              <select className="field-input w-36" defaultValue={f.stud} {...register(`readings.holderHeights.${i}.stud`)}>
                 {[...new Set([f.stud, ...studs])].map((s) => (
                   <option key={s} value={s}>
                     {s}

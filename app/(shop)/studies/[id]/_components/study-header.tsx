@@ -22,7 +22,7 @@ export function StudyHeader({ studyId, caseName, archived, save }: { studyId: st
         <label htmlFor="study-name" className="sr-only">
           Study name
         </label>
-        <input id="study-name" className="w-full rounded-md border border-transparent bg-transparent px-1 text-2xl font-semibold hover:border-rule focus:border-accent" {...form.register("name")} />
+        <input id="study-name" className="w-full rounded-md border border-transparent bg-transparent px-1 text-2xl font-semibold hover:border-rule focus:border-accent" defaultValue={form.getValues("name")} {...form.register("name")} />
         {nameError ? <p className="field-error">{nameError}</p> : null}
         <p className="px-1 text-sm text-ink-2">
           {caseName ?? "…"} · {kits} kit{kits === 1 ? "" : "s"}
