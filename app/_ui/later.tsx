@@ -3,36 +3,24 @@
 import { type ComponentType, lazy } from "react";
 
 // A heavy interactive part of a page (an editor, the studio) is rendered on the server like the rest, so its
-// HTML paints with the first paint; in the browser its code loads, and its HTML comes alive, only once the page
-// has loaded and gone idle, or at the visitor's first touch, key or scroll, whichever comes first. Until then
-// React leaves the server's HTML in place (a Suspense boundary still waiting to hydrate), so nothing moves.
+// HTML paints with the first paint. Its code is a script of its own rather than part of the page's first
+// scripts: the browser fetches it alongside them, as soon as the page's own code runs, and runs it in a task
+// of its own, so no single task has to start the framework and the studio at once. The page comes alive once
+// that code is there (before the load event), on the server's elements: nothing is drawn twice and nothing
+// moves, and a click after the load event is never lost.
 
-/** The longest wait for an idle moment after the load event. */
-const IDLE_TIMEOUT_MS = 2000;
-const FIRST_INPUT = ["pointerdown", "keydown", "focusin", "wheel", "touchstart", "scroll"] as const;
-
-let ready: Promise<void> | null = null;
-
-/** Resolves once the page has loaded and the main thread is idle, or at the first input; at once on the server. */
-export function pageSettled(): Promise<void> {
-  if (typeof window === "undefined") return Promise.resolve();
-  ready ??= new Promise<void>((resolve) => {
-    const done = () => {
-      for (const type of FIRST_INPUT) window.removeEventListener(type, done, true);
-      resolve();
-    };
-    for (const type of FIRST_INPUT) window.addEventListener(type, done, { capture: true, passive: true });
-    const idle = () => (typeof window.requestIdleCallback === "function" ? window.requestIdleCallback(done, { timeout: IDLE_TIMEOUT_MS }) : window.setTimeout(done, 200));
-    if (document.readyState === "complete") idle();
-    else window.addEventListener("load", idle, { once: true });
-  });
-  return ready;
-}
+type Thenable<T> = { then(resolve: (value: T) => void, reject: (error: unknown) => void): void };
 
 /**
- * A component whose code is fetched once the page has settled (see pageSettled); render it inside a
- * Suspense boundary. On the server it renders at once, so its HTML is in the first answer.
+ * A component whose code loads as a script of its own, the fetch starting at once. Render it as it is (no
+ * Suspense boundary of its own, so the server sends its HTML in place rather than streaming it after the
+ * page); once the code is there it renders synchronously (a thenable that answers at once).
  */
 export function later<P extends object>(load: () => Promise<ComponentType<P>>) {
-  return lazy(() => pageSettled().then(load).then((component) => ({ default: component })));
+  let loaded: ComponentType<P> | null = null;
+  const loading = load().then((component) => (loaded = component));
+  return lazy<ComponentType<P>>(() => {
+    const ready: Thenable<{ default: ComponentType<P> }> | null = loaded ? { then: (resolve) => resolve({ default: loaded as ComponentType<P> }) } : null;
+    return (ready ?? loading.then((component) => ({ default: component }))) as Promise<{ default: ComponentType<P> }>;
+  });
 }
