@@ -61,7 +61,7 @@ export const TARGETS = [
   ["geometry/shapes.ts", [t("shapes")]],
   ["geometry/homography.ts", [t("homography")]],
   ["geometry/study-context.ts", EVALUATION],
-  ["geometry/limits.ts", [t("limits"), ...EVALUATION]],
+  ["geometry/limits.ts", [t("limits"), t("resolve-limits"), ...EVALUATION]],
   ["geometry/resolve-limits.ts", [t("resolve-limits"), ...EVALUATION]],
   ["geometry/cut-warnings.ts", [t("cut-warnings"), ...EVALUATION]],
   ["geometry/warnings.ts", [t("warnings"), ...EVALUATION]],
