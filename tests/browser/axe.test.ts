@@ -1,5 +1,5 @@
 import AxeBuilder from "@axe-core/playwright";
-import type { Browser, BrowserContext, Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPerson, signInThroughForm } from "../support/browser";
 import { me, insertExampleStudy, jobBody } from "../integration/jobs-support";
@@ -34,7 +34,7 @@ type Scheme = "light" | "dark";
 type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
 
 /** One person's walk: one context, one tab, the findings of every page it opens. */
-async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page: Page; context: BrowserContext; check: (name: string) => Promise<void>; findings: Finding[] }> {
+async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page: Page; check: (name: string) => Promise<void>; done: () => Promise<void> }> {
   const context = await newPerson(browser);
   const page = await context.newPage();
   await page.emulateMedia({ colorScheme: scheme });
@@ -48,14 +48,23 @@ async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page:
       findings.push({ page: `${name}, ${scheme} (${new URL(page.url()).pathname})`, rule: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.join(" ")) });
     }
   };
-  return { page, context, check, findings };
+  /** Ends the walk: fails on any finding, with what and where. */
+  const done = async () => {
+    await context.close();
+    expect(findings, report(findings)).toEqual([]);
+  };
+  return { page, check, done };
 }
 
 function report(findings: Finding[]): string {
   return findings.map((f) => `${f.page}: ${f.impact} ${f.rule} — ${f.help}\n    ${f.targets.join("\n    ")}`).join("\n");
 }
 
-const nav = (page: Page, name: string) => page.getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true }).click();
+/** Follows a link of the main navigation and waits for its page. */
+async function nav(page: Page, name: string, path: string) {
+  await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name, exact: true }).click();
+  await page.waitForURL(`**${path}`);
+}
 
 /** Opens the first link on the page whose address starts with the prefix (and is not a "new" form). */
 async function openFirst(page: Page, prefix: string) {
@@ -113,7 +122,7 @@ async function keyboardThroughStudio(page: Page) {
 
 describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, in the %s colour scheme", (scheme) => {
   it("a visitor: the front page, the example studio (its section plane and cut sliders by keyboard) and the account forms", async () => {
-    const { page, context, check, findings } = await walker(scheme);
+    const { page, check, done } = await walker(scheme);
     await page.goto("/");
     await check("front page");
     await page.goto("/try");
@@ -131,16 +140,14 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await check("forgot password");
     await page.goto("/sign-up");
     await check("sign up");
-    await context.close();
-    expect(findings, report(findings)).toEqual([]);
+    await done();
   });
 
   // The longest walk: fifteen pages, each checked in full (about three minutes on a busy two-core machine).
   it("the owner: home, the library's shelves and forms, studies, a study, jobs, a new job, a job, settings and outbox", { timeout: 360_000 }, async () => {
-    const { page, context, check, findings } = await walker(scheme, "owner");
+    const { page, check, done } = await walker(scheme, "owner");
     await check("home");
-    await nav(page, "Library");
-    await page.waitForURL("**/library");
+    await nav(page, "Library", "/library");
     for (const [tab, kind] of [["Cylinder kits", "kits"], ["Boring rigs", "rigs"], ["Case profiles", "cases"]] as const) {
       await page.getByRole("navigation", { name: "Library sections" }).getByRole("link", { name: tab }).click();
       await page.waitForURL(`**/library?kind=${kind}`);
@@ -153,14 +160,12 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
       await check(`library: new ${kind}`);
       await page.goBack();
     }
-    await nav(page, "Studies");
-    await page.waitForURL("**/studies");
+    await nav(page, "Studies", "/studies");
     await check("studies");
     await openFirst(page, "/studies/");
     await page.getByTestId("view").waitFor();
     await check("a study");
-    await nav(page, "Jobs");
-    await page.waitForURL("**/jobs");
+    await nav(page, "Jobs", "/jobs");
     await check("jobs");
     await page.getByRole("link", { name: "New job" }).click();
     await page.waitForURL("**/jobs/new");
@@ -168,40 +173,33 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await page.goBack();
     await openFirst(page, "/jobs/");
     await check("a job from the list");
-    await nav(page, "Shop settings");
-    await page.waitForURL("**/settings");
+    await nav(page, "Shop settings", "/settings");
     await check("shop settings");
-    await nav(page, "Outbox");
-    await page.waitForURL("**/outbox");
+    await nav(page, "Outbox", "/outbox");
     await check("outbox");
-    await context.close();
-    expect(findings, report(findings)).toEqual([]);
+    await done();
   });
 
   it("the builder: home, jobs, a job and its setup card", async () => {
-    const { page, context, check, findings } = await walker(scheme, "builder");
+    const { page, check, done } = await walker(scheme, "builder");
     await check("home");
-    await nav(page, "Jobs");
-    await page.waitForURL("**/jobs");
+    await nav(page, "Jobs", "/jobs");
     await check("jobs");
     await page.goto(`/jobs/${planned.id}`);
     await check("a planned job");
     await page.getByRole("link", { name: "Setup card" }).click();
     await page.waitForURL("**/setup-card/**");
     await check("setup card");
-    await context.close();
-    expect(findings, report(findings)).toEqual([]);
+    await done();
   });
 
   it("the customer: the consult list and a consult page", async () => {
-    const { page, context, check, findings } = await walker(scheme, "customer");
+    const { page, check, done } = await walker(scheme, "customer");
     await check("landing");
-    await nav(page, "Consult");
-    await page.waitForURL("**/consult");
+    await nav(page, "Consult", "/consult");
     await check("consult list");
     await openFirst(page, "/consult/");
     await check("a consult");
-    await context.close();
-    expect(findings, report(findings)).toEqual([]);
+    await done();
   });
 });

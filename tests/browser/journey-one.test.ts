@@ -4,7 +4,7 @@
 // at a phone's, with no page error and no console error on the way. The only address typed is the first.
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, screenshot } from "../support/browser";
+import { launchBrowser, newPerson, screenshot, signUpThroughForm } from "../support/browser";
 import { uniqueEmail } from "../support/http";
 import { measurePdf } from "../integration/jobs-pdf-measure";
 
@@ -26,10 +26,23 @@ function watch(page: Page): string[] {
   return problems;
 }
 
-
 async function home(page: Page) {
   await page.getByRole("link", { name: "Borewright" }).first().click();
   await page.waitForURL(/\/home$/);
+}
+
+/** Follows one of the home page's first steps to its form and names what the form makes. */
+async function openStep(page: Page, step: string, form: RegExp, name: string) {
+  await page.getByRole("link", { name: step }).click();
+  await page.waitForURL(form);
+  await page.getByRole("textbox", { name: "Name", exact: true }).fill(name);
+}
+
+/** Creates the row of the library form on show and finds it on its shelf. */
+async function createOnShelf(page: Page, shelf: "cases" | "kits" | "rigs", name: string) {
+  await page.getByRole("button", { name: "Create" }).click();
+  await page.waitForURL(new RegExp(`/library\\?kind=${shelf}`));
+  await page.getByRole("link", { name }).waitFor();
 }
 
 async function walk(page: Page, tag: string) {
@@ -41,10 +54,7 @@ async function walk(page: Page, tag: string) {
   // 1. Signs up from the landing page and lands in a shop of one, as its owner, told what to do first.
   await page.goto("/");
   await page.getByRole("link", { name: "Create an account" }).click();
-  await page.getByLabel("Your name").fill("Tamsin Oakridge");
-  await page.getByLabel("E-mail").fill(email);
-  await page.getByLabel("Password").fill("a-long-journey-password");
-  await page.getByRole("button", { name: "Create account" }).click();
+  await signUpThroughForm(page, { name: "Tamsin Oakridge", email, password: "a-long-journey-password" });
   await page.waitForURL(/\/home$/);
   expect(await page.getByTestId("who").textContent()).toMatch(/Tamsin Oakridge's shop · owner/);
   const steps = page.getByRole("list").filter({ hasText: "Describe the crankcase" });
@@ -52,9 +62,7 @@ async function walk(page: Page, tag: string) {
   await screenshot(page, `journey-${tag}-01-home`);
 
   // 2. The case profile: a round mouth read three times (the smallest counts), four studs on a square, the deck.
-  await page.getByRole("link", { name: "1 · Describe the crankcase" }).click();
-  await page.waitForURL(/\/library\/cases\/new$/);
-  await page.getByRole("textbox", { name: "Name", exact: true }).fill(CASE);
+  await openStep(page, "1 · Describe the crankcase", /\/library\/cases\/new$/, CASE);
   const mouth = page.getByRole("group", { name: /Mouth diameter readings/ });
   // The readings' inputs by their ids: the form shows each reading's label twice (list and drawing).
   await page.locator("#f-mouthReadingsMm-0").fill("46.02");
@@ -70,15 +78,11 @@ async function walk(page: Page, tag: string) {
   await page.getByRole("group", { name: /^Deck/ }).getByLabel("Diameter").fill("110");
   await page.getByLabel("Stock bore").fill("40");
   await page.getByLabel("Stroke").fill("39.2");
-  await page.getByRole("button", { name: "Create" }).click();
-  await page.waitForURL(/\/library\?kind=cases/);
-  await page.getByRole("link", { name: CASE }).waitFor();
+  await createOnShelf(page, "cases", CASE);
 
   // 3. The kit from its listed data, the skirt diameter overridden with two readings of their own (the largest counts).
   await home(page);
-  await page.getByRole("link", { name: "2 · Add the candidate kits" }).click();
-  await page.waitForURL(/\/library\/kits\/new$/);
-  await page.getByRole("textbox", { name: "Name", exact: true }).fill(KIT);
+  await openStep(page, "2 · Add the candidate kits", /\/library\/kits\/new$/, KIT);
   await page.getByLabel("Bore").fill("47");
   const skirt = page.getByRole("group", { name: /Skirt diameter readings/ });
   await page.locator("#f-skirtDiameterReadingsMm-0").fill("53.92");
@@ -88,15 +92,11 @@ async function walk(page: Page, tag: string) {
   await page.getByLabel("Copy studs from a case profile").selectOption({ label: CASE });
   await expect.poll(() => page.getByLabel("Stud 1 label").inputValue()).not.toBe("");
   await page.getByLabel("Price", { exact: true }).fill("289");
-  await page.getByRole("button", { name: "Create" }).click();
-  await page.waitForURL(/\/library\?kind=kits/);
-  await page.getByRole("link", { name: KIT }).waitFor();
+  await createOnShelf(page, "kits", KIT);
 
   // 4. The boring rig: head read with calipers, the bit's calibrated reach, the grooves and the washers at hand.
   await home(page);
-  await page.getByRole("link", { name: "3 · Add your boring rig" }).click();
-  await page.waitForURL(/\/library\/rigs\/new$/);
-  await page.getByRole("textbox", { name: "Name", exact: true }).fill(RIG);
+  await openStep(page, "3 · Add your boring rig", /\/library\/rigs\/new$/, RIG);
   await page.getByLabel("Cutter head diameter, as measured (without the bit)").fill("34.5");
   await page.getByLabel("Radius of the outermost screw heads").fill("21");
   await page.getByLabel("Length of the bit installed now").fill("35");
@@ -115,9 +115,7 @@ async function walk(page: Page, tag: string) {
     await shims.getByLabel("How many").nth(i).fill(count);
   }
   await page.getByLabel("Drill top speed").fill("2800");
-  await page.getByRole("button", { name: "Create" }).click();
-  await page.waitForURL(/\/library\?kind=rigs/);
-  await page.getByRole("link", { name: RIG }).waitFor();
+  await createOnShelf(page, "rigs", RIG);
 
   // 5. The study: the shop's one rig is already picked; the verdict, the cut and the rig's set-up show at once.
   await home(page);
