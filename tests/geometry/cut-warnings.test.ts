@@ -95,4 +95,11 @@ describe("the warnings of a planned cut", () => {
     expect(codes(planned({ throughMouth: true }))).toEqual(["cut-through-mouth"]);
     expect(codes(planned({}), { ...level, clearsMouth: true })).toEqual(["cut-not-needed"]);
   });
+
+  it("a figure short of its minimum by less than the computing tolerance is sound, and a wall that short of zero is thin, not broken", () => {
+    const tol = 0.001;
+    expect(cutWarnings(planned({ vsCutMm: 0.4995, effectiveMm: 0.4995, depthClearanceMm: 0.4995 }), level, L, tol)).toEqual([]);
+    expect(cutWarnings(planned({ vsCutMm: 0.4995, effectiveMm: 0.3 }), { ...level, plane: tilted }, L, tol).map((x) => x.code)).toEqual(["tilt-eats-clearance"]);
+    expect(cutWarnings(planned({ walls: [wall("pocket", "left", -0.0005, false)] }), level, L, tol).map((x) => x.code)).toEqual(["wall-below-minimum"]);
+  });
 });

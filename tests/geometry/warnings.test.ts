@@ -89,5 +89,6 @@ describe("warning words", () => {
     expect(messages.matchedWallBelowMin("intake", "left", -0.3, 2)).toContain("If left were opened to match port intake, the cut would break 0.30 mm into it");
     expect(messages.matchedWallBelowMin("intake", null, 1.2, 2)).toContain("If a passage were opened to match port intake, only 1.20 mm of wall would remain to the cut (minimum 2.00 mm)");
     expect(messages.matchedWallBelowMin("intake", "left", 0, 2)).toContain("only 0.00 mm of wall");
+    expect(messages.matchedWallBelowMin("intake", null, -0.3, 2)).toContain("If a passage were opened to match port intake, the cut would break 0.30 mm into it");
   });
 });
