@@ -65,6 +65,14 @@ describe("the problems of a planned cut", () => {
     expect(cutReasons({ ...soundCut, walls: [wall("outline", 0, false)] }, 0.5, 0.5, 0)).toEqual(["wall-below-minimum"]);
   });
 
+  it("a figure past its limit by less than the computing tolerance is not a problem", () => {
+    const tol = 0.001;
+    expect(cutReasons({ ...soundCut, effectiveRadialClearanceMm: 0.4995, depthClearanceMm: 0.4995, diameterMm: 60.0005 }, 0.5, 0.5, tol)).toEqual([]);
+    // A skirt 0.0005 mm into the cut is at zero, within the tolerance: too close, not interfering.
+    expect(cutReasons({ ...soundCut, effectiveRadialClearanceMm: -0.0005 }, 0.5, 0.5, tol)).toEqual(["radial-clearance-below-minimum"]);
+    expect(cutReasons({ ...soundCut, walls: [wall("pocket", -0.0005, false)] }, 0.5, 0.5, tol)).toEqual(["wall-below-minimum"]);
+  });
+
   it("a cut wider than the case allows is a reason", () => {
     expect(cutReasons({ ...soundCut, diameterMm: 60.5 }, 0.5, 0.5, TOL)).toEqual(["cut-larger-than-case-allows"]);
   });
