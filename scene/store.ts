@@ -1,7 +1,8 @@
+import { createStore, type StoreApi } from "zustand/vanilla";
 import type { Study, StudyResult } from "@/geometry";
 
-// A tiny store for what changes on every pointer move: the study with the cut being dragged and the
-// core's result for it. The 3D view reads it inside useFrame; React reads it through a subscription.
+// A small store for what changes on every pointer move: the study with the cut being dragged and the
+// core's result for it. The 3D view reads it inside useFrame; React reads slices of it through selectors.
 
 /** What the studio shows right now. */
 export interface FitSnapshot {
@@ -12,25 +13,15 @@ export interface FitSnapshot {
   readonly inputAt: number;
 }
 
-export interface FitStore {
+/** A zustand store of one snapshot, with the short names the scene reads it by. */
+export interface FitStore extends StoreApi<FitSnapshot> {
   get(): FitSnapshot;
+  /** Merges the fields given into a new snapshot; listeners run after every set. */
   set(next: Partial<FitSnapshot>): void;
-  subscribe(listener: () => void): () => void;
 }
 
-/** A store holding one snapshot; listeners run after every set. */
+/** A store holding one snapshot. */
 export function createFitStore(initial: FitSnapshot): FitStore {
-  let snap = initial;
-  const listeners = new Set<() => void>();
-  return {
-    get: () => snap,
-    set(next) {
-      snap = { ...snap, ...next };
-      for (const l of listeners) l();
-    },
-    subscribe(listener) {
-      listeners.add(listener);
-      return () => listeners.delete(listener);
-    },
-  };
+  const api = createStore<FitSnapshot>()(() => initial);
+  return { ...api, get: api.getState, set: (next) => api.setState(next) };
 }

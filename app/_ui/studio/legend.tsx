@@ -1,4 +1,4 @@
-import type { StudyResult } from "@/geometry";
+import { memo } from "react";
 import { bandRanges, FIT, wallLowRange, type Meaning } from "@/model/palette";
 import type { LengthUnits } from "@/model/units";
 
@@ -55,9 +55,8 @@ export function KeyLine({ meaning, range, words }: { meaning: Meaning; range?: s
 }
 
 /** What each colour of the 3D view and the drawings means, with the shop's numbers (ranges that meet without overlapping). */
-export function Legend({ result, units, large }: { result: StudyResult; units: LengthUnits; large: boolean }) {
-  const ranges = bandRanges(result.limits.values.minRadialClearanceMm, units);
-  const ports = result.kits.some((k) => k.ports.length > 0);
+export const Legend = memo(function Legend({ minClearanceMm, minWallMm, ports, units, large }: { minClearanceMm: number; minWallMm: number; ports: boolean; units: LengthUnits; large: boolean }) {
+  const ranges = bandRanges(minClearanceMm, units);
   return (
     <div className={`card p-3 ${large ? "text-base" : "text-xs"}`} aria-label="Colour key" role="group" data-testid="legend">
       <ul className="flex flex-col gap-1.5">
@@ -66,10 +65,10 @@ export function Legend({ result, units, large }: { result: StudyResult; units: L
         <KeyLine meaning={FIT.clear} range={ranges.clear} />
         <KeyLine meaning={FIT.counterbore} />
         <KeyLine meaning={FIT.removed} words="case material the counterbore takes away (in the section)" />
-        <KeyLine meaning={FIT.wallLow} range={wallLowRange(result.limits.values.minWallMm, units)} />
+        <KeyLine meaning={FIT.wallLow} range={wallLowRange(minWallMm, units)} />
         <KeyLine meaning={FIT.passage} />
         {ports ? <KeyLine meaning={FIT.port} /> : null}
       </ul>
     </div>
   );
-}
+});

@@ -1,5 +1,6 @@
 "use client";
 
+import { memo } from "react";
 import type { CameraPreset, ViewState } from "@/scene/three/view";
 
 export type CompareMode = "one" | "overlay" | "side";
@@ -23,7 +24,7 @@ const PRESETS: [CameraPreset, string][] = [
 ];
 
 /** View controls: camera presets, the section plane, the exaggeration, the comparison and the snapshot. */
-export function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot, multipleKits, portWindows }: Props) {
+export const Toolbar = memo(function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot, multipleKits, portWindows }: Props) {
   return (
     <div className="flex flex-wrap items-center gap-x-4 gap-y-2 text-sm" role="toolbar" aria-label="View">
       <div className="flex gap-1" role="group" aria-label="Camera">
@@ -91,4 +92,4 @@ export function Toolbar({ view, compare, customer, onView, onCompare, onSnapshot
       </button>
     </div>
   );
-}
+});

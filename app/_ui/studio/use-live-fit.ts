@@ -1,8 +1,8 @@
 "use client";
 
-import { useCallback, useEffect, useMemo, useRef, useState, useSyncExternalStore } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { evaluateStudy, type Study, type StudyResult } from "@/geometry";
-import { createFitStore, type FitSnapshot } from "@/scene/store";
+import { createFitStore } from "@/scene/store";
 
 export type CutDraft = { diameterMm?: number; depthMm?: number };
 
@@ -15,14 +15,13 @@ export function withCut(study: Study, cut: CutDraft): Study {
 export const SETTLE_MS = 150;
 
 /**
- * The live fit: a store the 3D view reads every frame, and a React view of it for the panels. A cut
+ * The live fit: a store the 3D view reads every frame and the panels read slices of. A cut
  * change re-evaluates the kit on show with the core in the browser, at once; the other kits (the lineup,
  * the overlays) follow once the cut settles: after the next frame when the drag ends or a value is typed,
  * or when a drag has rested for SETTLE_MS.
  */
 export function useLiveFit(study: Study, result: StudyResult, initialKit: number) {
   const store = useMemo(() => createFitStore({ study, result, kitIndex: initialKit, inputAt: 0 }), [study, result, initialKit]);
-  const snap: FitSnapshot = useSyncExternalStore(store.subscribe, store.get, store.get);
   const pending = useRef<{ frame: number | null; timer: ReturnType<typeof setTimeout> | null }>({ frame: null, timer: null });
   // The study the other kits' results are for.
   const restFor = useRef<Study>(study);
@@ -79,7 +78,7 @@ export function useLiveFit(study: Study, result: StudyResult, initialKit: number
     },
     [store, evaluateRest],
   );
-  return { store, snap, setCut, setKit, settle };
+  return { store, setCut, setKit, settle };
 }
 
 /** A value that follows `value` but lags behind it while it changes quickly (for heavy panels such as SVG drawings). */
