@@ -33,8 +33,18 @@ afterAll(async () => {
 type Scheme = "light" | "dark";
 type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
 
+type Walk = {
+  page: Page;
+  /** Checks the page on show, naming it `name` in the findings. */
+  check: (name: string) => Promise<void>;
+  /** Follows a link of the main navigation and checks the page it leads to. */
+  visit: (link: string, path: string, name: string) => Promise<void>;
+  /** Ends the walk: fails on any finding, with what and where. */
+  done: () => Promise<void>;
+};
+
 /** One person's walk: one context, one tab, the findings of every page it opens. */
-async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page: Page; check: (name: string) => Promise<void>; done: () => Promise<void> }> {
+async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<Walk> {
   const context = await newPerson(browser);
   const page = await context.newPage();
   await page.emulateMedia({ colorScheme: scheme });
@@ -48,12 +58,15 @@ async function walker(scheme: Scheme, role?: keyof typeof DEMO): Promise<{ page:
       findings.push({ page: `${name}, ${scheme} (${new URL(page.url()).pathname})`, rule: v.id, impact: v.impact, help: v.help, targets: v.nodes.slice(0, 5).map((n) => n.target.join(" ")) });
     }
   };
-  /** Ends the walk: fails on any finding, with what and where. */
+  const visit = async (link: string, path: string, name: string) => {
+    await nav(page, link, path);
+    await check(name);
+  };
   const done = async () => {
     await context.close();
     expect(findings, report(findings)).toEqual([]);
   };
-  return { page, check, done };
+  return { page, check, visit, done };
 }
 
 function report(findings: Finding[]): string {
@@ -145,7 +158,7 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
 
   // The longest walk: fifteen pages, each checked in full (about three minutes on a busy two-core machine).
   it("the owner: home, the library's shelves and forms, studies, a study, jobs, a new job, a job, settings and outbox", { timeout: 360_000 }, async () => {
-    const { page, check, done } = await walker(scheme, "owner");
+    const { page, check, visit, done } = await walker(scheme, "owner");
     await check("home");
     await nav(page, "Library", "/library");
     for (const [tab, kind] of [["Cylinder kits", "kits"], ["Boring rigs", "rigs"], ["Case profiles", "cases"]] as const) {
@@ -160,31 +173,26 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
       await check(`library: new ${kind}`);
       await page.goBack();
     }
-    await nav(page, "Studies", "/studies");
-    await check("studies");
+    await visit("Studies", "/studies", "studies");
     await openFirst(page, "/studies/");
     await page.getByTestId("view").waitFor();
     await check("a study");
-    await nav(page, "Jobs", "/jobs");
-    await check("jobs");
+    await visit("Jobs", "/jobs", "jobs");
     await page.getByRole("link", { name: "New job" }).click();
     await page.waitForURL("**/jobs/new");
     await check("new job");
     await page.goBack();
     await openFirst(page, "/jobs/");
     await check("a job from the list");
-    await nav(page, "Shop settings", "/settings");
-    await check("shop settings");
-    await nav(page, "Outbox", "/outbox");
-    await check("outbox");
+    await visit("Shop settings", "/settings", "shop settings");
+    await visit("Outbox", "/outbox", "outbox");
     await done();
   });
 
   it("the builder: home, jobs, a job and its setup card", async () => {
-    const { page, check, done } = await walker(scheme, "builder");
+    const { page, check, visit, done } = await walker(scheme, "builder");
     await check("home");
-    await nav(page, "Jobs", "/jobs");
-    await check("jobs");
+    await visit("Jobs", "/jobs", "jobs");
     await page.goto(`/jobs/${planned.id}`);
     await check("a planned job");
     await page.getByRole("link", { name: "Setup card" }).click();
@@ -194,10 +202,9 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
   });
 
   it("the customer: the consult list and a consult page", async () => {
-    const { page, check, done } = await walker(scheme, "customer");
+    const { page, check, visit, done } = await walker(scheme, "customer");
     await check("landing");
-    await nav(page, "Consult", "/consult");
-    await check("consult list");
+    await visit("Consult", "/consult", "consult list");
     await openFirst(page, "/consult/");
     await check("a consult");
     await done();
