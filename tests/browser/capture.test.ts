@@ -2,14 +2,13 @@
 // fields: a stud pattern from its centre distances, a chamfered deck, an arc-slot passage; a corner
 // dragged, undone, redone; the passage mirrored. The numbers in the fields and the points of the drawing
 // agree at every step, and the saved row holds them.
-import { mkdirSync } from "node:fs";
-import { chromium, type Browser, type Page } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it, inject } from "vitest";
 import { INK } from "@/scene/drawing/svg";
-import { DEMO, freshAddress } from "../support/http";
+import { closeBrowser, launchSignedIn, screenshot } from "../support/browser";
+import { DEMO } from "../support/http";
+import { openNewForm } from "../support/library-forms";
 
-const SHOTS = "test-results/screenshots";
-const ARGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--use-angle=swiftshader", "--enable-unsafe-swiftshader"];
 const NAME = `Traced case ${Date.now().toString(36)}`;
 
 let browser: Browser;
@@ -59,27 +58,15 @@ async function measure(p: Page, what: string, shape: string | null, values: Reco
 }
 
 beforeAll(async () => {
-  mkdirSync(SHOTS, { recursive: true });
-  browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ARGS });
-  const context = await browser.newContext({ viewport: { width: 1600, height: 1100 }, extraHTTPHeaders: { "x-forwarded-for": freshAddress() } });
-  page = await context.newPage();
-  page.on("pageerror", (e) => pageErrors.push(e.message));
-  await page.goto(`${inject("baseURL")}/sign-in`);
-  await page.getByLabel("E-mail").fill(DEMO.builder.email);
-  await page.getByLabel("Password").fill(DEMO.builder.password);
-  await page.getByRole("button", { name: "Sign in" }).click();
+  ({ browser, page } = await launchSignedIn(DEMO.builder, { width: 1600, height: 1100, pageErrors }));
   await page.waitForURL(/\/home/);
 });
 
-afterAll(async () => {
-  await browser?.close();
-  expect(pageErrors).toEqual([]);
-});
+afterAll(() => closeBrowser(browser, pageErrors));
 
 describe("a case profile entered from measurements, on its drawing", () => {
   it("builds, drags, undoes, redoes, mirrors and saves what the drawing shows", async () => {
-    await page.goto(`${inject("baseURL")}/library/cases/new`);
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await openNewForm(page, "cases");
     await page.locator("#f-name").fill(NAME);
     await page.locator("#f-mouthReadingsMm-0").fill("46");
     await page.locator("#f-mouth-depthMm").fill("26");
@@ -145,7 +132,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
     expect(Math.abs(dragged[0] - expected[0])).toBeLessThanOrEqual(0.05 + 1e-9);
     expect(Math.abs(dragged[1] - expected[1])).toBeLessThanOrEqual(0.05 + 1e-9);
     expect(Math.round(dragged[0] * 10) / 10).toBeCloseTo(dragged[0], 9);
-    await page.screenshot({ path: `${SHOTS}/capture-dragged.png`, fullPage: true });
+    await screenshot(page, "capture-dragged");
 
     // Undo puts the corner back; redo (Ctrl+Shift+Z on the drawing) brings the drag back.
     await plan.getByRole("button", { name: "Undo" }).click();
@@ -222,7 +209,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
       expect(p[0]).toBeCloseTo(-q[0], 3);
       expect(p[1]).toBeCloseTo(q[1], 3);
     });
-    await page.screenshot({ path: `${SHOTS}/capture-mirrored.png`, fullPage: true });
+    await screenshot(page, "capture-mirrored");
 
     // Saved, the row holds the same numbers, and the measurements the shapes were drawn from.
     const finalDeck = await fieldCorners(page, "Deck");
@@ -245,8 +232,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
 
   it("a kit's base gasket gets its port windows the same way, drawn over the bore, and saves them", async () => {
     const kit = `Gasket kit ${Date.now().toString(36)}`;
-    await page.goto(`${inject("baseURL")}/library/kits/new`);
-    await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
+    await openNewForm(page, "kits");
     await page.locator("#f-name").fill(kit);
     await page.locator("#f-boreMm").fill("47");
     await page.locator("#f-skirtDiameterReadingsMm-0").fill("53.9");
@@ -263,7 +249,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
     expect(port[0][1]).toBeCloseTo(24, 6);
     expect(port[2][0]).toBeCloseTo(-7, 6);
     expect(port[2][1]).toBeCloseTo(30, 6);
-    await page.screenshot({ path: `${SHOTS}/capture-gasket.png`, fullPage: true });
+    await screenshot(page, "capture-gasket");
     await page.getByRole("button", { name: "Create" }).click();
     await page.waitForURL(/\/library\?kind=kits/);
     const res = await page.request.get(`${inject("baseURL")}/api/v1/kits?q=${encodeURIComponent(kit)}`);
