@@ -5,7 +5,7 @@
 // (geometry/alignment.ts); every expected figure is worked by hand from that beside the check.
 import { describe, expect, it } from "vitest";
 import { evaluateStudy, type StudyInput } from "../../geometry/index";
-import { parse, planeReadings, roundStudyInput } from "./fixtures";
+import { parse, planeReadings, roundStudyInput, testRig } from "./fixtures";
 
 const leftPocket = { label: "left", outline: { kind: "polygon" as const, pointsMm: [[-36, -8], [-31, -8], [-31, 8], [-36, 8]] as [number, number][] } };
 
@@ -65,5 +65,24 @@ describe("a tilted holder: the cut's bottom counts where it comes nearer a featu
     expect(wall.atMm[1]).toBeCloseTo(0.08, 9);
     expect(wall.cutPointMm[0]).toBeCloseTo(-28.5, 9);
     expect(wall.cutPointMm[1]).toBeCloseTo(0.08, 9);
+  });
+});
+
+describe("a diameter proposed for a rig", () => {
+  // The setting s = (D + D_head)/2 is dialled on a caliper (tests/geometry/sources.test.ts, common practice, no
+  // published source), so the proposed D is the smallest 2·s − D_head ≥ D needed with s on the caliper's steps.
+  // A Ø54.03 skirt with the default 0.5 mm clearance needs Ø55.03.
+  const withRig = (settingResolutionMm?: number) => {
+    const s = roundStudyInput();
+    s.kits[0].skirtDiameterReadingsMm = [54.03];
+    return evaluateStudy(parse({ ...s, rig: { ...testRig, ...(settingResolutionMm === undefined ? {} : { settingResolutionMm }) } })).kits[0].cut!;
+  };
+
+  it("a caliper read to 0.02 mm: s = 44.765 rounds up to 44.78, so D = 2·44.78 − 34.5 = 55.06 mm", () => {
+    expect(withRig(0.02).diameterMm).toBeCloseTo(55.06, 9);
+  });
+
+  it("with no resolution given, a caliper read to 0.05 mm: s rounds up to 44.8, so D = 55.1 mm", () => {
+    expect(withRig().diameterMm).toBeCloseTo(55.1, 9);
   });
 });

@@ -66,6 +66,7 @@ describe("the matched passage in the study result", { timeout: 60_000 }, () => {
     expect(p.ok).toBe(false);
     expect(p.steps.innerMm).toBeCloseTo(1, 9);
     expect(k.warnings.map((w) => w.code)).toContain("matched-passage-wall-below-minimum");
+    expect(k.warnings.find((w) => w.code === "matched-passage-wall-below-minimum")?.message).toContain("If right transfer passage were opened to match port right transfer");
     // A what-if: the verdict is the cut's own.
     expect(k.verdict).toBe("fits-after-cut");
   });
