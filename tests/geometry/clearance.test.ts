@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import polygonClipping from "polygon-clipping";
-import { skirtClearance } from "../../geometry/clearance";
+import { skirtClearance, worstSkirtDiameterMm } from "../../geometry/clearance";
 import { lensArea } from "../../geometry/lens";
 import type { Outline } from "../../geometry/index";
 import type { Vec2 } from "../../geometry/vec";
@@ -137,5 +137,11 @@ describe("a skirt touching the opening, and one outside it", () => {
     expect(c.interference?.atMm[0]).toBeCloseTo(40, 12);
     expect(c.interference?.atMm[1]).toBeCloseTo(0, 12);
     expect(c.interference?.angleDeg).toBeCloseTo(0, 12);
+  });
+});
+
+describe("the skirt's worst diameter", () => {
+  it("is the largest of its readings: a skirt measured 53.9, 54.0 and 53.95 mm is taken as Ø54.0 (common practice, no published source)", () => {
+    expect(worstSkirtDiameterMm([53.9, 54, 53.95])).toBe(54);
   });
 });

@@ -5,7 +5,7 @@
 // (geometry/alignment.ts). Every expected figure is worked by hand beside the check.
 import { describe, expect, it } from "vitest";
 import { evaluateStudy, type StudyInput } from "../../geometry/index";
-import { offCentreStudyInput, parse, planeReadings, roundStudyInput } from "./fixtures";
+import { offCentreStudyInput, parse, planeReadings, roundStudyInput, testRig } from "./fixtures";
 
 function tiltedStudy(kit: Partial<StudyInput["kits"][number]>, cut?: StudyInput["cut"]): StudyInput {
   const s = roundStudyInput();
@@ -170,5 +170,43 @@ describe("a clearance exactly at the minimum, with the core's own tolerance", ()
     const k = evaluateStudy(parse(input)).kits[0];
     expect(k.verdict).toBe("fits-as-is");
     expect(k.cut).toBeNull();
+  });
+});
+
+describe("one kit's result, each part", () => {
+  // The invented round study: a Ø54 skirt in a Ø46 mouth on a 40 × 39.2 mm stock engine (49.26 cc, under the 50 cc
+  // class) with a 47 mm kit (68.01 cc, over it); 50 cc the moped limit (Regulation (EU) No 168/2013, Annex I,
+  // L1e-B, from memory).
+  it("a kit made for another stud pattern is warned and cannot fit", () => {
+    const s = roundStudyInput();
+    const k = evaluateStudy(parse({ ...s, kits: [{ ...s.kits[0], studs: s.kits[0].studs.map((t) => ({ ...t, positionMm: [t.positionMm[0] * (30 / 28), t.positionMm[1] * (30 / 28)] as [number, number] })) }] })).kits[0];
+    expect(k.warnings.map((w) => w.code)).toContain("stud-pattern-mismatch");
+    expect(k.verdict).toBe("cannot-fit");
+  });
+
+  it("a kit that crosses a displacement class is warned", () => {
+    const k = evaluateStudy(parse(roundStudyInput())).kits[0];
+    expect(k.warnings.filter((w) => w.code === "displacement-crosses-class")).toHaveLength(1);
+  });
+
+  it("a planned cut on a rig gets the rig's set-up and the cut's own warnings", () => {
+    // A Ø56 cut leaves 28√2 − 3.75 − 28 = 7.85 mm of land; a 9 mm minimum makes it fail.
+    const k = evaluateStudy(parse({ ...roundStudyInput(), rig: testRig, cut: { diameterMm: 56, depthMm: 25.5 }, limits: { minSealingLandMm: 9 } })).kits[0];
+    expect(k.rig).not.toBeNull();
+    expect(k.warnings.map((w) => w.code)).toContain("sealing-land-below-minimum");
+  });
+
+  it("a skirt that already clears the mouth: no walls, no cut, unless a cut is given, which is then planned and warned as not needed", () => {
+    const s = roundStudyInput();
+    const small = { ...s, kits: [{ ...s.kits[0], skirtDiameterReadingsMm: [44] }] };
+    const asIs = evaluateStudy(parse(small)).kits[0];
+    expect(asIs.verdict).toBe("fits-as-is");
+    expect(asIs.cut).toBeNull();
+    expect(asIs.walls).toEqual([]);
+    for (const cut of [{ diameterMm: 56 }, { depthMm: 25 }]) {
+      const k = evaluateStudy(parse({ ...small, cut })).kits[0];
+      expect(k.cut).not.toBeNull();
+      expect(k.warnings.map((w) => w.code)).toContain("cut-not-needed");
+    }
   });
 });

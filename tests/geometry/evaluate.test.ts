@@ -174,3 +174,25 @@ describe("the example study", () => {
     expect(study).toEqual(before);
   });
 });
+
+describe("the study-wide figures", () => {
+  it("the holder's warnings are the study's: two readings cannot show a tilt", () => {
+    const s = roundStudyInput();
+    const r = evaluateStudy(parse({ ...s, readings: { holderHeights: [{ stud: "a", heightMm: 20 }, { stud: "b", heightMm: 20.1 }] } }));
+    expect(codes(r)).toContain("readings-insufficient");
+  });
+
+  it("the rig's studs are checked against the case's thread: M8 and M8x1.25 mate, M8x1 does not (ISO 262:1998, Table 1)", () => {
+    const s = roundStudyInput();
+    const at = (rigThread: string) => evaluateStudy(parse({ ...s, case: { ...s.case, studThread: "M8" }, rig: { ...testRig, studThread: rigThread } }));
+    expect(at("M8x1.25").case.rigThread).toEqual({ case: "M8x1.25", rig: "M8x1.25", ok: true });
+    expect(codes(at("M8x1.25"))).not.toContain("thread-mismatch");
+    expect(codes(at("M8x1"))).toContain("thread-mismatch");
+  });
+
+  it("says whether the crank chamber was checked", () => {
+    const s = roundStudyInput();
+    expect(evaluateStudy(parse(s)).case.crankChecked).toBe(false);
+    expect(evaluateStudy(parse({ ...s, case: { ...s.case, crank: { deckToAxisMm: 45.7, webRadiusMm: 21, webSpanMm: 40 } } })).case.crankChecked).toBe(true);
+  });
+});
