@@ -52,15 +52,9 @@ export interface CutSliderProps {
   readonly onCommit: (mm: number) => void;
 }
 
-/** A slider and a number field for one length, in the user's units; the slider works in mm steps. */
-export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, marks, testId, onLive, onCommit }: CutSliderProps) {
-  const id = useId();
+/** Calls `onCommit` with the range's value on its native change event: once when a drag ends, and on each key step. */
+function useRangeCommit(onCommit: (mm: number) => void) {
   const range = useRef<HTMLInputElement>(null);
-  // While the field has focus it keeps what is typed; otherwise it shows the current value.
-  const [typed, setTyped] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const text = typed ?? lengthFieldText(valueMm, units);
-
   const commitRef = useRef(onCommit);
   useEffect(() => {
     commitRef.current = onCommit;
@@ -68,12 +62,19 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, m
   useEffect(() => {
     const el = range.current;
     if (!el) return;
-    // The native change event fires once when a drag ends (and per key step): that is when the value is saved.
     const onChange = () => commitRef.current(Number(el.value));
     el.addEventListener("change", onChange);
     return () => el.removeEventListener("change", onChange);
   }, []);
+  return range;
+}
 
+/** The typed length beside a slider: what is typed is kept while it is wrong, with the message that names the last valid value. */
+function useLengthText({ valueMm, minMm, maxMm, units, onCommit }: Pick<CutSliderProps, "valueMm" | "minMm" | "maxMm" | "units" | "onCommit">) {
+  // While the field has focus it keeps what is typed; otherwise it shows the current value.
+  const [typed, setTyped] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const text = typed ?? lengthFieldText(valueMm, units);
   const submit = () => {
     if (typed === null) return;
     // While the text is wrong the results stay at the last valid value, and the message names it.
@@ -87,6 +88,14 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, m
     setTyped(null);
     onCommit(mm);
   };
+  return { text, error, type: setTyped, submit };
+}
+
+/** A slider and a number field for one length, in the user's units; the slider works in mm steps. */
+export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, marks, testId, onLive, onCommit }: CutSliderProps) {
+  const id = useId();
+  const range = useRangeCommit(onCommit);
+  const { text, error, type, submit } = useLengthText({ valueMm, minMm, maxMm, units, onCommit });
 
   return (
     <div className="flex flex-col gap-1">
@@ -122,7 +131,7 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, m
           value={text}
           aria-invalid={error ? true : undefined}
           aria-describedby={error ? `${id}-e` : hint ? `${id}-h` : undefined}
-          onChange={(e) => setTyped(e.target.value)}
+          onChange={(e) => type(e.target.value)}
           onBlur={submit}
           onKeyDown={(e) => {
             if (e.key === "Enter") submit();
