@@ -3,10 +3,11 @@
 import { memo } from "react";
 import type { KitResult, StudyResult } from "@/geometry";
 import { fitState, governingClearanceMm } from "@/scene/fit";
-import { defaultedLimitsText, TERM, type Term } from "@/model/glossary";
-import { areaLabel, diameterLabel, fixedText, lengthLabel, messageInUnits, signedLengthLabel, volumeLabel } from "@/model/units";
+import { defaultedLimitsText, type Term } from "@/model/glossary";
+import { messageInUnits, signedLengthLabel } from "@/model/units";
 import { blockingReasons } from "@/model/verdict";
 import { FIT } from "@/model/palette";
+import { resultRows } from "./results-rows";
 import { VerdictGlyph, VERDICT_CLASS } from "./verdict-mark";
 import { REASON_TEXT, STATE_TEXT, TEXT_COLOR, VERDICT_TEXT } from "./words";
 
@@ -20,43 +21,13 @@ interface Props {
   readonly large: boolean;
 }
 
-type Row = { term: Term; value: string; note?: string; testId?: string };
-
 /** The fit in words and numbers: the text alternative to the 3D view, read out when it changes. */
 export const ResultsPanel = memo(function ResultsPanel({ result, kitIndex, mouthDiameterMm, units, large }: Props) {
   const k: KitResult = result.kits[kitIndex];
   const state = fitState(k, result);
-  const L = result.limits.values;
   const c = governingClearanceMm(k);
-  const f = (mm: number) => lengthLabel(mm, units);
   const name = (t: Term) => (large ? t.plain : t.label);
-  const minimum = `minimum ${f(L.minRadialClearanceMm)}`;
-  const mouth = k.interference.vsMouth && k.interference.vsMouth.deepestMm > 0 ? `deepest at ${Math.round(k.interference.vsMouth.angleDeg)}°, ${areaLabel(k.interference.vsMouth.areaMm2, units)} overlap` : undefined;
-  const rows: Row[] = [];
-  if (k.cut) rows.push({ term: TERM.clearanceToCut, value: signedLengthLabel(c, units), note: `${minimum}${k.alignment ? "; tilt and offset counted" : ""}`, testId: "clearance" });
-  rows.push({ term: TERM.clearanceToMouth, value: signedLengthLabel(k.radialClearanceMm.vsMouth, units), note: k.cut ? mouth : [minimum, mouth].filter(Boolean).join("; "), testId: k.cut ? undefined : "clearance" });
-  rows.push({ term: TERM.skirtDiameter, value: diameterLabel(k.skirt.diameterMm, units) });
-  rows.push({ term: TERM.skirtProtrusion, value: f(k.skirt.protrusionMm), note: k.skirt.gasketMm > 0 ? `base gasket ${f(k.skirt.gasketMm)} counted` : "no gasket counted" });
-  if (k.cut) {
-    const how = k.cut.diameterProposed && k.cut.depthProposed ? "the least cut for this kit" : k.cut.proposed ? `the least ${k.cut.diameterProposed ? "diameter" : "depth"} for this kit` : "as set";
-    rows.push({ term: TERM.plannedCut, value: `${diameterLabel(k.cut.diameterMm, units)} × ${f(k.cut.depthMm)} deep`, note: `${how}${k.cut.throughMouth ? "; runs through the mouth: no step is left" : ""}`, testId: "planned-cut" });
-    rows.push({ term: TERM.depthClearance, value: k.depthClearanceMm === null ? "no step left" : signedLengthLabel(k.depthClearanceMm, units), note: `minimum ${f(L.minDepthClearanceMm)}` });
-  }
-  // The least cut once: as its own row only when the planned cut is not already it.
-  if (k.leastCut && !(k.cut?.diameterProposed && k.cut.depthProposed)) rows.push({ term: TERM.leastCut, value: `${diameterLabel(k.leastCut.diameterMm, units)} × ${f(k.leastCut.depthMm)} deep` });
-  if (k.thinnestWall) rows.push({ term: TERM.thinnestWall, value: `${f(k.thinnestWall.minWallMm)} at ${k.thinnestWall.label}`, note: `needs ${f(k.thinnestWall.requiredMm)}${k.thinnestWall.ok ? "" : " — too thin"}` });
-  const belowMouth = mouthDiameterMm !== null && k.maxCutDiameterMm < mouthDiameterMm;
-  rows.push({ term: TERM.largestCut, value: diameterLabel(k.maxCutDiameterMm, units), note: belowMouth ? "smaller than the existing mouth: a wall is already below the minimum before any cut" : undefined });
-  const thread = k.studMatch.thread ? `; thread ${k.studMatch.thread.kit} on the kit, ${k.studMatch.thread.case} in the case` : "";
-  rows.push({ term: TERM.studPattern, value: k.studMatch.ok ? "lines up" : `off by ${f(k.studMatch.worstOffsetMm)}`, note: thread ? thread.slice(2) : undefined });
-  rows.push({
-    term: TERM.crankClearance,
-    value: k.crank.checked && k.crank.clearanceMm !== null ? signedLengthLabel(k.crank.clearanceMm, units) : "not checked",
-    note: k.crank.checked ? `needs ${f(k.crank.requiredMm)}` : "the case profile gives no crank chamber",
-  });
-  const d = k.displacementCc;
-  rows.push({ term: TERM.displacement, value: `${d.stockRounded} → ${d.kitRounded} cc`, note: d.crossesClasses.length ? `crosses ${d.crossesClasses.join(", ")} cc: the legal class may change` : `${d.change >= 0 ? "+" : ""}${fixedText(d.change, 1)} cc` });
-  if (k.cut) rows.push({ term: TERM.removed, value: `${volumeLabel(k.removal.volumeMm3, units)}, ${k.removal.massG.toFixed(1)} g` });
+  const rows = resultRows(k, result.limits.values, units, mouthDiameterMm);
   const problems = k.reasons.filter((r) => r !== "needs-cut" && r !== "clears-existing-mouth");
   // A kit that cannot fit leads with the reason that decides it, never with a clearance figure beside the "no".
   const deciding = blockingReasons(k)[0];
