@@ -1,18 +1,13 @@
 import { BufferGeometry, DoubleSide, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
 import { FIT, printed, SCENE, SURFACE } from "@/model/palette";
-import { cutGeometry, FLANGE_DRAWN_MM, fitState, flangeRadiusMm, governingClearanceMm, interferenceGeometry } from "../fit-model";
-import { diameterLabel, lengthLabel, signedLengthLabel } from "@/model/units";
-import { toWorld } from "../solids";
+import { cutGeometry, fitState, interferenceGeometry } from "../fit-model";
 import type { FitSnapshot } from "../store";
+import { placeLabels, STATE_3D } from "./fit-labels";
 import { Label } from "./label";
 import { disposeOverlay, portOverlay, PortOverlayMaterials } from "./port-overlay";
 import { sectionNormal, type ViewState } from "./view";
 
-/** The skirt's colour by clearance band: the palette's (light theme, as the scene is a lit workshop in both themes). */
-export const STATE_3D = { interfere: printed(FIT.interfere), tight: printed(FIT.tight), clear: printed(FIT.clear) } as const;
 const INK = SURFACE.ink.light;
-const LABEL_MM = 4.2;
-const LABEL_CUSTOMER_MM = 7.5;
 
 /**
  * Whether two snapshots draw the same picture in a view: the same study and kit on show with the same result
@@ -109,44 +104,7 @@ export class FitObjects {
     this.hit.geometry = hitGeom ?? new BufferGeometry();
     this.drawPorts(snap);
 
-    const size = v.customer ? LABEL_CUSTOMER_MM : LABEL_MM;
-    const L = this.labels;
-    for (const l of Object.values(L)) l.heightMm = size;
-    const state = fitState(k, result);
-    const Rf = flangeRadiusMm(study.kits[snap.kitIndex], k, study.case.studHoleDiameterMm);
-    const c = governingClearanceMm(k);
-    L.skirt.set(`${FIT[state].icon} skirt ${diameterLabel(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthLabel(c, v.units)}`, STATE_3D[state]);
-    L.skirt.sprite.position.set(...toWorld(-Rf, Rf * 0.6, -k.skirt.gasketMm - FLANGE_DRAWN_MM - size * 1.2));
-    L.skirt.resize();
-    L.cut.sprite.visible = k.cut !== null;
-    if (k.cut) {
-      L.cut.set(`${FIT.counterbore.icon} cut ${diameterLabel(k.cut.diameterMm, v.units)} × ${lengthLabel(k.cut.depthMm, v.units)} deep`, printed(FIT.counterbore));
-      L.cut.sprite.center.set(1, 0.5);
-      L.cut.sprite.position.set(...toWorld(k.cut.diameterMm / 2 + 4, -k.cut.diameterMm * 0.45, k.cut.depthMm + size));
-      L.cut.resize();
-    }
-    const w = k.thinnestWall;
-    L.wall.sprite.visible = this.wallLine.visible = w !== null && k.cut !== null;
-    if (w && k.cut) {
-      const color = w.ok ? INK : printed(FIT.wallLow);
-      L.wall.set(`${w.ok ? "" : `${FIT.wallLow.icon} `}thinnest wall ${lengthLabel(w.minWallMm, v.units)} · ${w.label}`, color);
-      L.wall.sprite.position.set(...toWorld(w.atMm[0], w.atMm[1], -size * 0.9));
-      L.wall.resize();
-      const a = this.wallLine.geometry.getAttribute("position") as Float32BufferAttribute;
-      a.setXYZ(0, ...toWorld(w.cutPointMm[0], w.cutPointMm[1], -0.4));
-      a.setXYZ(1, ...toWorld(w.atMm[0], w.atMm[1], -0.4));
-      a.needsUpdate = true;
-      this.wallLine.geometry.computeBoundingSphere();
-      this.materials.wall.color.set(color);
-    }
-    const worst = k.interference.vsCut ?? (k.cut ? null : k.interference.vsMouth);
-    L.hit.sprite.visible = hitGeom !== null;
-    if (hitGeom) {
-      const at = worst?.atMm ?? [k.skirt.diameterMm / 2, 0];
-      L.hit.set(worst ? `${FIT.interfere.icon} interference ${lengthLabel(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
-      L.hit.sprite.position.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
-      L.hit.resize();
-    }
+    placeLabels(this.labels, this.wallLine, snap, v, hitGeom !== null);
   }
 
   /** Redraws the port overlay when what it is drawn from changed (a cut being dragged seldom changes it). */
