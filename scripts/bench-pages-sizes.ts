@@ -8,6 +8,7 @@ import { gzipSync } from "node:zlib";
 
 /** Pages whose first-load JavaScript is printed, by their route in the build; the light ones have an aim. */
 const SIZED_PAGES: { route: string; light: boolean }[] = [
+  { route: "/bench-floor", light: true },
   { route: "/(auth)/sign-in", light: true },
   { route: "/(shop)/home", light: true },
   { route: "/(shop)/library", light: true },

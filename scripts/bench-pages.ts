@@ -1,8 +1,9 @@
 // The page-load benchmark: `npm run bench:pages [-- --no-build --sizes-only --runs N]`.
 // 1. First-load JavaScript of each page, read from the production build's manifests (bench-pages-sizes.ts).
 // 2. Lighthouse (mobile simulation, bench-pages-lighthouse.ts) on the production build it starts on 127.0.0.1
-//    against a fresh seeded file database: the sign-in page (a light static page of the same server, the
-//    baseline of the same run), /try, the five-kit demo study (signed in as the demo owner) and the consult
+//    against a fresh seeded file database: the framework's floor (a page with no script of its own,
+//    app/bench-floor/page.tsx), the sign-in page (a light static page of the same server, the baseline of the
+//    same run), /try, the five-kit demo study (signed in as the demo owner) and the consult
 //    page of the customer's shared plan (signed in as the demo customer, on a phone's screen). Prints the
 //    performance score, total blocking time, largest contentful paint, layout shift, the longest main-thread
 //    task, the count of tasks over 50 ms and the JavaScript loaded but never used.
@@ -93,7 +94,8 @@ async function main() {
 
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;
-    const env = { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"), PAYMENTS: "off" };
+    // BOREWRIGHT_BENCH_PAGE_FLOOR opens the framework's floor page (app/bench-floor/page.tsx), a 404 otherwise.
+    const env = { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: randomBytes(32).toString("base64url"), PAYMENTS: "off", BOREWRIGHT_BENCH_PAGE_FLOOR: "1" };
     const server = startNext({ port, quiet: true, env });
     children.push(server);
     await waitFor(`${base}/sign-in`, 60_000, server);
@@ -108,6 +110,7 @@ async function main() {
       chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu", "--use-angle=swiftshader", "--enable-unsafe-swiftshader", "--disable-quic"],
     });
     const pages: { name: string; path: string; headers: Record<string, string>; screen?: Screen }[] = [
+      { name: "framework floor", path: "/bench-floor", headers: {} },
       { name: "sign-in (baseline)", path: "/sign-in", headers: {} },
       { name: "/try", path: "/try", headers: {} },
       { name: "study (5 kits)", path: `/studies/${STUDY_ID}`, headers: { cookie: owner } },
