@@ -106,6 +106,6 @@ export function printFigures(rows: PageFigures[][]) {
   console.log("\nWhere the main thread goes (last run): the longest task's script, and the three costliest scripts (evaluation + compile)");
   for (const p of last) console.log(`  ${p.name.padEnd(20)} longest task in ${p.longestTaskIn}; ${p.heaviestScripts.map((h) => `${h.file} ${h.scriptingMs} ms`).join(", ")}`);
   console.log("Aim: /try, the study page and the consult page (on a phone's screen) score at least 90, TBT at most 200 ms, no task over 50 ms during load.");
-  console.log("JS sent: every script of the visit over the wire (gzip); JS parsed: the same uncompressed, parts split off as scripts of their own included.");
+  console.log("JS sent: every script of the visit over the wire (gzip); JS parsed: the same uncompressed.");
   console.log("TBT, LCP and task lengths are Lighthouse's simulation of a mid-range phone (4× CPU slow-down) from what this machine measured: a busy machine inflates them; the framework floor (the root scripts alone) and the sign-in page are the baselines of the same run.");
 }

@@ -111,6 +111,6 @@ export function printSizes(sizes: PageSize[], rootBytes: number, dist: string) {
     console.log(s.route.padEnd(30) + String(s.files).padStart(7) + kB(s.bytes).padStart(10) + kB(s.gzipBytes).padStart(10) + kB(s.ownBytes).padStart(13) + `   ${s.heavy.join(", ") || "none"}${over}`);
   }
   console.log(`The build's root scripts (React DOM, the router, the bundler's runtime), on every page: ${kB(rootBytes)}.`);
-  console.log("A part split off as a script of its own (app/_ui/later.tsx: the studio, the study's editor) is not counted here but is fetched during the first visit too: the Lighthouse table's JS parsed counts every script.");
+  console.log("Code a page fetches after its first scripts (the 3D view, once the page is quiet) is not counted here: the Lighthouse table's JS parsed counts every script of the visit.");
   console.log("Aim: pages without 3D (sign-in, home, library, jobs, settings, studies list) at most 300 kB uncompressed, none of three.js, the polygon booleans, the fit evaluation or the PDF writer.");
 }

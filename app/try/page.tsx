@@ -3,7 +3,7 @@ import Link from "next/link";
 import { evaluateStudy, safeParseStudy } from "@/geometry";
 import example from "@/public/examples/study.json";
 import { Mark } from "../_ui/mark";
-import { TryStudioLater } from "./try-studio-later";
+import { TryStudio } from "./try-studio";
 
 export const metadata: Metadata = {
   title: "Try the fit studio",
@@ -44,7 +44,7 @@ export default function TryPage() {
             {fit.error}
           </p>
         ) : (
-          <TryStudioLater study={fit.study} result={fit.result} />
+          <TryStudio study={fit.study} result={fit.result} />
         )}
       </main>
     </div>

@@ -10,7 +10,7 @@ import { StatusBadge } from "../../jobs/_components/status-badge";
 import { ConsultActions } from "./_components/consult-actions";
 import { ConsultChoices } from "./_components/consult-choices";
 import { ConsultCautions, ConsultPlan, ConsultPrice } from "./_components/consult-plan";
-import { FitForCustomerLater } from "./_components/fit-later";
+import { FitForCustomer } from "./_components/fit";
 
 export const metadata: Metadata = { title: "Your plan" };
 
@@ -37,7 +37,7 @@ export default async function ConsultJobPage({ params, searchParams }: { params:
         <>
           <section aria-label="The fit" className="flex flex-col gap-3">
             <h2 className="text-2xl font-semibold">The fit</h2>
-            <FitForCustomerLater study={plan.study} result={plan.result} units={caller.units} chosenKitId={plan.kitId} />
+            <FitForCustomer study={plan.study} result={plan.result} units={caller.units} chosenKitId={plan.kitId} />
           </section>
           <ConsultChoices kits={plan.result.kits} chosenKitId={plan.kitId} units={caller.units} />
           <ConsultPlan job={job} chosen={chosen} units={caller.units} />

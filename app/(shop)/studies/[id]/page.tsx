@@ -14,7 +14,7 @@ import { settingsKeys } from "../../../_ui/query/settings/keys";
 import { studyKeys } from "../../../_ui/query/studies/keys";
 import type { ListParams, StudyDetail } from "../../../_ui/query/types";
 import { StudyJobs } from "../../jobs/_components/study-jobs";
-import { StudyEditorLater } from "./_components/study-editor-later";
+import { StudyEditor } from "./_components/study-editor";
 
 export const metadata: Metadata = { title: "Study" };
 
@@ -55,7 +55,7 @@ export default async function StudyPage({ params }: { params: Promise<{ id: stri
     <QueryProvider>
       <StudyJobs caller={caller} studyId={id} />
       <HydrationBoundary state={dehydrate(qc)}>
-        <StudyEditorLater id={id} units={caller.units} />
+        <StudyEditor id={id} units={caller.units} />
       </HydrationBoundary>
     </QueryProvider>
   );
