@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { MAX_CASE_CORNERS, MAX_OUTLINE_CORNERS, OutlineSchema, StudySchema } from "../../geometry/schema";
-import { describePolygonProblem, polygonCheck, polygonProblem } from "../../geometry/simplicity";
+import { describePolygonProblem, polygonCheck, polygonProblem, selfIntersections } from "../../geometry/simplicity";
 import { roundStudyInput } from "./fixtures";
 
 type P = [number, number];
@@ -18,6 +18,7 @@ function segmentsMeet(a: P, b: P, c: P, d: P): boolean {
   if (Math.sign(o1) * Math.sign(o2) < 0 && Math.sign(o3) * Math.sign(o4) < 0) return true;
   return onSegment(a, b, c) || onSegment(a, b, d) || onSegment(c, d, a) || onSegment(c, d, b);
 }
+const crossProperly = (a: P, b: P, c: P, d: P) => Math.sign(orient(a, b, c)) * Math.sign(orient(a, b, d)) < 0 && Math.sign(orient(c, d, a)) * Math.sign(orient(c, d, b)) < 0;
 function simpleByBruteForce(pts: P[]): boolean {
   const n = pts.length;
   const key = (p: P) => `${p[0]},${p[1]}`;
@@ -61,11 +62,14 @@ describe("polygon validity by sweep", { timeout: 60_000 }, () => {
         // The sweep decides alone: the pairwise safety net, which would make it O(n²), is never needed.
         expect(method).toBe("sweep");
         seen[expected ? "valid" : "invalid"]++;
-        // An edge pair it names really meets.
+        // An edge pair it names really meets, lower number first, and is called a crossing exactly when the two
+        // edges cross properly (each one's ends strictly on either side of the other's line).
         if (problem && (problem.kind === "edges-cross" || problem.kind === "edges-touch")) {
           const [i, j] = problem.edges;
           const n = pts.length;
+          expect(i).toBeLessThan(j);
           expect(segmentsMeet(pts[i], pts[(i + 1) % n], pts[j], pts[(j + 1) % n])).toBe(true);
+          expect(problem.kind === "edges-cross").toBe(crossProperly(pts[i], pts[(i + 1) % n], pts[j], pts[(j + 1) % n]));
         }
       }),
       { numRuns: 3000 },
@@ -125,5 +129,39 @@ describe("polygon validity by sweep", { timeout: 60_000 }, () => {
     const r = StudySchema.safeParse(input);
     expect(r.success).toBe(false);
     expect(r.error?.issues.map((i) => i.message)).toContain(`the deck, mouth and pockets have ${4 * MAX_OUTLINE_CORNERS} corners together; at most ${MAX_CASE_CORNERS}`);
+  });
+});
+
+describe("each problem of an outline, by name", () => {
+  it("corners on one line, or an outline too small to hold area, have no area", () => {
+    expect(polygonProblem([[0, 0], [10, 0], [20, 0]])).toEqual({ kind: "no-area" });
+    // 0.0001 mm legs: 5·10⁻⁹ mm², under the 10⁻⁶ mm² the core takes as no area, though no edges meet.
+    expect(polygonProblem([[0, 0], [1e-4, 0], [0, 1e-4]])).toEqual({ kind: "no-area" });
+    expect(polygonProblem([[0, 0], [1e-4, 0], [0, 1e-4]], 0)).toBeNull();
+  });
+
+  it("a square traced round twice: corner 5 repeats corner 1", () => {
+    expect(polygonProblem([[0, 0], [10, 0], [10, 10], [0, 10], [0, 0], [10, 0], [10, 10], [0, 10]])).toEqual({ kind: "repeated-corner", first: 0, second: 4 });
+  });
+
+  it("a crossing, a touch and a collinear overlap are named by their edges, lower first", () => {
+    expect(polygonProblem([[0, 0], [10, 10], [10, 0], [0, 10]])).toEqual({ kind: "edges-cross", edges: [0, 2] });
+    // An edge running back along part of another: (10, 5) → (10, 2) over (10, 0) → (10, 10).
+    const p = polygonProblem([[0, 0], [10, 0], [10, 10], [8, 10], [10, 5], [10, 2], [5, 5]]);
+    expect(p?.kind).toBe("edges-touch");
+  });
+
+  it("each problem in words, corners and edges counted from 1", () => {
+    expect(describePolygonProblem({ kind: "repeated-point", corner: 3 }, 4)).toBe("corners 4 and 1 are the same point; remove one of them");
+    expect(describePolygonProblem({ kind: "no-area" }, 3)).toBe("polygon has no area (points are collinear or repeated)");
+    expect(describePolygonProblem({ kind: "repeated-corner", first: 0, second: 4 }, 8)).toBe("corner 5 repeats corner 1: the outline must go round once without coming back to a corner");
+    expect(describePolygonProblem({ kind: "edges-cross", edges: [0, 2] }, 4)).toBe("polygon edges 1 and 3 cross; the outline must not intersect itself");
+  });
+
+  it("the edge pairs that meet, for older callers: none for a simple outline, the pair for a crossing", () => {
+    expect(selfIntersections([[0, 0], [10, 0], [10, 10], [0, 10]])).toEqual([]);
+    expect(selfIntersections([[0, 0], [10, 10], [10, 0], [0, 10]])).toEqual([[0, 2]]);
+    // Corners on one line: the closing edge (20, 0) → (0, 0) runs back over the first.
+    expect(selfIntersections([[0, 0], [10, 0], [20, 0]])).toEqual([[0, 2]]);
   });
 });
