@@ -1,8 +1,9 @@
 // Benchmark of the case-profile form's live plan: opens a case with a 200-corner deck (and two passages)
 // in headless Chromium, tries it against two kits of the library, drags one deck corner in 100 pointer
 // steps and prints the median and p95 time from each pointer move to the DOM showing it and to the next
-// animation frame. In the same run, as baselines: the same drag without the live result, and the same
-// corner moved through its x field with the plan hidden (the form alone). A benchmark, not a test: it
+// animation frame. In the same run, as baselines: the same drag without the live result, a bare element
+// dragged over on the same page (the browser's own floor), and the same corner moved through its x field
+// with the plan hidden (the form alone). A benchmark, not a test: it
 // prints figures and fails only when a step does not show.
 // Needs a production build in NEXT_DIST_DIR (default .next). Usage: npm run bench:capture
 import { randomBytes } from "node:crypto";
@@ -62,9 +63,9 @@ function benchCase(name: string) {
  * plan's markup changed; a keystroke: the form's handlers and React's render ran) and until the next
  * animation frame.
  */
-async function listen(page: Page, type: "pointermove" | "input") {
-  await page.evaluate((kind) => {
-    const host = document.querySelector("form") as HTMLElement;
+async function listen(page: Page, type: "pointermove" | "input", hostSelector = "form") {
+  await page.evaluate(([kind, sel]) => {
+    const host = document.querySelector(sel) as HTMLElement;
     const m = { work: [] as number[], frame: [] as number[], pending: null as number | null };
     window.__capture = m;
     if (kind === "input") {
@@ -86,7 +87,37 @@ async function listen(page: Page, type: "pointermove" | "input") {
       m.work.push(performance.now() - t0);
       requestAnimationFrame(() => m.frame.push(performance.now() - t0));
     }).observe(host, { subtree: true, childList: true, attributes: true, characterData: true });
-  }, type);
+  }, [type, hostSelector] as const);
+}
+
+/**
+ * The floor of the same page: a bare element laid over it whose own pointer-move listener writes one
+ * attribute, dragged over as the corner is and measured the same way. What it takes is the browser's input
+ * path and frame clock on this machine, with nothing of the form.
+ */
+async function dragBare(page: Page, label: string) {
+  await page.evaluate(() => {
+    const el = document.createElement("div");
+    el.id = "bench-floor";
+    el.style.cssText = "position:fixed;left:20px;top:20px;width:400px;height:300px;background:#eee;z-index:99";
+    el.addEventListener("pointermove", (e) => el.setAttribute("data-at", `${e.clientX},${e.clientY}`));
+    document.body.append(el);
+  });
+  const x = 120, y = 120;
+  await page.mouse.move(x, y);
+  await page.mouse.down();
+  await page.mouse.move(x + 4, y);
+  await listen(page, "pointermove", "#bench-floor");
+  for (let i = 1; i <= STEPS; i++) {
+    await page.mouse.move(x + 4 + i * 1.5, y + (i % 2));
+    await page.waitForFunction((n) => (window.__capture?.frame.length ?? 0) >= n, i, { timeout: 10_000 });
+  }
+  await page.mouse.up();
+  const m = await page.evaluate(() => window.__capture);
+  await page.evaluate(() => document.getElementById("bench-floor")?.remove());
+  console.log(`  ${label}:`);
+  console.log(`    pointer move to the element updated: ${fmt(m?.work ?? [])}`);
+  console.log(`    pointer move to the next frame:      ${fmt(m?.frame ?? [])}`);
 }
 
 async function dragCorner(page: Page, label: string) {
@@ -161,6 +192,8 @@ async function main() {
     await page.getByLabel("Kit 2 to try").selectOption({ label: "no kit" });
     await page.getByLabel("Kit 1 to try").selectOption({ label: "no kit" });
     await dragCorner(page, "baseline: the same drag, plan only (no live result)");
+
+    await dragBare(page, "floor: a bare element over the same page, one attribute written per move");
 
     await page.getByRole("button", { name: "Hide the plan" }).click();
     await typeCorner(page, "baseline: the same corner typed into its x field, plan hidden, no live result");
