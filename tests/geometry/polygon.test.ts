@@ -136,8 +136,8 @@ describe("each problem of an outline, by name", () => {
   it("corners on one line, or an outline too small to hold area, have no area", () => {
     expect(polygonProblem([[0, 0], [10, 0], [20, 0]])).toEqual({ kind: "no-area" });
     // 0.0001 mm legs: 5·10⁻⁹ mm², under the 10⁻⁶ mm² the core takes as no area, though no edges meet.
-    expect(polygonProblem([[0, 0], [1e-4, 0], [0, 1e-4]])).toEqual({ kind: "no-area" });
-    expect(polygonProblem([[0, 0], [1e-4, 0], [0, 1e-4]], 0)).toBeNull();
+    expect(polygonProblem([[0, 0], [0.0001, 0], [0, 0.0001]])).toEqual({ kind: "no-area" });
+    expect(polygonProblem([[0, 0], [0.0001, 0], [0, 0.0001]], 0)).toBeNull();
   });
 
   it("a square traced round twice: corner 5 repeats corner 1", () => {
