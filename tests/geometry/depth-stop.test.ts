@@ -98,6 +98,29 @@ describe("depth stop search", { timeout: 60_000 }, () => {
     );
   });
 
+  it("equals the one-by-one search on rigs built for ties: equal grooves, shims that add up to another size, every wanted depth on a 0.05 mm step", () => {
+    // Hand-made rigs where many stacks give the same travel, so each tie-break of the rule above decides.
+    const rigs: Rig[] = [
+      { grooves: [{ label: "a", travelMm: 22 }, { label: "b", travelMm: 22 }], shims: [{ thicknessMm: 0.1, count: 4 }, { thicknessMm: 0.2, count: 2 }] },
+      { grooves: [{ label: "a", travelMm: 22.3 }, { label: "b", travelMm: 22.1 }, { label: "c", travelMm: 22.3 }], shims: [{ thicknessMm: 0.2, count: 3 }, { thicknessMm: 0.1, count: 3 }, { thicknessMm: 0.3, count: 1 }] },
+      { grooves: [{ label: "a", travelMm: 21 }, { label: "b", travelMm: 23 }], shims: [{ thicknessMm: 0.25, count: 4 }, { thicknessMm: 0.5, count: 2 }, { thicknessMm: 1, count: 1 }] },
+      { grooves: [{ label: "only", travelMm: 22 }], shims: [] },
+    ];
+    for (const rig of rigs) {
+      for (let w = 2000; w <= 2320; w += 5) {
+        const wantedMm = w / 100;
+        const got = chooseDepthStop(wantedMm, rig, TOL);
+        const want = bruteForce(wantedMm, rig);
+        const where = `${JSON.stringify(rig)} at ${wantedMm}`;
+        expect([got.reached, got.groove, got.shimCount], where).toEqual([want.reached, want.groove, want.shimCount]);
+        expect(got.shims, where).toEqual(want.shims);
+        expect(got.travelMm, where).toBeCloseTo(want.travelMm, 9);
+        if (got.reached) expectConsistent(got, wantedMm, rig);
+        else expect(got.overshootMm, where).toBeCloseTo(want.travelMm - wantedMm, 9);
+      }
+    }
+  });
+
   it("among equally close stacks takes the fewest shims, then the groove listed first", () => {
     const rig: Rig = {
       grooves: [
