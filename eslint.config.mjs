@@ -23,7 +23,7 @@ const zones = Object.entries(layers).flatMap(([layer, forbidden]) =>
 const config = [
   ...next,
   ...nextTs,
-  { ignores: [".next/**", ".next-*/**", "bench-results/**", "node_modules/**", "data/**", "test-results/**", "next-env.d.ts", "drizzle/**"] },
+  { ignores: [".next/**", ".next-*/**", "bench-results/**", "node_modules/**", "data/**", "test-results/**", "next-env.d.ts", "drizzle/**", ".stryker-tmp/**", "reports/**"] },
   { files: ["**/*.{ts,tsx,mjs}"], rules: { "import/no-restricted-paths": ["error", { zones }] } },
 ];
 
