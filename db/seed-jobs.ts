@@ -110,7 +110,9 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
   const result = evaluateStudy(study);
   const kit = result.kits.find((k) => k.kitId === chosenKitId)!;
   const at = (day: number, hour = 9) => new Date(Date.UTC(2026, 1, day, hour, 0));
-  const plan: PlanSnapshot = { studyId: DEMO_STUDIES[0].id, studyName, kitId: kit.kitId, kitName: kit.name, study, result, takenAt: at(2).toISOString() };
+  // The times of the steps every demo job that reached them shares; the job page and its history show the same time for each.
+  const TIMES = { created: at(1), planned: at(2), quoted: at(2, 11), shared: at(3), approved: at(4), paid: at(4, 12), readings: at(7, 15) };
+  const plan: PlanSnapshot = { studyId: DEMO_STUDIES[0].id, studyName, kitId: kit.kitId, kitName: kit.name, study, result, takenAt: TIMES.planned.toISOString() };
   const { passing, failing, pass, fail } = demoAfterCutReadings(study, result, kit.kitId);
   if (pass.verdict !== "pass" || fail.verdict !== "fail") throw new Error(`demo readings did not verify as meant (${pass.verdict}, ${fail.verdict})`);
 
@@ -132,7 +134,7 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
   ];
   const ids = STATUSES.map((s) => `demo-job-${s}`);
   // Every planned demo job carries the same quote, written when the plan was taken; the approved ones keep it as approved.
-  const quote = demoQuote(kit.kitId, kit.name, at(2, 11), people.builder);
+  const quote = demoQuote(kit.kitId, kit.name, TIMES.quoted, people.builder);
   const quoteJson = JSON.stringify(quote);
   const figures = quoteTotals(quote);
   const deposit = figures.deposit.amountMinor;
@@ -148,10 +150,11 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
       const c = contacts[i];
       const planned = i >= 1;
       const approved = i >= 2;
-      const event = (n: number, kind: string, summary: string, by: Person | null, move?: [string, string], key = String(n)) => ({
+      // An event that has a column of its own (the plan taken, the approval, the payment, the readings) is at that column's time.
+      const event = (n: number, kind: string, summary: string, by: Person | null, move?: [string, string], key = String(n), when = at(1 + n, 10 + i)) => ({
         id: `${id}-e${key}`,
         jobId: id,
-        at: at(1 + n, 10 + i),
+        at: when,
         byId: by?.id ?? null,
         byName: by?.name ?? "payment service",
         kind,
@@ -178,39 +181,39 @@ export async function seedJobs(db: SeedDb, shopId: string, people: { owner: Pers
         approvedQuoteJson: approved ? quoteJson : null,
         depositAmount: planned ? deposit : 5000,
         currency: "eur",
-        paidAt: approved ? at(4, 12) : null,
-        sharedAt: planned ? at(3) : null,
-        approvedAt: approved ? at(4) : null,
+        paidAt: approved ? TIMES.paid : null,
+        sharedAt: planned ? TIMES.shared : null,
+        approvedAt: approved ? TIMES.approved : null,
         approvedById: approved ? (i === 2 ? people.customer.id : people.owner.id) : null,
         approvedByName: approved ? (i === 2 ? people.customer.name : people.owner.name) : null,
         approvalReason: approved && i !== 2 ? "approved by phone" : null,
-        createdAt: at(1),
+        createdAt: TIMES.created,
         updatedAt: at(6 + i),
         createdBy: people.builder.id,
       });
-      const events = [event(0, "created", `opened the job for ${c.name}`, people.builder)];
-      if (planned) events.push(event(1, "status", `planned with ${kit.name} from the study "${studyName}"`, people.builder, ["intake", "planned"]));
-      if (planned) events.push(event(2, "quote", `wrote the quote: total ${formatMoney(figures.total)}, deposit ${formatMoney(figures.deposit)}`, people.builder, undefined, "2q"));
-      if (planned) events.push(event(2, "share", `shared the plan with ${c.name}`, people.builder));
+      const events = [event(0, "created", `opened the job for ${c.name}`, people.builder, undefined, "0", TIMES.created)];
+      if (planned) events.push(event(1, "status", `planned with ${kit.name} from the study "${studyName}"`, people.builder, ["intake", "planned"], "1", TIMES.planned));
+      if (planned) events.push(event(2, "quote", `wrote the quote: total ${formatMoney(figures.total)}, deposit ${formatMoney(figures.deposit)}`, people.builder, undefined, "2q", TIMES.quoted));
+      if (planned) events.push(event(2, "share", `shared the plan with ${c.name}`, people.builder, undefined, "2", TIMES.shared));
       if (approved) {
-        events.push(event(3, "status", i === 2 ? `approved ${quoteWords}` : `approved ${quoteWords} for the customer: approved by phone`, i === 2 ? people.customer : people.owner, ["planned", "approved"]));
-        events.push(event(4, "payment", `deposit paid: ${formatMoney(figures.deposit)}`, null));
+        events.push(event(3, "status", i === 2 ? `approved ${quoteWords}` : `approved ${quoteWords} for the customer: approved by phone`, i === 2 ? people.customer : people.owner, ["planned", "approved"], "3", TIMES.approved));
+        events.push(event(4, "payment", `deposit paid: ${formatMoney(figures.deposit)}`, null, undefined, "4", TIMES.paid));
       }
       if (i >= 3) events.push(event(5, "status", "moved the job from approved to machined", people.builder, ["approved", "machined"]));
-      if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the cut, trial fit)", people.builder));
+      if (i === 3) events.push(event(6, "readings", "recorded after-cut readings: fail (cut diameter, radial clearance to the cut, trial fit)", people.builder, undefined, "6", TIMES.readings));
       if (i >= 4) {
-        events.push(event(6, "readings", "recorded after-cut readings: within the plan", people.builder));
+        events.push(event(6, "readings", "recorded after-cut readings: within the plan", people.builder, undefined, "6", TIMES.readings));
         events.push(event(7, "status", "moved the job from machined to verified", people.builder, ["machined", "verified"]));
       }
       if (i === 5) events.push(event(8, "status", "moved the job from verified to closed", people.owner, ["verified", "closed"]));
       await tx.insert(jobs.jobEvent).values(events);
       if (approved) {
-        await tx.insert(jobs.jobPayment).values({ id: `${id}-deposit`, jobId: id, checkoutSessionId: `cs_demo_${id}`, amount: deposit, currency: "eur", status: "paid", createdAt: at(4, 11), createdById: c.userId ?? people.owner.id, paidAt: at(4, 12) });
+        await tx.insert(jobs.jobPayment).values({ id: `${id}-deposit`, jobId: id, checkoutSessionId: `cs_demo_${id}`, amount: deposit, currency: "eur", status: "paid", createdAt: TIMES.approved, createdById: c.userId ?? people.owner.id, paidAt: TIMES.paid });
       }
       if (i >= 3) {
         const r = i === 3 ? failing : passing;
         const v = i === 3 ? fail : pass;
-        await tx.insert(jobs.jobReading).values({ id: `${id}-readings`, jobId: id, readingsJson: JSON.stringify(r), verificationJson: JSON.stringify(v), verdict: v.verdict, takenAt: at(7, 15), takenById: people.builder.id, takenByName: people.builder.name });
+        await tx.insert(jobs.jobReading).values({ id: `${id}-readings`, jobId: id, readingsJson: JSON.stringify(r), verificationJson: JSON.stringify(v), verdict: v.verdict, takenAt: TIMES.readings, takenById: people.builder.id, takenByName: people.builder.name });
       }
       if (i === 1) {
         await tx.insert(jobs.jobQuestion).values({ id: `${id}-q1`, jobId: id, at: at(3, 18), byId: people.customer.id, byName: people.customer.name, text: "Does the bigger kit change what licence I need for the scooter?" });
