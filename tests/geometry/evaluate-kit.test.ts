@@ -203,6 +203,8 @@ describe("one kit's result, each part", () => {
     expect(asIs.verdict).toBe("fits-as-is");
     expect(asIs.cut).toBeNull();
     expect(asIs.walls).toEqual([]);
+    // Its only warnings: the crank chamber not checked (none given) and the displacement class crossed.
+    expect(asIs.warnings.map((w) => w.code).sort()).toEqual(["crank-chamber-not-checked", "displacement-crosses-class"]);
     for (const cut of [{ diameterMm: 56 }, { depthMm: 25 }]) {
       const k = evaluateStudy(parse({ ...small, cut })).kits[0];
       expect(k.cut).not.toBeNull();
