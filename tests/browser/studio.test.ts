@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { evaluateStudy, parseStudy } from "@/geometry";
 import { fitState } from "@/scene/fit";
 import { me, insertExampleStudy } from "../integration/jobs-support";
-import { newPerson, signInThroughForm } from "../support/browser";
+import { newPerson, signInThroughForm, waitUntilDrawn } from "../support/browser";
 import { DEMO, signIn } from "../support/http";
 
 // The fit studio on the public example page, in Chromium with WebGL on SwiftShader. The verdict
@@ -37,17 +37,7 @@ function coreThresholdMm(from: number): number {
 }
 
 /** Waits until the canvas's last frame shows what the studio asks for (the view, the kit and the cut). */
-async function drawn(timeout = 10_000) {
-  await page.waitForFunction(
-    () => {
-      const view = document.querySelector<HTMLElement>("[data-testid=view]");
-      const canvas = view?.querySelector("canvas");
-      return Boolean(view && canvas && canvas.dataset.drawn === view.dataset.wanted);
-    },
-    undefined,
-    { timeout },
-  );
-}
+const drawn = (timeout = 10_000) => waitUntilDrawn(page, timeout);
 
 /** A 64 × 48 sample of the canvas (RGB) once it shows the current state, taken through a 2D canvas (the WebGL buffer is preserved). */
 async function sample(): Promise<number[]> {
