@@ -7,19 +7,11 @@ import { cutWarnings } from "../../geometry/cut-warnings";
 import type { PlannedCut } from "../../geometry/kit-cut";
 import { resolveLimits } from "../../geometry/resolve-limits";
 import type { Wall } from "../../geometry/wall";
+import { reportedWall } from "./fixtures";
 
 const TOL = 1e-9;
 const L = resolveLimits({ minRadialClearanceMm: 0.5, minDepthClearanceMm: 0.5 }).values;
-const wall = (kind: Wall["kind"], label: string, minWallMm: number, ok: boolean): Wall => ({
-  kind,
-  label,
-  minWallMm,
-  requiredMm: 2,
-  reached: true,
-  ok,
-  atMm: [0, 0],
-  cutPointMm: [0, 0],
-});
+const wall = (kind: Wall["kind"], label: string, minWallMm: number, ok: boolean): Wall => reportedWall(kind, minWallMm, ok, label);
 const planned = (over: { vsCutMm?: number; effectiveMm?: number; depthClearanceMm?: number | null; walls?: Wall[]; throughMouth?: boolean }) =>
   ({
     vsCutMm: over.vsCutMm ?? 0.6,

@@ -1,5 +1,18 @@
 // Invented studies for the tests (no real case, kit or rig).
 import { type Study, type StudyInput, StudySchema } from "../../geometry/index";
+import type { Wall } from "../../geometry/wall";
+
+/** A wall as the core reports one, for the rules that read it (verdict, warnings): 2 mm required, reached, at the origin. */
+export const reportedWall = (kind: Wall["kind"], minWallMm: number, ok: boolean, label: string = kind): Wall => ({
+  kind,
+  label,
+  minWallMm,
+  requiredMm: 2,
+  reached: true,
+  ok,
+  atMm: [0, 0],
+  cutPointMm: [0, 0],
+});
 
 const squareStuds = (half: number) => [
   { label: "a", positionMm: [-half, half] as [number, number] },

@@ -3,18 +3,10 @@
 import { describe, expect, it } from "vitest";
 import { type VerdictInput, cutReasons, decideVerdict } from "../../geometry/verdict";
 import type { Wall } from "../../geometry/wall";
+import { reportedWall } from "./fixtures";
 
 const TOL = 1e-9;
-const wall = (kind: Wall["kind"], minWallMm: number, ok: boolean): Wall => ({
-  kind,
-  label: kind,
-  minWallMm,
-  requiredMm: 2,
-  reached: true,
-  ok,
-  atMm: [0, 0],
-  cutPointMm: [0, 0],
-});
+const wall = (kind: Wall["kind"], minWallMm: number, ok: boolean): Wall => reportedWall(kind, minWallMm, ok);
 const soundCut = { effectiveRadialClearanceMm: 0.6, depthClearanceMm: 0.6, walls: [wall("stud", 3, true)], diameterMm: 56, maxCutDiameterMm: 60 };
 const input = (over: Partial<VerdictInput>): VerdictInput => ({
   studsOk: true,
