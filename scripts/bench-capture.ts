@@ -103,21 +103,25 @@ async function dragBare(page: Page, label: string) {
     el.addEventListener("pointermove", (e) => el.setAttribute("data-at", `${e.clientX},${e.clientY}`));
     document.body.append(el);
   });
-  const x = 120, y = 120;
+  const m = await measuredDrag(page, 120, 120, "#bench-floor");
+  await page.evaluate(() => document.getElementById("bench-floor")?.remove());
+  console.log(`  ${label}:`);
+  console.log(`    pointer move to the element updated: ${fmt(m?.work ?? [])}`);
+  console.log(`    pointer move to the next frame:      ${fmt(m?.frame ?? [])}`);
+}
+
+/** Presses at (x, y), moves 4 px to start the drag, then takes STEPS pointer moves, each waited on until its frame; returns what was measured. */
+async function measuredDrag(page: Page, x: number, y: number, hostSelector?: string) {
   await page.mouse.move(x, y);
   await page.mouse.down();
   await page.mouse.move(x + 4, y);
-  await listen(page, "pointermove", "#bench-floor");
+  await listen(page, "pointermove", hostSelector);
   for (let i = 1; i <= STEPS; i++) {
     await page.mouse.move(x + 4 + i * 1.5, y + (i % 2));
     await page.waitForFunction((n) => (window.__capture?.frame.length ?? 0) >= n, i, { timeout: 10_000 });
   }
   await page.mouse.up();
-  const m = await page.evaluate(() => window.__capture);
-  await page.evaluate(() => document.getElementById("bench-floor")?.remove());
-  console.log(`  ${label}:`);
-  console.log(`    pointer move to the element updated: ${fmt(m?.work ?? [])}`);
-  console.log(`    pointer move to the next frame:      ${fmt(m?.frame ?? [])}`);
+  return page.evaluate(() => window.__capture);
 }
 
 async function dragCorner(page: Page, label: string) {
@@ -125,17 +129,7 @@ async function dragCorner(page: Page, label: string) {
   await handle.scrollIntoViewIfNeeded();
   const box = await handle.boundingBox();
   if (!box) throw new Error("deck corner 1 is not drawn");
-  const x = box.x + box.width / 2, y = box.y + box.height / 2;
-  await page.mouse.move(x, y);
-  await page.mouse.down();
-  await page.mouse.move(x + 4, y);
-  await listen(page, "pointermove");
-  for (let i = 1; i <= STEPS; i++) {
-    await page.mouse.move(x + 4 + i * 1.5, y + (i % 2));
-    await page.waitForFunction((n) => (window.__capture?.frame.length ?? 0) >= n, i, { timeout: 10_000 });
-  }
-  await page.mouse.up();
-  const m = await page.evaluate(() => window.__capture);
+  const m = await measuredDrag(page, box.x + box.width / 2, box.y + box.height / 2);
   console.log(`  ${label}:`);
   console.log(`    pointer move to the plan updated: ${fmt(m?.work ?? [])}`);
   console.log(`    pointer move to the next frame:   ${fmt(m?.frame ?? [])}`);
