@@ -9,7 +9,7 @@ import type { DrawingImportState } from "./use-drawing-import";
 /** The drawing's closed shapes, the one hovered or focused drawn thicker in the caution colour. */
 function DrawingPreview({ view, box, roles, hover }: { view: DrawingRead; box: NonNullable<DrawingImportState["box"]>; roles: Record<string, ShapeRole>; hover: string | null }) {
   return (
-    <svg viewBox={`${box.x} ${box.y} ${box.w} ${box.h}`} className="aspect-square w-full rounded-md border border-rule bg-paper" role="img" aria-label={`The drawing's ${view.shapes.length} closed shapes`}>
+    <svg viewBox={`${box.x} ${box.y} ${box.w} ${box.h}`} className="aspect-square w-full max-w-72 rounded-md border border-rule bg-paper" role="img" aria-label={`The drawing's ${view.shapes.length} closed shapes`}>
       {view.shapes.map((s) => {
         const role = roles[s.id] ?? "unused";
         const color = hover === s.id ? "var(--color-caution)" : role === "unused" ? "var(--color-ink-3)" : "var(--color-accent)";
@@ -29,7 +29,7 @@ export function DrawingImportPicker({ s, view, allowed, units }: { s: DrawingImp
   const { roles, hover, setHover } = s;
   const choices = [...allowed, ...(allowed.includes("unused") ? [] : ["unused" as const])];
   return (
-    <div className="grid gap-4 md:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+    <div className="flex flex-col gap-4">
       {s.box ? <DrawingPreview view={view} box={s.box} roles={roles} hover={hover} /> : null}
       <div className="flex flex-col gap-2">
         <table className="w-full text-sm">
@@ -43,7 +43,7 @@ export function DrawingImportPicker({ s, view, allowed, units }: { s: DrawingImp
                 <td className="py-1 pr-2">{shape.source}</td>
                 <td className="py-1">
                   <label className="sr-only" htmlFor={`drawing-role-${shape.id}`}>What shape {i + 1} ({shape.source}) is</label>
-                  <select id={`drawing-role-${shape.id}`} className="field-input mt-0 py-1" value={roles[shape.id] ?? "unused"} onFocus={() => setHover(shape.id)} onBlur={() => setHover(null)} onChange={(e) => s.setRoles((r) => ({ ...r, [shape.id]: e.target.value as ShapeRole }))}>
+                  <select id={`drawing-role-${shape.id}`} className="field-input mt-0 min-w-32 py-1" value={roles[shape.id] ?? "unused"} onFocus={() => setHover(shape.id)} onBlur={() => setHover(null)} onChange={(e) => s.setRoles((r) => ({ ...r, [shape.id]: e.target.value as ShapeRole }))}>
                     {choices.map((r) => (
                       <option key={r} value={r}>{ROLE_WORDS[r]}</option>
                     ))}
