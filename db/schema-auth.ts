@@ -1,8 +1,13 @@
 import { relations } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
-import { createdAt, updatedAt } from "./schema-time";
+import { createdAt, partOf, timestamp, updatedAt } from "./schema-columns";
 
 // ── Sign-in (the tables the auth library expects) ──────────────────────────────────────────────
+
+/** The person a row belongs to; it goes with the person. */
+const userRef = () => partOf("user_id", () => user.id);
+/** The shop a row belongs to; it goes with the shop. */
+export const shopRef = () => partOf("organization_id", () => organization.id);
 
 export const user = sqliteTable("user", {
   id: text("id").primaryKey(),
@@ -20,15 +25,13 @@ export const session = sqliteTable(
   "session",
   {
     id: text("id").primaryKey(),
-    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    expiresAt: timestamp("expires_at").notNull(),
     token: text("token").notNull().unique(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
     ipAddress: text("ip_address"),
     userAgent: text("user_agent"),
-    userId: text("user_id")
-      .notNull()
-      .references(() => user.id, { onDelete: "cascade" }),
+    userId: userRef(),
     activeOrganizationId: text("active_organization_id"),
   },
   (t) => [index("session_user_idx").on(t.userId)],
@@ -40,14 +43,12 @@ export const account = sqliteTable(
     id: text("id").primaryKey(),
     accountId: text("account_id").notNull(),
     providerId: text("provider_id").notNull(),
-    userId: text("user_id")
-      .notNull()
-      .references(() => user.id, { onDelete: "cascade" }),
+    userId: userRef(),
     accessToken: text("access_token"),
     refreshToken: text("refresh_token"),
     idToken: text("id_token"),
-    accessTokenExpiresAt: integer("access_token_expires_at", { mode: "timestamp_ms" }),
-    refreshTokenExpiresAt: integer("refresh_token_expires_at", { mode: "timestamp_ms" }),
+    accessTokenExpiresAt: timestamp("access_token_expires_at"),
+    refreshTokenExpiresAt: timestamp("refresh_token_expires_at"),
     scope: text("scope"),
     password: text("password"),
     createdAt: createdAt(),
@@ -62,7 +63,7 @@ export const verification = sqliteTable(
     id: text("id").primaryKey(),
     identifier: text("identifier").notNull(),
     value: text("value").notNull(),
-    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    expiresAt: timestamp("expires_at").notNull(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -85,12 +86,8 @@ export const member = sqliteTable(
   "member",
   {
     id: text("id").primaryKey(),
-    organizationId: text("organization_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
-    userId: text("user_id")
-      .notNull()
-      .references(() => user.id, { onDelete: "cascade" }),
+    organizationId: shopRef(),
+    userId: userRef(),
     /** "owner" | "builder" | "customer" */
     role: text("role").notNull().default("builder"),
     createdAt: createdAt(),
@@ -106,17 +103,13 @@ export const invitation = sqliteTable(
   "invitation",
   {
     id: text("id").primaryKey(),
-    organizationId: text("organization_id")
-      .notNull()
-      .references(() => organization.id, { onDelete: "cascade" }),
+    organizationId: shopRef(),
     email: text("email").notNull(),
     role: text("role"),
     status: text("status").notNull().default("pending"),
-    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    expiresAt: timestamp("expires_at").notNull(),
     createdAt: createdAt(),
-    inviterId: text("inviter_id")
-      .notNull()
-      .references(() => user.id, { onDelete: "cascade" }),
+    inviterId: partOf("inviter_id", () => user.id),
   },
   (t) => [index("invitation_org_idx").on(t.organizationId), index("invitation_email_idx").on(t.email)],
 );
@@ -151,12 +144,8 @@ export const memberRelations = relations(member, ({ one }) => ({
   organization: one(organization, { fields: [member.organizationId], references: [organization.id] }),
   user: one(user, { fields: [member.userId], references: [user.id] }),
 }));
-export const sessionRelations = relations(session, ({ one }) => ({
-  user: one(user, { fields: [session.userId], references: [user.id] }),
-}));
-export const accountRelations = relations(account, ({ one }) => ({
-  user: one(user, { fields: [account.userId], references: [user.id] }),
-}));
+export const sessionRelations = relations(session, ({ one }) => ({ user: one(user, { fields: [session.userId], references: [user.id] }) }));
+export const accountRelations = relations(account, ({ one }) => ({ user: one(user, { fields: [account.userId], references: [user.id] }) }));
 export const invitationRelations = relations(invitation, ({ one }) => ({
   organization: one(organization, { fields: [invitation.organizationId], references: [organization.id] }),
   inviter: one(user, { fields: [invitation.inviterId], references: [user.id] }),

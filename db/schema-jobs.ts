@@ -1,16 +1,20 @@
 // Tables for jobs, their readings, photos and payments. Kept apart from schema.ts so the two can grow side by side.
-import { relations, sql } from "drizzle-orm";
-import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { relations } from "drizzle-orm";
+import { index, integer, real, sqliteTable, text, uniqueIndex, type SQLiteColumnBuilderBase } from "drizzle-orm/sqlite-core";
 import { organization, user } from "./schema";
-import { createdByRef, personRef, shopRef } from "./schema-refs";
+import { photoCheck, photoObject } from "./schema-photos";
+import { byWhomAndWhen, createdByRef, personRef, shopRef, version } from "./schema-refs";
+import { createdAt, partOf, timestamp, updatedAt } from "./schema-columns";
 
-const now = () => sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
-
-/** The job a row belongs to; it goes with the job. */
-const jobRef = () =>
-  text("job_id")
-    .notNull()
-    .references(() => job.id, { onDelete: "cascade" });
+/**
+ * A table of a job's parts (its history, readings, photos, payments, questions): each row has its id and its
+ * job, goes with the job, and is listed by job, then by the column `orderBy` when one is named.
+ */
+function partOfJob<Name extends string, Columns extends Record<string, SQLiteColumnBuilderBase>>(name: Name, columns: Columns, orderBy?: keyof Columns & string) {
+  return sqliteTable(name, { id: text("id").primaryKey(), jobId: partOf("job_id", () => job.id), ...columns }, (t) => [
+    index(`${name}_job_idx`).on(t.jobId, ...(orderBy ? [t[orderBy]] : [])),
+  ]);
+}
 
 /**
  * A job: a customer's engine as a work order. The plan (the study's assembled Study and the core's result
@@ -43,9 +47,9 @@ export const job = sqliteTable(
     /** Machining deposit in the smallest currency unit (cents), and its ISO currency code in lower case. */
     depositAmount: integer("deposit_amount").notNull().default(0),
     currency: text("currency").notNull().default("eur"),
-    paidAt: integer("paid_at", { mode: "timestamp_ms" }),
-    sharedAt: integer("shared_at", { mode: "timestamp_ms" }),
-    approvedAt: integer("approved_at", { mode: "timestamp_ms" }),
+    paidAt: timestamp("paid_at"),
+    sharedAt: timestamp("shared_at"),
+    approvedAt: timestamp("approved_at"),
     approvedById: text("approved_by_id"),
     approvedByName: text("approved_by_name"),
     approvalReason: text("approval_reason"),
@@ -56,12 +60,12 @@ export const job = sqliteTable(
     planOverrideReason: text("plan_override_reason"),
     planOverrideById: text("plan_override_by_id"),
     planOverrideByName: text("plan_override_by_name"),
-    planOverrideAt: integer("plan_override_at", { mode: "timestamp_ms" }),
+    planOverrideAt: timestamp("plan_override_at"),
     /** An owner's reason for verifying a job whose after-cut readings are outside the plan; cleared when it goes back to machined. */
     verifyOverrideReason: text("verify_override_reason"),
     verifyOverrideById: text("verify_override_by_id"),
     verifyOverrideByName: text("verify_override_by_name"),
-    verifyOverrideAt: integer("verify_override_at", { mode: "timestamp_ms" }),
+    verifyOverrideAt: timestamp("verify_override_at"),
     /** The shop's quote for the job (model/quote.ts StoredQuote as JSON): lines, the rates it was priced at, the deposit. */
     quoteJson: text("quote_json"),
     /** The quote as the customer (or the owner for them) approved it together with the plan; cleared when the plan goes back to planned. */
@@ -69,9 +73,9 @@ export const job = sqliteTable(
     /** Tolerance for after-cut verification, mm. */
     verifyToleranceMm: real("verify_tolerance_mm").notNull().default(0.05),
     notes: text("notes").notNull().default(""),
-    version: integer("version").notNull().default(1),
-    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
-    updatedAt: integer("updated_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    version: version(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
     createdBy: createdByRef(),
   },
   (t) => [
@@ -82,12 +86,10 @@ export const job = sqliteTable(
 );
 
 /** A job's history: status moves (with the reason when one is needed), shares, readings, payments. */
-export const jobEvent = sqliteTable(
+export const jobEvent = partOfJob(
   "job_event",
   {
-    id: text("id").primaryKey(),
-    jobId: jobRef(),
-    at: integer("at", { mode: "timestamp_ms" }).notNull(),
+    at: timestamp("at").notNull(),
     /** Null for events the payment service reported. */
     byId: text("by_id"),
     byName: text("by_name").notNull(),
@@ -96,85 +98,70 @@ export const jobEvent = sqliteTable(
     toStatus: text("to_status"),
     summary: text("summary").notNull(),
   },
-  (t) => [index("job_event_job_idx").on(t.jobId, t.at)],
+  "at",
 );
 
 /** After-cut readings as recorded (each save is kept), with the verification verdict they gave. */
-export const jobReading = sqliteTable(
+export const jobReading = partOfJob(
   "job_reading",
   {
-    id: text("id").primaryKey(),
-    jobId: jobRef(),
     readingsJson: text("readings_json").notNull(),
     verificationJson: text("verification_json").notNull(),
     verdict: text("verdict").notNull(),
-    takenAt: integer("taken_at", { mode: "timestamp_ms" }).notNull(),
+    takenAt: timestamp("taken_at").notNull(),
     takenById: personRef("taken_by_id"),
     takenByName: text("taken_by_name").notNull(),
   },
-  (t) => [index("job_reading_job_idx").on(t.jobId, t.takenAt)],
+  "takenAt",
 );
 
 /** A photo of a job in object storage. `state`: pending (upload URL issued), ready (checked), refused. */
-export const jobPhoto = sqliteTable(
+export const jobPhoto = partOfJob(
   "job_photo",
   {
-    id: text("id").primaryKey(),
-    jobId: jobRef(),
-    organizationId: shopRef(),
-    objectKey: text("object_key").notNull().unique(),
-    contentType: text("content_type").notNull(),
-    sizeBytes: integer("size_bytes").notNull(),
+    ...photoObject(),
     caption: text("caption").notNull().default(""),
     /** readings | before | after | trial-fit | other */
     kind: text("kind").notNull().default("other"),
     shared: integer("shared", { mode: "boolean" }).notNull().default(false),
-    state: text("state").notNull().default("pending"),
-    refusedReason: text("refused_reason"),
-    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    ...photoCheck(),
+    createdAt: createdAt(),
     createdBy: createdByRef(),
   },
-  (t) => [index("job_photo_job_idx").on(t.jobId, t.state)],
+  "state",
 );
 
 /** A deposit asked of the customer through a hosted checkout; paid only when a signed event says so. */
-export const jobPayment = sqliteTable(
+export const jobPayment = partOfJob(
   "job_payment",
   {
-    id: text("id").primaryKey(),
-    jobId: jobRef(),
     checkoutSessionId: text("checkout_session_id").notNull().unique(),
     /** Smallest currency unit. */
     amount: integer("amount").notNull(),
     currency: text("currency").notNull(),
     /** open | paid */
     status: text("status").notNull().default("open"),
-    createdAt: integer("created_at", { mode: "timestamp_ms" }).notNull().default(now()),
+    createdAt: createdAt(),
     createdById: personRef("created_by_id"),
-    paidAt: integer("paid_at", { mode: "timestamp_ms" }),
+    paidAt: timestamp("paid_at"),
   },
-  (t) => [index("job_payment_job_idx").on(t.jobId)],
 );
 
 /** Payment-service events already handled, so a replayed event changes nothing. */
 export const paymentEvent = sqliteTable("payment_event", {
   id: text("id").primaryKey(),
   type: text("type").notNull(),
-  receivedAt: integer("received_at", { mode: "timestamp_ms" }).notNull(),
+  receivedAt: timestamp("received_at").notNull(),
 });
 
 /** A question the customer asked about the plan, kept on the job (and mailed to the shop). */
-export const jobQuestion = sqliteTable(
+export const jobQuestion = partOfJob(
   "job_question",
   {
-    id: text("id").primaryKey(),
-    jobId: jobRef(),
-    at: integer("at", { mode: "timestamp_ms" }).notNull(),
-    byId: personRef("by_id"),
-    byName: text("by_name").notNull(),
+    ...byWhomAndWhen(),
     text: text("text").notNull(),
   },
-  (t) => [index("job_question_job_idx").on(t.jobId, t.at)],
+  "at",
 );
 
 export const jobRelations = relations(job, ({ many, one }) => ({
@@ -192,8 +179,4 @@ export const jobPaymentRelations = relations(jobPayment, ({ one }) => ({ job: on
 export const jobQuestionRelations = relations(jobQuestion, ({ one }) => ({ job: one(job, { fields: [jobQuestion.jobId], references: [job.id] }) }));
 
 export type JobRecord = typeof job.$inferSelect;
-export type JobEventRecord = typeof jobEvent.$inferSelect;
-export type JobReadingRecord = typeof jobReading.$inferSelect;
 export type JobPhotoRecord = typeof jobPhoto.$inferSelect;
-export type JobPaymentRecord = typeof jobPayment.$inferSelect;
-export type JobQuestionRecord = typeof jobQuestion.$inferSelect;

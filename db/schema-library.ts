@@ -1,48 +1,37 @@
 import { relations } from "drizzle-orm";
-import { index, integer, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
-import { namedShopRow, personRef, rowStamps } from "./schema-refs";
+import { index, integer, sqliteTable, text, uniqueIndex, type SQLiteColumnBuilderBase } from "drizzle-orm/sqlite-core";
+import { partOf } from "./schema-columns";
+import { byWhomAndWhen, namedShopRow, rowStamps } from "./schema-refs";
 
 // ── The shop's library and its studies ─────────────────────────────────────────────────────────
 // Every row belongs to one shop, says who made it, and carries a version that each update must name
 // (a stale version is refused, so no edit is silently overwritten). Shapes the core checks — a case
 // profile, a kit, a rig, a cut plan — are kept as JSON validated by the core's zod schemas on the way in.
 
+/**
+ * A shelf of the library: each row a named entity of one shop, kept as JSON checked by the core's schema
+ * (`data_json`), with the shelf's own columns beside it, listed by shop without the archived ones.
+ */
+function shelf<Name extends string, Columns extends Record<string, SQLiteColumnBuilderBase>>(name: Name, columns: Columns) {
+  return sqliteTable(name, { ...namedShopRow(), dataJson: text("data_json").notNull(), ...columns, ...rowStamps() }, (t) => [
+    index(`${name}_shop_idx`).on(t.organizationId, t.archivedAt),
+  ]);
+}
+
 /** A case profile: deck, mouth, studs, pockets (JSON, without its name), and the mouth readings taken on it. */
-export const caseProfile = sqliteTable(
-  "case_profile",
-  {
-    ...namedShopRow(),
-    dataJson: text("data_json").notNull(),
-    /** Mouth diameter readings: [{ valueMm, takenById, takenByName, takenAt }]. */
-    mouthReadingsJson: text("mouth_readings_json").notNull().default("[]"),
-    ...rowStamps(),
-  },
-  (t) => [index("case_profile_shop_idx").on(t.organizationId, t.archivedAt)],
-);
+export const caseProfile = shelf("case_profile", {
+  /** Mouth diameter readings: [{ valueMm, takenById, takenByName, takenAt }]. */
+  mouthReadingsJson: text("mouth_readings_json").notNull().default("[]"),
+});
 
 /** A cylinder kit: bore, skirt readings, studs, gaskets, price (JSON, without id and name), with who took each skirt reading. */
-export const cylinderKit = sqliteTable(
-  "cylinder_kit",
-  {
-    ...namedShopRow(),
-    dataJson: text("data_json").notNull(),
-    /** { skirtDiameter: Reading[], skirtLength: Reading[] }, one per value in the data's reading lists. */
-    readingsJson: text("readings_json").notNull().default('{"skirtDiameter":[],"skirtLength":[]}'),
-    ...rowStamps(),
-  },
-  (t) => [index("cylinder_kit_shop_idx").on(t.organizationId, t.archivedAt)],
-);
+export const cylinderKit = shelf("cylinder_kit", {
+  /** { skirtDiameter: Reading[], skirtLength: Reading[] }, one per value in the data's reading lists. */
+  readingsJson: text("readings_json").notNull().default('{"skirtDiameter":[],"skirtLength":[]}'),
+});
 
 /** A boring rig: head, bit and its calibrated reach, grooves, shims, drill (JSON, without its name). */
-export const boringRig = sqliteTable(
-  "boring_rig",
-  {
-    ...namedShopRow(),
-    dataJson: text("data_json").notNull(),
-    ...rowStamps(),
-  },
-  (t) => [index("boring_rig_shop_idx").on(t.organizationId, t.archivedAt)],
-);
+export const boringRig = shelf("boring_rig", {});
 
 /** A study: one case, its candidate kits (study_kit), a rig, the cut plan, the holder readings and the study's own limits. */
 export const study = sqliteTable(
@@ -72,9 +61,7 @@ export const study = sqliteTable(
 export const studyKit = sqliteTable(
   "study_kit",
   {
-    studyId: text("study_id")
-      .notNull()
-      .references(() => study.id, { onDelete: "cascade" }),
+    studyId: partOf("study_id", () => study.id),
     kitId: text("kit_id")
       .notNull()
       .references(() => cylinderKit.id, { onDelete: "restrict" }),
@@ -88,12 +75,8 @@ export const studyEvent = sqliteTable(
   "study_event",
   {
     id: text("id").primaryKey(),
-    studyId: text("study_id")
-      .notNull()
-      .references(() => study.id, { onDelete: "cascade" }),
-    at: integer("at", { mode: "timestamp_ms" }).notNull(),
-    byId: personRef("by_id"),
-    byName: text("by_name").notNull(),
+    studyId: partOf("study_id", () => study.id),
+    ...byWhomAndWhen(),
     summary: text("summary").notNull(),
   },
   (t) => [index("study_event_study_idx").on(t.studyId, t.at)],
@@ -109,13 +92,9 @@ export const studyKitRelations = relations(studyKit, ({ one }) => ({
   study: one(study, { fields: [studyKit.studyId], references: [study.id] }),
   kit: one(cylinderKit, { fields: [studyKit.kitId], references: [cylinderKit.id] }),
 }));
-export const studyEventRelations = relations(studyEvent, ({ one }) => ({
-  study: one(study, { fields: [studyEvent.studyId], references: [study.id] }),
-}));
+export const studyEventRelations = relations(studyEvent, ({ one }) => ({ study: one(study, { fields: [studyEvent.studyId], references: [study.id] }) }));
 
 export type CaseProfileRow = typeof caseProfile.$inferSelect;
 export type CylinderKitRow = typeof cylinderKit.$inferSelect;
 export type BoringRigRow = typeof boringRig.$inferSelect;
 export type StudyRow = typeof study.$inferSelect;
-export type StudyKitRow = typeof studyKit.$inferSelect;
-export type StudyEventRow = typeof studyEvent.$inferSelect;

@@ -1,7 +1,21 @@
 import { index, integer, sqliteTable, text } from "drizzle-orm/sqlite-core";
 import { caseProfile } from "./schema-library";
 import { createdByRef, shopRef } from "./schema-refs";
-import { createdAt } from "./schema-time";
+import { createdAt, partOf } from "./schema-columns";
+
+/** A photo's file in object storage: the shop it belongs to, its key there, its type and size. */
+export const photoObject = () => ({
+  organizationId: shopRef(),
+  objectKey: text("object_key").notNull().unique(),
+  contentType: text("content_type").notNull(),
+  sizeBytes: integer("size_bytes").notNull(),
+});
+
+/** Whether a photo's file was checked: pending (upload URL issued), ready (checked), or refused with the reason. */
+export const photoCheck = () => ({
+  state: text("state").notNull().default("pending"),
+  refusedReason: text("refused_reason"),
+});
 
 /**
  * A photo of a case profile's deck, traced over in the case form. The file lives in object storage under
@@ -12,17 +26,11 @@ export const casePhoto = sqliteTable(
   "case_photo",
   {
     id: text("id").primaryKey(),
-    caseId: text("case_id")
-      .notNull()
-      .references(() => caseProfile.id, { onDelete: "cascade" }),
-    organizationId: shopRef(),
-    objectKey: text("object_key").notNull().unique(),
-    contentType: text("content_type").notNull(),
-    sizeBytes: integer("size_bytes").notNull(),
+    caseId: partOf("case_id", () => caseProfile.id),
+    ...photoObject(),
     widthPx: integer("width_px"),
     heightPx: integer("height_px"),
-    state: text("state").notNull().default("pending"),
-    refusedReason: text("refused_reason"),
+    ...photoCheck(),
     /** The reference points the photo was scaled or squared up by (model/schemas/case-photos.ts), JSON; null until set. */
     referenceJson: text("reference_json"),
     createdAt: createdAt(),
