@@ -46,113 +46,25 @@ export interface Meaning {
 /** The clearance bands: the skirt's radial clearance to the case (the mouth or the planned cut). */
 export type Band = "interfere" | "tight" | "clear";
 
-/** The fit code of the 3D view, the plan and the section. */
+/** The fit code of the 3D view, the plan and the section: one meaning a row, its colours in both themes beside its legend. */
 export const FIT = {
-  interfere: {
-    token: "interfere",
-    color: { light: "#b0281c", dark: "#ff8f84" },
-    soft: { light: "#f7dcd8", dark: "#44221f" },
-    shape: "cross-hatch",
-    icon: "✕",
-    name: "Interference",
-    words: "the skirt overlaps case material; drawn solid where it would hit",
-  },
-  tight: {
-    token: "tight",
-    color: { light: "#8a5300", dark: "#f0b44c" },
-    soft: { light: "#f6ead2", dark: "#3d301c" },
-    shape: "hatch",
-    icon: "◐",
-    name: "Tight",
-    words: "the skirt clears, but by less than the shop's minimum",
-  },
-  clear: {
-    token: "clear",
-    color: { light: "#0b6b62", dark: "#4fc4b6" },
-    soft: { light: "#d9eeea", dark: "#193a37" },
-    shape: "open",
-    icon: "○",
-    name: "Clear",
-    words: "the skirt clears by the shop's minimum or more",
-  },
-  counterbore: {
-    token: "counterbore",
-    color: { light: "#1b5ea3", dark: "#7db6f2" },
-    soft: { light: "#dce8f5", dark: "#1d3048" },
-    shape: "dashed-outline",
-    icon: "◌",
-    name: "Planned counterbore",
-    words: "the cut the plan makes, its outline dashed and see-through",
-  },
-  removed: {
-    token: "removed",
-    color: { light: "#5d6312", dark: "#c6cd6a" },
-    soft: { light: "#ecedd2", dark: "#33361a" },
-    shape: "dots",
-    icon: "▦",
-    name: "Removed material",
-    words: "case material the counterbore takes away, dotted",
-  },
-  wallLow: {
-    token: "wall-low",
-    color: { light: "#a01c6c", dark: "#f28bc6" },
-    soft: { light: "#f6dcea", dark: "#42203a" },
-    shape: "thick-dash",
-    icon: "‖",
-    name: "Wall below the minimum",
-    words: "a wall left thinner than the shop's minimum, a thick dashed mark",
-  },
-  port: {
-    token: "port",
-    color: { light: "#7a38a6", dark: "#e0a0f0" },
-    soft: { light: "#eee0f6", dark: "#392645" },
-    shape: "dash-dot-outline",
-    icon: "◇",
-    name: "Kit's port windows",
-    words: "the transfer-port windows of the kit's base gasket, laid over the case",
-  },
-  passage: {
-    token: "passage",
-    color: { light: "#55606b", dark: "#a8b2bc" },
-    soft: { light: "#e6e8ea", dark: "#30363b" },
-    shape: "dotted-outline",
-    icon: "▭",
-    name: "Case passages",
-    words: "the case's transfer passages and pockets at the deck",
-  },
+  interfere: { token: "interfere", color: { light: "#b0281c", dark: "#ff8f84" }, soft: { light: "#f7dcd8", dark: "#44221f" }, shape: "cross-hatch", icon: "✕", name: "Interference", words: "the skirt overlaps case material; drawn solid where it would hit" },
+  tight: { token: "tight", color: { light: "#8a5300", dark: "#f0b44c" }, soft: { light: "#f6ead2", dark: "#3d301c" }, shape: "hatch", icon: "◐", name: "Tight", words: "the skirt clears, but by less than the shop's minimum" },
+  clear: { token: "clear", color: { light: "#0b6b62", dark: "#4fc4b6" }, soft: { light: "#d9eeea", dark: "#193a37" }, shape: "open", icon: "○", name: "Clear", words: "the skirt clears by the shop's minimum or more" },
+  counterbore: { token: "counterbore", color: { light: "#1b5ea3", dark: "#7db6f2" }, soft: { light: "#dce8f5", dark: "#1d3048" }, shape: "dashed-outline", icon: "◌", name: "Planned counterbore", words: "the cut the plan makes, its outline dashed and see-through" },
+  removed: { token: "removed", color: { light: "#5d6312", dark: "#c6cd6a" }, soft: { light: "#ecedd2", dark: "#33361a" }, shape: "dots", icon: "▦", name: "Removed material", words: "case material the counterbore takes away, dotted" },
+  wallLow: { token: "wall-low", color: { light: "#a01c6c", dark: "#f28bc6" }, soft: { light: "#f6dcea", dark: "#42203a" }, shape: "thick-dash", icon: "‖", name: "Wall below the minimum", words: "a wall left thinner than the shop's minimum, a thick dashed mark" },
+  port: { token: "port", color: { light: "#7a38a6", dark: "#e0a0f0" }, soft: { light: "#eee0f6", dark: "#392645" }, shape: "dash-dot-outline", icon: "◇", name: "Kit's port windows", words: "the transfer-port windows of the kit's base gasket, laid over the case" },
+  passage: { token: "passage", color: { light: "#55606b", dark: "#a8b2bc" }, soft: { light: "#e6e8ea", dark: "#30363b" }, shape: "dotted-outline", icon: "▭", name: "Case passages", words: "the case's transfer passages and pockets at the deck" },
 } as const satisfies Record<string, Meaning>;
 
 export type FitMeaning = keyof typeof FIT;
 
 /** The three verdicts: their own colours and glyphs, apart from the clearance bands (cannot fit is the one red). */
 export const VERDICT_COLOURS: Readonly<Record<Verdict, Meaning>> = {
-  "fits-as-is": {
-    token: "verdict-fits",
-    color: { light: "#2f6a1c", dark: "#92d677" },
-    soft: { light: "#e0efd8", dark: "#22361b" },
-    shape: "solid",
-    icon: "✓",
-    name: "Fits as it is",
-    words: "the kit fits the case's mouth without a cut",
-  },
-  "fits-after-cut": {
-    token: "verdict-after-cut",
-    color: { light: "#4b45a8", dark: "#b0adf7" },
-    soft: { light: "#e5e3f7", dark: "#2d2b4a" },
-    shape: "solid",
-    icon: "◎",
-    name: "Fits after the cut",
-    words: "the kit fits once the planned counterbore is cut",
-  },
-  "cannot-fit": {
-    token: "verdict-cannot",
-    color: FIT.interfere.color,
-    soft: FIT.interfere.soft,
-    shape: "cross-hatch",
-    icon: "⊘",
-    name: "Cannot fit safely",
-    words: "no cut this case can take makes the kit fit safely",
-  },
+  "fits-as-is": { token: "verdict-fits", color: { light: "#2f6a1c", dark: "#92d677" }, soft: { light: "#e0efd8", dark: "#22361b" }, shape: "solid", icon: "✓", name: "Fits as it is", words: "the kit fits the case's mouth without a cut" },
+  "fits-after-cut": { token: "verdict-after-cut", color: { light: "#4b45a8", dark: "#b0adf7" }, soft: { light: "#e5e3f7", dark: "#2d2b4a" }, shape: "solid", icon: "◎", name: "Fits after the cut", words: "the kit fits once the planned counterbore is cut" },
+  "cannot-fit": { token: "verdict-cannot", color: FIT.interfere.color, soft: FIT.interfere.soft, shape: "cross-hatch", icon: "⊘", name: "Cannot fit safely", words: "no cut this case can take makes the kit fit safely" },
 };
 
 /** The page's neutral surfaces and ink, the brand accent (graphite, no fit colour), the caution boxes and plain success and error. */
@@ -237,10 +149,14 @@ export function cssVariables(theme: Theme): Record<string, string> {
   return out;
 }
 
-/** The stylesheet's declarations of a theme, one a line, for pasting into app/globals.css. */
-export function cssDeclarations(theme: Theme, indent = "  "): string {
-  return Object.entries(cssVariables(theme))
-    .map(([k, v]) => `${indent}${k}: ${v};`)
+/**
+ * The stylesheet's declarations, one a line, for pasting into app/globals.css: each property once, its two
+ * colours in CSS's `light-dark()`, which follows the `color-scheme` of the element that paints with it.
+ */
+export function cssDeclarations(indent = "  "): string {
+  const dark = cssVariables("dark");
+  return Object.entries(cssVariables("light"))
+    .map(([k, v]) => `${indent}${k}: light-dark(${v}, ${dark[k]});`)
     .join("\n");
 }
 

@@ -31,6 +31,9 @@ afterAll(async () => {
 });
 
 type Scheme = "light" | "dark";
+
+/** A #rrggbb colour as the browser's computed style writes it, `rgb(r, g, b)`. */
+const rgbOf = (hex: string) => `rgb(${[1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)).join(", ")})`;
 type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
 
 type Walk = {
@@ -141,9 +144,15 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await page.goto("/try");
     await page.getByTestId("view").waitFor();
     await check("example studio");
-    // Every colour of the palette reaches the page in this scheme (the legend's swatches paint with them).
-    const expected = cssVariables(scheme);
-    const onPage = await page.evaluate((names) => names.map((n) => getComputedStyle(document.documentElement).getPropertyValue(n).trim().toLowerCase()), Object.keys(expected));
+    // Every colour of the palette reaches the page in this scheme (the legend's swatches paint with them): an
+    // element painted with each property shows the scheme's colour of it.
+    const expected = Object.fromEntries(Object.entries(cssVariables(scheme)).map(([k, hex]) => [k, rgbOf(hex)]));
+    const onPage = await page.evaluate((names) => {
+      const probe = document.body.appendChild(document.createElement("span"));
+      const painted = names.map((n) => ((probe.style.color = `var(${n})`), getComputedStyle(probe).color));
+      probe.remove();
+      return painted;
+    }, Object.keys(expected));
     expect(Object.fromEntries(Object.keys(expected).map((k, i) => [k, onPage[i]]))).toEqual(expected);
     await keyboardThroughStudio(page);
     await page.goto("/sign-in");

@@ -25,30 +25,32 @@ const AA_TEXT = 4.5;
 const AA_GRAPHIC = 3;
 const GROUNDS = ["paper", "paper-2", "card"] as const;
 
-/** The custom properties declared in a CSS block of the stylesheet. */
-function declared(block: string): Record<string, string> {
-  return Object.fromEntries([...block.matchAll(/(--color-[a-z0-9-]+):\s*(#[0-9a-f]{6})\s*;/gi)].map((m) => [m[1], m[2].toLowerCase()]));
+/** The colour custom properties the stylesheet declares, each as its light and dark value (`--x: light-dark(#l, #d);`). */
+function declared(css: string): Record<Theme, Record<string, string>> {
+  const found = [...css.matchAll(/(--color-[a-z0-9-]+):\s*light-dark\(\s*(#[0-9a-f]{6})\s*,\s*(#[0-9a-f]{6})\s*\)\s*;/gi)];
+  return {
+    light: Object.fromEntries(found.map((m) => [m[1], m[2].toLowerCase()])),
+    dark: Object.fromEntries(found.map((m) => [m[1], m[3].toLowerCase()])),
+  };
 }
 
 describe("the stylesheet's colours are the palette's", () => {
   const css = readFileSync(join(ROOT, "app/globals.css"), "utf8");
-  const theme = css.slice(css.indexOf("@theme"), css.indexOf("}", css.indexOf("@theme")));
-  const darkStart = css.indexOf("@media (prefers-color-scheme: dark)");
-  const dark = css.slice(darkStart, css.indexOf("}", darkStart));
 
-  it("the light theme declares exactly the palette's light colours", () => {
-    expect(declared(theme)).toEqual(cssVariables("light"));
+  it.each(THEMES)("the %s theme's colours are exactly the palette's", (t) => {
+    expect(declared(css)[t]).toEqual(cssVariables(t));
   });
 
-  it("the dark theme declares exactly the palette's dark colours", () => {
-    expect(darkStart).toBeGreaterThan(0);
-    expect(declared(dark)).toEqual(cssVariables("dark"));
+  it("each colour property is declared once, in the theme, as its light and dark pair", () => {
+    const theme = css.slice(css.indexOf("@theme"), css.indexOf("}", css.indexOf("@theme")));
+    const everywhere = [...css.matchAll(/(--color-[a-z0-9-]+)\s*:/g)].map((m) => m[1]);
+    expect(everywhere.sort()).toEqual(Object.keys(cssVariables("light")).sort());
+    expect(declared(theme).light).toEqual(cssVariables("light"));
   });
 
-  it("the printed setup card keeps the light colours on a dark screen", () => {
-    const start = css.indexOf(".setup-card {");
-    expect(start).toBeGreaterThan(darkStart);
-    expect(declared(css.slice(start, css.indexOf("}", start)))).toEqual(cssVariables("light"));
+  it("the page follows the system's scheme and the printed setup card stays light on a dark screen", () => {
+    expect(css).toMatch(/:root\s*\{\s*color-scheme:\s*light dark;/);
+    expect(css).toMatch(/\.setup-card\s*\{\s*color-scheme:\s*light;/);
   });
 });
 
