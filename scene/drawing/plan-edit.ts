@@ -61,112 +61,172 @@ export function frameOf(s: EditShapes): Frame {
   return { minX: Math.min(b.minX, 0) - m, maxX: Math.max(b.maxX, 0) + m * 1.6, minY: -Math.max(b.maxY, 0) - m, maxY: -Math.min(b.minY, 0) + m };
 }
 
-/** The editable plan of a profile's shapes, with its frame. */
-export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: Frame } {
+/** The drawing's parts in the order they are stacked: the shapes and labels, the clickable edges, the handles, the problems. */
+type Layers = { body: string[]; edges: string[]; handles: string[]; notes: string[] };
+
+/** What every step of the editable plan draws with: the options, the frame, the text and handle sizes, the problems by key. */
+interface Pen {
+  readonly o: EditOptions;
+  readonly f: Frame;
+  /** Text size and handle radius, in mm, from the frame's size. */
+  readonly fs: number;
+  readonly hr: number;
+  readonly words: { deck: string; mouth: string; pocket: string };
+  /** The first problem of each key. */
+  readonly bad: ReadonlyMap<string, string>;
+  readonly out: Layers;
+}
+
+function penFor(s: EditShapes, o: EditOptions): Pen {
   const f = o.frame ?? frameOf(s);
   const w = f.maxX - f.minX, h = f.maxY - f.minY;
-  const fs = Math.max(2.2, Math.min(w, h) / 40);
-  const hr = Math.max(0.8, Math.min(w, h) / 110);
-  const words = o.words ?? WORDS;
   const bad = new Map<string, string>();
   for (const i of o.issues ?? []) if (!bad.has(i.at)) bad.set(i.at, i.message);
-  const mark = (key: string) => (bad.has(key) ? { stroke: INK.interfere, "stroke-width": 0.6 } : within(o.highlight, key) ? { stroke: INK.accent, "stroke-width": 0.6 } : {});
-  const body: string[] = [];
-  const edges: string[] = [];
-  const handles: string[] = [];
-  const notes: string[] = [];
+  return {
+    o,
+    f,
+    fs: Math.max(2.2, Math.min(w, h) / 40),
+    hr: Math.max(0.8, Math.min(w, h) / 110),
+    words: o.words ?? WORDS,
+    bad,
+    out: { body: [], edges: [], handles: [], notes: [] },
+  };
+}
 
-  // Origin and axes (the cylinder axis at the deck; x right, y up).
-  body.push(el("path", { d: `M${n(f.minX)} 0H${n(f.maxX)}M0 ${n(f.minY)}V${n(f.maxY)}`, stroke: INK.ink3, "stroke-width": 0.15, "stroke-dasharray": "3 1.5" }));
-  body.push(text(f.maxX - fs * 0.6, -fs * 0.4, "x", fs, { "text-anchor": "end", fill: INK.ink2 }));
-  body.push(text(fs * 0.4, f.minY + fs * 1.2, "y", fs, { fill: INK.ink2 }));
+/** The stroke of a shape: red with a problem, the accent while it or one of its points is highlighted. */
+const mark = (pen: Pen, key: string) =>
+  pen.bad.has(key) ? { stroke: INK.interfere, "stroke-width": 0.6 } : within(pen.o.highlight, key) ? { stroke: INK.accent, "stroke-width": 0.6 } : {};
 
-  const note = (key: string, at: Vec2) => {
-    const msg = bad.get(key);
-    if (msg) notes.push(text(at[0], at[1], msg, fs * 0.85, { fill: INK.interfere, "data-issue": key }));
-  };
-  const point = (key: string, kind: string, at: Vec2, label: string) => {
-    const [x, y] = flip(at);
-    const on = o.highlight === key || o.selected === key;
-    handles.push(
-      el("circle", {
-        cx: x,
-        cy: y,
-        r: on ? hr * 1.4 : hr,
-        fill: on ? INK.accent : "#ffffff",
-        stroke: bad.has(key.split(":")[0]) ? INK.interfere : INK.accent,
-        "stroke-width": hr * 0.35,
-        tabindex: 0,
-        role: "button",
-        "aria-roledescription": "movable point",
-        "aria-label": `${label}: x ${lengthLabel(at[0], o.units)}, y ${lengthLabel(at[1], o.units)}`,
-        "aria-pressed": o.selected === key ? "true" : undefined,
-        "data-key": key,
-        "data-kind": kind,
-      }),
-    );
-  };
-  const outlineHandles = (key: string, word: string, out: ShapeOutline) => {
-    if (out.kind === "circle") {
-      if (o.fixedCircles?.includes(key)) return;
-      const c = out.centerMm ?? [0, 0];
-      point(`${key}:edge`, "radius", [c[0] + out.diameterMm / 2, c[1]], `${word} edge (diameter ${diameterLabel(out.diameterMm, o.units)})`);
-      return;
-    }
-    const pts = out.pointsMm;
-    pts.forEach((p, i) => {
-      const q = pts[(i + 1) % pts.length];
-      const [x1, y1] = flip(p), [x2, y2] = flip(q);
-      if (!o.dragging) edges.push(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge" }));
-      point(`${key}:${i}`, "corner", p, `${word} corner ${i + 1}`);
-    });
-  };
-  const topRight = (out: ShapeOutline): Vec2 => {
-    const b = bounds([outlineRing(out)]);
-    return [b.maxX + fs * 0.5, -b.maxY - fs * 0.4];
-  };
+/** A point's accessible name: what it is and where, in the reader's units. */
+const pointName = (label: string, at: Vec2, units: LengthUnits) => `${label}: x ${lengthLabel(at[0], units)}, y ${lengthLabel(at[1], units)}`;
 
-  if (s.deck) {
-    const ring = outlineRing(s.deck);
-    body.push(deckLayer(ring, { "data-key": "deck", ...mark("deck") }));
-    outlineHandles("deck", words.deck, s.deck);
-    note("deck", topRight(s.deck));
-    const b = bounds([ring]);
-    body.push(hdim(b.minX, b.maxX, -b.maxY - fs * 2.2, -b.maxY, -b.maxY, lengthLabel(b.maxX - b.minX, o.units), fs * 0.9));
-    body.push(vdim(b.maxX + fs * 2.2, -b.maxY, -b.minY, b.maxX, lengthLabel(b.maxY - b.minY, o.units), fs * 0.9));
+/** Origin and axes (the cylinder axis at the deck; x right, y up). */
+function drawAxes({ f, fs, out }: Pen) {
+  out.body.push(el("path", { d: `M${n(f.minX)} 0H${n(f.maxX)}M0 ${n(f.minY)}V${n(f.maxY)}`, stroke: INK.ink3, "stroke-width": 0.15, "stroke-dasharray": "3 1.5" }));
+  out.body.push(text(f.maxX - fs * 0.6, -fs * 0.4, "x", fs, { "text-anchor": "end", fill: INK.ink2 }));
+  out.body.push(text(fs * 0.4, f.minY + fs * 1.2, "y", fs, { fill: INK.ink2 }));
+}
+
+/** The problem of `key` in words, at `at`. */
+function drawNote(pen: Pen, key: string, at: Vec2) {
+  const msg = pen.bad.get(key);
+  if (msg) pen.out.notes.push(text(at[0], at[1], msg, pen.fs * 0.85, { fill: INK.interfere, "data-issue": key }));
+}
+
+/** A handle: a focusable circle named by its point, larger and filled while highlighted or picked. */
+function drawPoint({ o, hr, bad, out }: Pen, key: string, kind: string, at: Vec2, label: string) {
+  const [x, y] = flip(at);
+  const on = o.highlight === key || o.selected === key;
+  out.handles.push(
+    el("circle", {
+      cx: x,
+      cy: y,
+      r: on ? hr * 1.4 : hr,
+      fill: on ? INK.accent : "#ffffff",
+      stroke: bad.has(key.split(":")[0]) ? INK.interfere : INK.accent,
+      "stroke-width": hr * 0.35,
+      tabindex: 0,
+      role: "button",
+      "aria-roledescription": "movable point",
+      "aria-label": pointName(label, at, o.units),
+      "aria-pressed": o.selected === key ? "true" : undefined,
+      "data-key": key,
+      "data-kind": kind,
+    }),
+  );
+}
+
+/** The handles of an outline: a circle's edge (unless its diameter is fixed), or every corner with the edge after it. */
+function drawOutlineHandles(pen: Pen, key: string, word: string, out: ShapeOutline) {
+  const { o, hr } = pen;
+  if (out.kind === "circle") {
+    if (o.fixedCircles?.includes(key)) return;
+    const c = out.centerMm ?? [0, 0];
+    drawPoint(pen, `${key}:edge`, "radius", [c[0] + out.diameterMm / 2, c[1]], `${word} edge (diameter ${diameterLabel(out.diameterMm, o.units)})`);
+    return;
   }
-  s.pockets.forEach((p, i) => {
+  const pts = out.pointsMm;
+  pts.forEach((p, i) => {
+    const q = pts[(i + 1) % pts.length];
+    const [x1, y1] = flip(p), [x2, y2] = flip(q);
+    if (!o.dragging) pen.out.edges.push(el("line", { x1, y1, x2, y2, stroke: "transparent", "stroke-width": hr * 2, "data-key": `${key}~${i}`, "data-kind": "edge" }));
+    drawPoint(pen, `${key}:${i}`, "corner", p, `${word} corner ${i + 1}`);
+  });
+}
+
+/** Where a shape's problem is written: beside its top right corner. */
+function topRight(fs: number, out: ShapeOutline): Vec2 {
+  const b = bounds([outlineRing(out)]);
+  return [b.maxX + fs * 0.5, -b.maxY - fs * 0.4];
+}
+
+/** The deck with its handles, its problem and its width and length dimensioned. */
+function drawDeck(pen: Pen, deck: ShapeOutline) {
+  const { o, fs, out } = pen;
+  const ring = outlineRing(deck);
+  out.body.push(deckLayer(ring, { "data-key": "deck", ...mark(pen, "deck") }));
+  drawOutlineHandles(pen, "deck", pen.words.deck, deck);
+  drawNote(pen, "deck", topRight(fs, deck));
+  const b = bounds([ring]);
+  out.body.push(hdim(b.minX, b.maxX, -b.maxY - fs * 2.2, -b.maxY, -b.maxY, lengthLabel(b.maxX - b.minX, o.units), fs * 0.9));
+  out.body.push(vdim(b.maxX + fs * 2.2, -b.maxY, -b.minY, b.maxX, lengthLabel(b.maxY - b.minY, o.units), fs * 0.9));
+}
+
+/** Each pocket that can be read, with its handles, its name in its middle and its problem. */
+function drawPockets(pen: Pen, pockets: EditShapes["pockets"]) {
+  const { fs, words, out } = pen;
+  pockets.forEach((p, i) => {
     if (!p.outline) return;
     const key = `pockets.${i}`;
-    body.push(pocketLayer(outlineRing(p.outline), p.startDepthMm, { "data-key": key, ...mark(key) }));
-    outlineHandles(key, `${words.pocket} ${i + 1}`, p.outline);
+    out.body.push(pocketLayer(outlineRing(p.outline), p.startDepthMm, { "data-key": key, ...mark(pen, key) }));
+    drawOutlineHandles(pen, key, `${words.pocket} ${i + 1}`, p.outline);
     const b = bounds([outlineRing(p.outline)]);
-    body.push(text((b.minX + b.maxX) / 2, -(b.minY + b.maxY) / 2 + fs * 0.3, p.label || `${words.pocket} ${i + 1}`, fs * 0.75, { "text-anchor": "middle", fill: INK.ink2 }));
-    note(key, topRight(p.outline));
+    out.body.push(text((b.minX + b.maxX) / 2, -(b.minY + b.maxY) / 2 + fs * 0.3, p.label || `${words.pocket} ${i + 1}`, fs * 0.75, { "text-anchor": "middle", fill: INK.ink2 }));
+    drawNote(pen, key, topRight(fs, p.outline));
   });
-  if (s.mouth) {
-    body.push(mouthLayer(outlineRing(s.mouth), { "data-key": "mouth", ...mark("mouth") }));
-    outlineHandles("mouth", words.mouth, s.mouth);
-    if (s.mouth.kind === "circle") body.push(text(s.mouth.centerMm?.[0] ?? 0, -(s.mouth.centerMm?.[1] ?? 0) + s.mouth.diameterMm / 4, `${words.mouth} ${diameterLabel(s.mouth.diameterMm, o.units)}`, fs * 0.85, { "text-anchor": "middle", fill: INK.ink2 }));
-    note("mouth", topRight(s.mouth));
-  }
+}
+
+/** The mouth with its handles, a round mouth's diameter written inside it, and its problem. */
+function drawMouth(pen: Pen, mouth: ShapeOutline) {
+  const { o, fs, words, out } = pen;
+  out.body.push(mouthLayer(outlineRing(mouth), { "data-key": "mouth", ...mark(pen, "mouth") }));
+  drawOutlineHandles(pen, "mouth", words.mouth, mouth);
+  if (mouth.kind === "circle") out.body.push(text(mouth.centerMm?.[0] ?? 0, -(mouth.centerMm?.[1] ?? 0) + mouth.diameterMm / 4, `${words.mouth} ${diameterLabel(mouth.diameterMm, o.units)}`, fs * 0.85, { "text-anchor": "middle", fill: INK.ink2 }));
+  drawNote(pen, "mouth", topRight(fs, mouth));
+}
+
+/** Each stud that can be read, labelled, with its handle and problem; the pattern's spans dimensioned. */
+function drawStuds(pen: Pen, s: EditShapes) {
+  const { o, fs, hr, bad, out } = pen;
   const hole = (s.studHoleDiameterMm ?? 0) > 0 ? (s.studHoleDiameterMm as number) / 2 : hr * 2;
   const studs = s.studs.map((st, i) => [st, i] as const).filter((x): x is readonly [{ label: string; positionMm: [number, number] }, number] => x[0] !== null);
   for (const [st, i] of studs) {
     const key = `studs.${i}`;
-    body.push(studHoleLayer(st.positionMm, hole, { "data-key": key, ...mark(key) }));
-    body.push(text(st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] - hole - fs * 0.2, st.label || `stud ${i + 1}`, fs * 0.8, { fill: bad.has(key) ? INK.interfere : INK.ink2 }));
-    if (!o.fixedStuds) point(key, "stud", st.positionMm, `stud ${st.label || i + 1}`);
-    note(key, [st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] + hole + fs]);
+    out.body.push(studHoleLayer(st.positionMm, hole, { "data-key": key, ...mark(pen, key) }));
+    out.body.push(text(st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] - hole - fs * 0.2, st.label || `stud ${i + 1}`, fs * 0.8, { fill: bad.has(key) ? INK.interfere : INK.ink2 }));
+    if (!o.fixedStuds) drawPoint(pen, key, "stud", st.positionMm, `stud ${st.label || i + 1}`);
+    drawNote(pen, key, [st.positionMm[0] + hole + fs * 0.3, -st.positionMm[1] + hole + fs]);
   }
   if (studs.length > 1) {
     const xs = studs.map(([st]) => st.positionMm[0]), ys = studs.map(([st]) => st.positionMm[1]);
     const x0 = Math.min(...xs), x1 = Math.max(...xs), y0 = Math.min(...ys), y1 = Math.max(...ys);
-    if (x1 - x0 > 1) body.push(hdim(x0, x1, -y0 + fs * 2.4, -y0, -y0, `studs ${lengthLabel(x1 - x0, o.units)}`, fs * 0.85, INK.ink2));
-    if (y1 - y0 > 1) body.push(vdim(x0 - fs * 2.4, -y1, -y0, x0, lengthLabel(y1 - y0, o.units), fs * 0.85, INK.ink2));
+    if (x1 - x0 > 1) out.body.push(hdim(x0, x1, -y0 + fs * 2.4, -y0, -y0, `studs ${lengthLabel(x1 - x0, o.units)}`, fs * 0.85, INK.ink2));
+    if (y1 - y0 > 1) out.body.push(vdim(x0 - fs * 2.4, -y1, -y0, x0, lengthLabel(y1 - y0, o.units), fs * 0.85, INK.ink2));
   }
-  body.push(el("circle", { cx: 0, cy: 0, r: hr * 0.6, fill: INK.ink2 }));
-  const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, w, h, body.join("") + edges.join("") + handles.join("") + notes.join(""), "group");
+}
+
+/** The editable plan of a profile's shapes, with its frame. */
+export function editDrawing(s: EditShapes, o: EditOptions): Drawing & { frame: Frame } {
+  const pen = penFor(s, o);
+  const { f, hr, out } = pen;
+  drawAxes(pen);
+  if (s.deck) drawDeck(pen, s.deck);
+  drawPockets(pen, s.pockets);
+  if (s.mouth) drawMouth(pen, s.mouth);
+  drawStuds(pen, s);
+  out.body.push(el("circle", { cx: 0, cy: 0, r: hr * 0.6, fill: INK.ink2 }));
+  const markup = out.body.join("") + out.edges.join("") + out.handles.join("") + out.notes.join("");
+  const d = sheet(o.title ?? "Plan at the deck, as entered", f.minX, f.minY, f.maxX - f.minX, f.maxY - f.minY, markup, "group");
   return { ...d, frame: f };
 }
 
@@ -183,7 +243,7 @@ export function dragPatch(s: EditShapes, key: string, atMm: Vec2, units: LengthU
   const handle = (label: string, at: Vec2): DragPatch => ({
     key,
     part: "handle",
-    attrs: { cx: n(flip(at)[0]), cy: n(flip(at)[1]), "aria-label": `${label}: x ${lengthLabel(at[0], units)}, y ${lengthLabel(at[1], units)}` },
+    attrs: { cx: n(flip(at)[0]), cy: n(flip(at)[1]), "aria-label": pointName(label, at, units) },
   });
   const stud = /^studs\.(\d+)$/.exec(key);
   if (stud) {
