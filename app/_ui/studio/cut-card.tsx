@@ -42,33 +42,25 @@ export function CutCard({ study, result, kit, units, following, onChange }: Prop
   if (r.reach) marks.unshift({ label: `rig reaches ${diameterLabel(r.reach.min, units)} – ${lengthLabel(r.reach.max, units)}`, fromMm: r.reach.min, toMm: r.reach.max, tone: "accent" });
   const dNow = kit.cut?.diameterMm ?? least?.diameterMm ?? kit.skirt.diameterMm;
   const zNow = kit.cut?.depthMm ?? least?.depthMm ?? Math.max(1, kit.skirt.protrusionMm);
+  // One slider a length of the cut: what it is called, where it stands and ranges, and what it says of the least cut.
+  const sliders = [
+    {
+      part: "diameterMm",
+      label: TERM.cutDiameter.label,
+      testId: "cut-diameter",
+      valueMm: dNow,
+      minMm: r.dMin,
+      maxMm: r.dMax,
+      marks,
+      hint: least ? `${following ? "Least cut, followed: " : "Least that clears this kit: "}${lengthLabel(least.diameterMm, units)}; it ${stepNote(kit, units)}.` : undefined,
+    },
+    { part: "depthMm", label: TERM.cutDepth.label, testId: "cut-depth", valueMm: zNow, minMm: r.zMin, maxMm: r.zMax, marks: undefined, hint: least ? `Least for this kit: ${lengthLabel(least.depthMm, units)}` : undefined },
+  ] as const;
   return (
     <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label={TERM.plannedCut.label}>
-      <CutSlider
-        label={TERM.cutDiameter.label}
-        testId="cut-diameter"
-        valueMm={dNow}
-        minMm={r.dMin}
-        maxMm={r.dMax}
-        stepMm={STEP_MM}
-        units={units}
-        marks={marks}
-        hint={least ? `${following ? "Least cut, followed: " : "Least that clears this kit: "}${lengthLabel(least.diameterMm, units)}; it ${stepNote(kit, units)}.` : undefined}
-        onLive={(mm, at) => onChange({ diameterMm: mm }, false, at)}
-        onCommit={(mm) => onChange({ diameterMm: mm }, true)}
-      />
-      <CutSlider
-        label={TERM.cutDepth.label}
-        testId="cut-depth"
-        valueMm={zNow}
-        minMm={r.zMin}
-        maxMm={r.zMax}
-        stepMm={STEP_MM}
-        units={units}
-        hint={least ? `Least for this kit: ${lengthLabel(least.depthMm, units)}` : undefined}
-        onLive={(mm, at) => onChange({ depthMm: mm }, false, at)}
-        onCommit={(mm) => onChange({ depthMm: mm }, true)}
-      />
+      {sliders.map(({ part, ...slider }) => (
+        <CutSlider key={part} {...slider} stepMm={STEP_MM} units={units} onLive={(mm, at) => onChange({ [part]: mm }, false, at)} onCommit={(mm) => onChange({ [part]: mm }, true)} />
+      ))}
       <div className="flex flex-wrap items-center gap-2 md:col-span-2">
         {least && (
           <button type="button" className="btn-quiet" aria-pressed={following} onClick={() => onChange({ diameterMm: undefined, depthMm: undefined }, true)} data-testid="use-least-cut">

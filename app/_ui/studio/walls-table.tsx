@@ -1,6 +1,9 @@
 import type { LengthUnits, WallResult } from "@/geometry";
 import { TERM } from "@/model/glossary";
 import { lengthLabel } from "@/model/units";
+import { HeadRow, type HeadColumn } from "../table/head-row";
+
+const HEAD: readonly HeadColumn[] = ["Where", { label: "Left", className: "text-right" }, { label: "Required", className: "text-right" }, { label: "State", className: "pl-3" }];
 
 const KIND: Record<WallResult["kind"], string> = { stud: TERM.sealingLand.short, pocket: TERM.wallToPocket.short, outline: TERM.wallToOutside.label };
 
@@ -9,14 +12,7 @@ export function WallsTable({ walls, units }: { walls: WallResult[]; units: Lengt
   if (walls.length === 0) return <p className="text-sm text-ink-2">No cut, so no wall is touched.</p>;
   return (
     <table className="w-full text-sm" aria-label="Walls left by the cut" data-testid="walls">
-      <thead className="text-left text-ink-2">
-        <tr>
-          <th className="py-1 font-medium">Where</th>
-          <th className="py-1 text-right font-medium">Left</th>
-          <th className="py-1 text-right font-medium">Required</th>
-          <th className="py-1 pl-3 font-medium">State</th>
-        </tr>
-      </thead>
+      <HeadRow className="text-left text-ink-2" cellClassName="py-1 font-medium" columns={HEAD} />
       <tbody>
         {walls.map((w) => {
           const broken = w.minWallMm < 0;

@@ -61,6 +61,8 @@ const COLUMNS = [
   ["status", "Status"],
   ["updatedAt", "Last change"],
 ] as const;
+/** The columns after the sortable ones: the board does not sort by them. */
+const PLAIN_COLUMNS = ["Kit", "Deposit", "Verification"] as const;
 
 const VERIFICATION_WORDS: Record<string, string> = { pass: "within the plan", fail: "outside the plan" };
 
@@ -83,9 +85,11 @@ export function JobsTable({ items, query, link, zone }: { items: JobPage["items"
                 </th>
               );
             })}
-            <th className="px-3 py-2 font-medium">Kit</th>
-            <th className="px-3 py-2 font-medium">Deposit</th>
-            <th className="px-3 py-2 font-medium">Verification</th>
+            {PLAIN_COLUMNS.map((label) => (
+              <th key={label} className="px-3 py-2 font-medium">
+                {label}
+              </th>
+            ))}
           </tr>
         </thead>
         <tbody>

@@ -5,11 +5,14 @@ import type { LengthUnits } from "@/geometry";
 import { dateText } from "@/model/dates";
 import { diameterLabel, lengthLabel } from "@/model/units";
 import { createColumnHelper, type ColumnDef } from "@tanstack/react-table";
+import type { ReactNode } from "react";
 import type { CaseRow, KitRow, LibraryKind, RigRow, RowBase } from "../../../_ui/query/types";
 import { changedColumn, nameColumn } from "../../../_ui/table/row-columns";
 
-function common<T extends RowBase>(kind: LibraryKind, zone: string) {
-  return { name: nameColumn<T>("Name", (r) => `/library/${kind}/${r.id}`), updated: changedColumn<T>((at) => dateText(at, zone)) };
+/** A shelf's columns: the row's name first, when it last changed last, and the shelf's own columns between. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- column value types differ per column
+function shelfColumns<T extends RowBase>(kind: LibraryKind, zone: string, own: ColumnDef<T, any>[]): ColumnDef<T, unknown>[] {
+  return [nameColumn<T>("Name", (r) => `/library/${kind}/${r.id}`), ...own, changedColumn<T>((at) => dateText(at, zone))] as ColumnDef<T, unknown>[];
 }
 
 const num = (text: string) => <span className="num">{text}</span>;
@@ -19,69 +22,50 @@ function lengthColumn<T>(id: string, header: string, get: (row: T) => number, un
   return createColumnHelper<T>().accessor(get, { id, header, cell: (c) => num(lengthLabel(c.getValue(), units)) });
 }
 
+/** A column worked out from the whole row, not sortable. */
+function shownColumn<T>(id: string, header: string, cell: (row: T) => ReactNode) {
+  return createColumnHelper<T>().display({ id, header, cell: ({ row }) => cell(row.original) });
+}
+
 /** How many of something the row's data holds (studs, pockets, grooves). */
 function countColumn<T>(id: string, header: string, count: (row: T) => number) {
-  return createColumnHelper<T>().display({ id, header, cell: ({ row }) => num(String(count(row.original))) });
+  return shownColumn<T>(id, header, (row) => num(String(count(row))));
 }
 
 export function caseColumns(units: LengthUnits, zone: string): ColumnDef<CaseRow, unknown>[] {
-  const h = createColumnHelper<CaseRow>();
-  const c = common<CaseRow>("cases", zone);
-  return [
-    c.name,
-    h.display({
-      id: "mouth",
-      header: "Mouth",
-      cell: ({ row }) => {
-        const o = row.original.data.mouth.outline;
-        return o.kind === "circle" ? num(diameterLabel(o.diameterMm, units)) : <span>polygon, {o.pointsMm.length} corners</span>;
-      },
+  return shelfColumns<CaseRow>("cases", zone, [
+    shownColumn<CaseRow>("mouth", "Mouth", (r) => {
+      const o = r.data.mouth.outline;
+      return o.kind === "circle" ? num(diameterLabel(o.diameterMm, units)) : <span>polygon, {o.pointsMm.length} corners</span>;
     }),
     countColumn<CaseRow>("studs", "Studs", (r) => r.data.studs.length),
     lengthColumn<CaseRow>("stockBoreMm", "Stock bore", (r) => r.data.stockBoreMm, units),
     lengthColumn<CaseRow>("strokeMm", "Stroke", (r) => r.data.strokeMm, units),
     countColumn<CaseRow>("pockets", "Pockets", (r) => r.data.pockets?.length ?? 0),
-    c.updated,
-  ] as ColumnDef<CaseRow, unknown>[];
+  ]);
 }
 
 export function kitColumns(units: LengthUnits, zone: string): ColumnDef<KitRow, unknown>[] {
-  const h = createColumnHelper<KitRow>();
-  const c = common<KitRow>("kits", zone);
-  return [
-    c.name,
+  return shelfColumns<KitRow>("kits", zone, [
     lengthColumn<KitRow>("boreMm", "Bore", (r) => r.data.boreMm, units),
-    h.display({
-      id: "skirt",
-      header: "Skirt ⌀ (largest)",
-      cell: ({ row }) => {
-        const r = row.original.data.skirtDiameterReadingsMm;
-        return (
-          <span className="num">
-            {lengthLabel(Math.max(...r), units)} <span className="text-ink-3">({r.length} reading{r.length === 1 ? "" : "s"})</span>
-          </span>
-        );
-      },
+    shownColumn<KitRow>("skirt", "Skirt ⌀ (largest)", (row) => {
+      const r = row.data.skirtDiameterReadingsMm;
+      return (
+        <span className="num">
+          {lengthLabel(Math.max(...r), units)} <span className="text-ink-3">({r.length} reading{r.length === 1 ? "" : "s"})</span>
+        </span>
+      );
     }),
     countColumn<KitRow>("studs", "Studs", (r) => r.data.studs.length),
-    h.accessor((r) => r.data.price?.amountMinor, { id: "price", header: "Price", cell: (c) => num(c.row.original.data.price ? formatMoney(c.row.original.data.price) : "—") }),
-    c.updated,
-  ] as ColumnDef<KitRow, unknown>[];
+    createColumnHelper<KitRow>().accessor((r) => r.data.price?.amountMinor, { id: "price", header: "Price", cell: (c) => num(c.row.original.data.price ? formatMoney(c.row.original.data.price) : "—") }),
+  ]);
 }
 
 export function rigColumns(units: LengthUnits, zone: string): ColumnDef<RigRow, unknown>[] {
-  const h = createColumnHelper<RigRow>();
-  const c = common<RigRow>("rigs", zone);
-  return [
-    c.name,
+  return shelfColumns<RigRow>("rigs", zone, [
     lengthColumn<RigRow>("headDiameterMm", "Head ⌀", (r) => r.data.headDiameterMm, units),
-    h.display({
-      id: "reach",
-      header: "Calibrated reach",
-      cell: ({ row }) => num(`${lengthLabel(row.original.data.calibration.minCutDiameterMm, units)} – ${lengthLabel(row.original.data.calibration.maxCutDiameterMm, units)}`),
-    }),
+    shownColumn<RigRow>("reach", "Calibrated reach", (r) => num(`${lengthLabel(r.data.calibration.minCutDiameterMm, units)} – ${lengthLabel(r.data.calibration.maxCutDiameterMm, units)}`)),
     countColumn<RigRow>("grooves", "Grooves", (r) => r.data.grooves.length),
-    h.display({ id: "rpm", header: "Drill top speed", cell: ({ row }) => num(`${row.original.data.drillTopRpm} rpm`) }),
-    c.updated,
-  ] as ColumnDef<RigRow, unknown>[];
+    shownColumn<RigRow>("rpm", "Drill top speed", (r) => num(`${r.data.drillTopRpm} rpm`)),
+  ]);
 }
