@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { diskPolygonArea, pointInPolygon, pointToPolygonBoundary, polygonInsideDisk, signedArea } from "../../geometry/polygon";
+import { expectSides } from "./point-sides";
 
 type P = [number, number];
 
@@ -30,23 +31,11 @@ describe("polygon measures on hand-checked figures", () => {
 
   it("point in polygon: inside, outside, on an edge or a corner (inside), on an edge's line beyond it (outside)", () => {
     for (const sq of [ccw, cw]) {
-      expect(pointInPolygon([2, 2], sq)).toBe(true);
-      expect(pointInPolygon([5, 2], sq)).toBe(false);
-      expect(pointInPolygon([-1, 2], sq)).toBe(false);
-      expect(pointInPolygon([2, 5], sq)).toBe(false);
-      expect(pointInPolygon([2, -1], sq)).toBe(false);
-      expect(pointInPolygon([4, 2], sq)).toBe(true);
-      expect(pointInPolygon([2, 0], sq)).toBe(true);
-      expect(pointInPolygon([0, 0], sq)).toBe(true);
-      expect(pointInPolygon([4, 4], sq)).toBe(true);
-      expect(pointInPolygon([6, 0], sq)).toBe(false);
-      expect(pointInPolygon([0, 6], sq)).toBe(false);
-      expect(pointInPolygon([-2, 4], sq)).toBe(false);
+      // Inside, on an edge, on a corner; outside, and on an edge's line beyond the square.
+      expectSides((p) => pointInPolygon(p, sq), [[2, 2], [4, 2], [2, 0], [0, 0], [4, 4]], [[5, 2], [-1, 2], [2, 5], [2, -1], [6, 0], [0, 6], [-2, 4]]);
     }
-    expect(pointInPolygon([5, 5], u)).toBe(false); // in the notch
-    expect(pointInPolygon([1, 5], u)).toBe(true);
-    expect(pointInPolygon([8, 5], u)).toBe(true);
-    expect(pointInPolygon([5, 2], u)).toBe(true);
+    // (5, 5) is in the notch.
+    expectSides((p) => pointInPolygon(p, u), [[1, 5], [8, 5], [5, 2]], [[5, 5]]);
   });
 
   it("distance to the boundary, the nearest point and inside, for either winding", () => {

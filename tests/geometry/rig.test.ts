@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { bitLengthWindowMm, checkBit, cutDiameterFromSettingMm, cutterSettingMm, hardwareClearanceMm } from "../../geometry/rig";
 import { chooseDepthStop, depthStopWorkBound, searchDepthStop } from "../../geometry/depth-stop";
 import { spindleSpeed } from "../../geometry/speed";
+import { testRig } from "./fixtures";
 
 const TOL = 1e-9;
 // A bit cut down to 35 mm reaching 52.5–62 mm, and a cutter setting read across head and bit: common practice,
@@ -43,16 +44,8 @@ describe("rotating hardware", () => {
 });
 
 describe("depth stop", () => {
-  const rig = {
-    grooves: [
-      { label: "g1", travelMm: 22 },
-      { label: "g2", travelMm: 26 },
-    ],
-    shims: [
-      { thicknessMm: 0.1, count: 5 },
-      { thicknessMm: 0.5, count: 4 },
-    ],
-  };
+  // Grooves at 22 and 26 mm; five 0.1 mm and four 0.5 mm shims.
+  const rig = { grooves: testRig.grooves, shims: testRig.shims };
 
   it("picks the groove and shims whose travel is at or just above the wanted depth", () => {
     const s = chooseDepthStop(25.2, rig, TOL);

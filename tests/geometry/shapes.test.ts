@@ -1,24 +1,8 @@
 import { describe, expect, it } from "vitest";
-import {
-  CaptureSchema,
-  ShapeParamsSchema,
-  arcSegments,
-  arcSlot,
-  boltCircleStuds,
-  chamferedRectangle,
-  circleOutline,
-  insideRing,
-  mirrorOutline,
-  outlineFromParams,
-  outlineProblem,
-  radialRectangle,
-  rectangularStudPattern,
-  roundedRectangle,
-  shapeIssues,
-  studsFromParams,
-} from "../../geometry/shapes";
+import { CaptureSchema, ShapeParamsSchema, arcSegments, arcSlot, boltCircleStuds, chamferedRectangle, circleOutline, insideRing, mirrorOutline, outlineFromParams, outlineProblem, radialRectangle, rectangularStudPattern, roundedRectangle, shapeIssues, studsFromParams } from "../../geometry/shapes";
 import { signedArea } from "../../geometry/polygon";
 import { CaseProfileSchema } from "../../geometry/schema";
+import { expectSides } from "./point-sides";
 
 // The expected points below are worked by hand (plane trigonometry: x = r·cos θ, y = r·sin θ), written
 // beside each check; the sagitta formula s = r·(1 − cos(φ/2)) for a chord of angle φ is the textbook
@@ -294,31 +278,17 @@ describe("inside a ring (even-odd ray casting)", () => {
   const diamond: [number, number][] = [[20, 15], [25, 20], [20, 25], [15, 20]];
 
   it("tells inside from outside in a concave ring", () => {
-    expect(insideRing([11, 11], L)).toBe(true);
-    expect(insideRing([15, 12], L)).toBe(true);
-    expect(insideRing([11, 17], L)).toBe(true);
-    expect(insideRing([14, 16], L)).toBe(false);
-    expect(insideRing([9, 12], L)).toBe(false);
-    expect(insideRing([17, 12], L)).toBe(false);
-    expect(insideRing([11, 19], L)).toBe(false);
+    expectSides((p) => insideRing(p, L), [[11, 11], [15, 12], [11, 17]], [[14, 16], [9, 12], [17, 12], [11, 19]]);
   });
 
   it("points level with a corner, inside and on either side outside", () => {
-    expect(insideRing([20, 20], diamond)).toBe(true);
-    expect(insideRing([24, 20], diamond)).toBe(true);
-    expect(insideRing([10, 20], diamond)).toBe(false);
-    expect(insideRing([30, 20], diamond)).toBe(false);
-    expect(insideRing([20, 14], diamond)).toBe(false);
-    expect(insideRing([20, 26], diamond)).toBe(false);
+    expectSides((p) => insideRing(p, diamond), [[20, 20], [24, 20]], [[10, 20], [30, 20], [20, 14], [20, 26]]);
   });
 
   it("near a slanted edge: just inside and just outside", () => {
-    // The diamond's edge from (20, 15) to (25, 20) is x − y = 5; at y = 17 it is at x = 22.
-    expect(insideRing([21.9, 17], diamond)).toBe(true);
-    expect(insideRing([22.1, 17], diamond)).toBe(false);
-    // The edge from (15, 20) to (20, 25) is y − x = 5; at y = 23 it is at x = 18.
-    expect(insideRing([18.1, 23], diamond)).toBe(true);
-    expect(insideRing([17.9, 23], diamond)).toBe(false);
+    // The diamond's edge from (20, 15) to (25, 20) is x − y = 5; at y = 17 it is at x = 22. The edge from (15, 20)
+    // to (20, 25) is y − x = 5; at y = 23 it is at x = 18.
+    expectSides((p) => insideRing(p, diamond), [[21.9, 17], [18.1, 23]], [[22.1, 17], [17.9, 23]]);
   });
 });
 
@@ -383,5 +353,12 @@ describe("what is wrong with a shape, each case", () => {
     const mouth = { kind: "circle" as const, diameterMm: 20, centerMm: [20, 10] as [number, number] };
     const issues = shapeIssues({ deck, mouth, studs: [{ positionMm: [25, 12] }, { positionMm: [-25, -12] }], pockets: [] });
     expect(issues).toEqual([{ at: "studs.0", message: "stud 1 is inside the mouth" }]);
+  });
+
+  it("a stud centred exactly on a round mouth's edge is not called inside it: only a centre strictly inside is", () => {
+    // Ø20 mouth about (20, 10): (30, 10) and (20, 20) are 10 mm from its centre, exactly on its edge; (29.9, 10) is inside.
+    const mouth = { kind: "circle" as const, diameterMm: 20, centerMm: [20, 10] as [number, number] };
+    const issues = shapeIssues({ deck, mouth, studs: [{ positionMm: [30, 10] }, { positionMm: [20, 20] }, { positionMm: [29.9, 10] }], pockets: [] });
+    expect(issues).toEqual([{ at: "studs.2", message: "stud 3 is inside the mouth" }]);
   });
 });

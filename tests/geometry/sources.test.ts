@@ -1,13 +1,7 @@
 // Checks of the core against sources outside the project. Each check names its source beside it.
 import { describe, expect, it } from "vitest";
 import Matrix, { solve } from "ml-matrix";
-import {
-  DEFAULT_CASE_DENSITY_G_PER_CM3,
-  DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN,
-  DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN,
-  DEFAULT_MIN_DEPTH_CLEARANCE_MM,
-  LimitsSchema,
-} from "../../geometry/index";
+import { DEFAULT_CASE_DENSITY_G_PER_CM3, DEFAULT_CUTTING_SPEED_MAX_M_PER_MIN, DEFAULT_CUTTING_SPEED_MIN_M_PER_MIN, DEFAULT_MIN_DEPTH_CLEARANCE_MM, LimitsSchema, evaluateStudy } from "../../geometry/index";
 import { bitLengthWindowMm, bitReachMm, cutterSettingMm } from "../../geometry/rig";
 import { depthClearance, skirtProtrusionMm } from "../../geometry/depth";
 import { MM_PER_INCH, inToMm, toFractionalInches } from "../../geometry/units";
@@ -17,7 +11,6 @@ import { removal } from "../../geometry/removal";
 import { minorDiameterMm, parseMetricThread } from "../../geometry/threads";
 import { lensArea } from "../../geometry/lens";
 import { fitPlane } from "../../geometry/alignment";
-import { evaluateStudy } from "../../geometry/index";
 import { parse, roundStudyInput } from "./fixtures";
 
 describe("cutter setting", () => {

@@ -1,26 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import {
-  angleLabel,
-  areaLabel,
-  boundLabel,
-  diameterLabel,
-  ftPerMinToMPerMin,
-  lengthFieldText,
-  lengthLabel,
-  lengthPdf,
-  messageInUnits,
-  mPerMinToFtPerMin,
-  parseLengthText,
-  parseNumberText,
-  recordMmText,
-  roundedMm,
-  signedLengthLabel,
-  soldByFractionLabel,
-  speedLabel,
-  tickText,
-  volumeLabel,
-} from "@/model/units";
+import { angleLabel, areaLabel, boundLabel, diameterLabel, ftPerMinToMPerMin, lengthFieldText, lengthLabel, lengthPdf, messageInUnits, mPerMinToFtPerMin, parseLengthText, parseNumberText, recordMmText, roundedMm, signedLengthLabel, soldByFractionLabel, speedLabel, tickText, volumeLabel } from "@/model/units";
 
 // The inch is exactly 25.4 mm and the foot exactly 12 in (NBS Circular 572 Addendum, 1959 international
 // yard and pound agreement); every inch figure below follows from that.
