@@ -79,6 +79,16 @@ export const LIMIT_TERM: Readonly<Record<LimitName, { label: string; short: stri
   displacementClassesCc: { label: "Legal-class limits", short: "legal-class limits", hint: "A result that crosses one is flagged; local rules decide." },
 };
 
+/** What a study's save state is called where the studio shows it: saved, unsaved, saving, or refused and why. */
+export const SAVE_STATE = {
+  saved: "All changes saved",
+  unsaved: "Unsaved changes",
+  saving: "Saving…",
+  invalid: "Not saved: fix the marked fields",
+  conflict: "Not saved: someone else changed this study",
+  error: "Not saved",
+} as const;
+
 /** The limits a study takes at their defaults, named in words: "radial clearance, holder rocking". */
 export function defaultedLimitsText(keys: readonly string[]): string {
   return keys.map((k) => (k in LIMIT_TERM ? LIMIT_TERM[k as LimitName].short : k)).join(", ");
