@@ -5,7 +5,7 @@ import { SAVE_STATE } from "@/model/glossary";
 import { useShopTimeZone } from "../../../../_ui/query/settings/use-shop-settings";
 import type { SaveStatus } from "./use-autosave";
 
-/** The look of a save the server refused, whatever the reason. */
+/** The look of a change that was not saved, whatever the reason. */
 const REFUSED = { cls: "text-error", dot: "bg-error" };
 
 /** Each state's colours; its words are the glossary's. */
