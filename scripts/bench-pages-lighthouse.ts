@@ -1,6 +1,7 @@
 // Lighthouse on one page of the running production build, and the table of its figures. Part of
 // `npm run bench:pages`. Mobile simulation (the package's default: a mid-range phone, 4× CPU slow-down, a
 // slow 4G link); a page may name its own phone-sized screen.
+import { writeFileSync } from "node:fs";
 import lighthouse from "lighthouse";
 
 /** A screen for the page (CSS pixels and density); without one, Lighthouse's own mobile screen (412 × 823 at 1.75). */
@@ -31,7 +32,8 @@ export type PageFigures = {
 
 type Audit = { numericValue?: number; details?: { items?: Record<string, unknown>[]; overallSavingsBytes?: number } };
 
-export async function lighthousePage(name: string, url: string, port: number, headers: Record<string, string>, screen: Screen = DEFAULT_SCREEN): Promise<PageFigures> {
+/** Lighthouse on one page; with `reportFile`, its whole report (JSON) is written there too. */
+export async function lighthousePage(name: string, url: string, port: number, headers: Record<string, string>, screen: Screen = DEFAULT_SCREEN, reportFile?: string): Promise<PageFigures> {
   const result = await lighthouse(url, {
     port,
     output: "json",
@@ -44,6 +46,7 @@ export async function lighthousePage(name: string, url: string, port: number, he
   if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
   const lhr = result.lhr;
   if (lhr.runtimeError) throw new Error(`Lighthouse on ${url}: ${lhr.runtimeError.code} ${lhr.runtimeError.message}`);
+  if (reportFile) writeFileSync(reportFile, JSON.stringify(lhr));
   const final = new URL(lhr.finalDisplayedUrl);
   if (final.pathname !== new URL(url).pathname) throw new Error(`${url} ended at ${final.pathname} (not signed in?)`);
   const audit = (id: string) => lhr.audits[id] as Audit | undefined;

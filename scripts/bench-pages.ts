@@ -1,4 +1,4 @@
-// The page-load benchmark: `npm run bench:pages [-- --no-build --sizes-only --runs N]`.
+// The page-load benchmark: `npm run bench:pages [-- --no-build --sizes-only --runs N --pages try,study --reports]`.
 // 1. First-load JavaScript of each page, read from the production build's manifests (bench-pages-sizes.ts).
 // 2. Lighthouse (mobile simulation, bench-pages-lighthouse.ts) on the production build it starts on 127.0.0.1
 //    against a fresh seeded file database: the framework's floor (a page with no script of its own,
@@ -7,6 +7,8 @@
 //    page of the customer's shared plan (signed in as the demo customer, on a phone's screen). Prints the
 //    performance score, total blocking time, largest contentful paint, layout shift, the longest main-thread
 //    task, the count of tasks over 50 ms and the JavaScript loaded but never used.
+// `--pages` measures only the named pages (floor, sign-in, try, study, consult; the floor always, as the baseline
+// of the run); `--reports` keeps each page's whole Lighthouse report of the last run in bench-results/lighthouse/.
 // A benchmark, not a test: it reports, and fails only when the server or a page does. On a busy machine
 // every Lighthouse figure is worse; compare pages with the baseline of the same run, and read the load
 // average and Lighthouse's own CPU benchmark index printed beside them.
@@ -39,6 +41,11 @@ const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
 
 function flag(name: string): boolean {
   return process.argv.includes(`--${name}`);
+}
+
+function textArg(name: string): string | null {
+  const i = process.argv.indexOf(`--${name}`);
+  return i >= 0 ? (process.argv[i + 1] ?? null) : null;
 }
 
 function numberArg(name: string, fallback: number): number {
@@ -109,20 +116,26 @@ async function main() {
       userDataDir: join(dir, "chromium"),
       chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu", "--use-angle=swiftshader", "--enable-unsafe-swiftshader", "--disable-quic"],
     });
-    const pages: { name: string; path: string; headers: Record<string, string>; screen?: Screen }[] = [
-      { name: "framework floor", path: "/bench-floor", headers: {} },
-      { name: "sign-in (baseline)", path: "/sign-in", headers: {} },
-      { name: "/try", path: "/try", headers: {} },
-      { name: "study (5 kits)", path: `/studies/${STUDY_ID}`, headers: { cookie: owner } },
-      { name: "consult (phone)", path: `/consult/${CONSULT_JOB_ID}`, headers: { cookie: customer }, screen: PHONE },
+    const every: { key: string; name: string; path: string; headers: Record<string, string>; screen?: Screen }[] = [
+      { key: "floor", name: "framework floor", path: "/bench-floor", headers: {} },
+      { key: "sign-in", name: "sign-in (baseline)", path: "/sign-in", headers: {} },
+      { key: "try", name: "/try", path: "/try", headers: {} },
+      { key: "study", name: "study (5 kits)", path: `/studies/${STUDY_ID}`, headers: { cookie: owner } },
+      { key: "consult", name: "consult (phone)", path: `/consult/${CONSULT_JOB_ID}`, headers: { cookie: customer }, screen: PHONE },
     ];
+    const chosen = textArg("pages")?.split(",");
+    const unknown = chosen?.filter((k) => !every.some((p) => p.key === k)) ?? [];
+    if (unknown.length) throw new Error(`--pages: no page ${unknown.join(", ")} (the pages: ${every.map((p) => p.key).join(", ")})`);
+    const pages = every.filter((p) => p.key === "floor" || !chosen || chosen.includes(p.key));
+    const reports = flag("reports") ? join(root, "bench-results", "lighthouse") : null;
+    if (reports) mkdirSync(reports, { recursive: true });
     // One unmeasured visit of each, so the server's first compilation of a route is not measured.
     for (const p of pages) await fetch(`${base}${p.path}`, { headers: p.headers });
 
     const rows: PageFigures[][] = [];
     for (let r = 0; r < runs; r++) {
       const row: PageFigures[] = [];
-      for (const p of pages) row.push(await lighthousePage(p.name, `${base}${p.path}`, chrome.port, p.headers, p.screen));
+      for (const p of pages) row.push(await lighthousePage(p.name, `${base}${p.path}`, chrome.port, p.headers, p.screen, reports ? join(reports, `${p.key}.json`) : undefined));
       rows.push(row);
     }
     printFigures(rows);
