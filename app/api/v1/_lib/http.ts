@@ -42,6 +42,23 @@ export async function bodyOf<T extends z.ZodType>(req: Request, schema: T, maxBy
 
 export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });
 
+/** GET on one row: `read` answers what the caller may see of it (the data layer answers another shop's row, or one the caller may not see, with 404). */
+export function readRoute(who: "signed-in" | "staff", read: (caller: Caller, id: string) => Promise<unknown>) {
+  return api(async (_req: Request, ctx: IdContext) => {
+    const caller = who === "staff" ? await staff() : await requireCaller();
+    return json(await read(caller, await idOf(ctx)));
+  });
+}
+
+/** A write on one row by the shop's staff, its JSON body parsed by `schema` first (413 when too large, 400 naming each bad field). */
+export function writeRoute<T extends z.ZodType>(schema: T, write: (caller: Caller, id: string, body: z.infer<T>) => Promise<unknown>) {
+  return api(async (req: Request, ctx: IdContext) => {
+    const caller = await staff();
+    const id = await idOf(ctx);
+    return json(await write(caller, id, await bodyOf(req, schema)));
+  });
+}
+
 /** For actions that take no body: nothing, or an empty JSON object; anything else is refused with 400. */
 export async function noBody(req: Request): Promise<void> {
   const declared = Number(req.headers.get("content-length") ?? "0");

@@ -37,7 +37,7 @@ import {
   ReadingsBodySchema,
 } from "@/model/schemas";
 import { ApproveSchema, QuotePutSchema } from "@/model/quote";
-import { CasePhotoPatchSchema, CasePhotoRequestSchema } from "../cases/[id]/photos/schema";
+import { CasePhotoPatchSchema, CasePhotoRequestSchema } from "@/model/schemas/case-photos";
 import { CheckoutSchema, MePatchSchema, MeSchema, NewShopSchema, ShopsSchema } from "./account-schemas";
 
 type Method = "get" | "post" | "put" | "patch" | "delete";

@@ -1,14 +1,3 @@
-import { NextResponse } from "next/server";
-import { handle } from "@/app/api/_lib/respond";
-import { requireCaller } from "@/db/access";
-import { noBody } from "@/app/api/v1/_lib/http";
-import { completeUpload } from "@/db/photos";
-import { SHOP_STAFF } from "@/db/roles";
+import { JOB_PHOTOS } from "@/app/api/v1/_lib/photo-routes";
 
-/** Checks the uploaded file (type by its bytes, size) and accepts it, or deletes it and says why. */
-export const POST = handle(async (req: Request, ctx: { params: Promise<{ id: string; photoId: string }> }) => {
-  const caller = await requireCaller(SHOP_STAFF);
-  await noBody(req);
-  const { id, photoId } = await ctx.params;
-  return NextResponse.json({ item: await completeUpload(caller, id, photoId) });
-});
+export const { POST } = JOB_PHOTOS.complete;
