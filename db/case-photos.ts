@@ -97,20 +97,14 @@ export async function requestCasePhotoUpload(
   body: { contentType: PhotoType; sizeBytes: number; widthPx?: number; heightPx?: number; reference?: PhotoReference },
 ) {
   await caseOr404(caller, caseId);
-  const { id, objectKey, answer } = await presignPhotoUpload(`shops/${caller.shopId}/cases/${caseId}`, body, storageError);
+  const { row, answer } = await presignPhotoUpload(caller, `shops/${caller.shopId}/cases/${caseId}`, body, storageError);
   const db = await getDb();
   await db.insert(schema.casePhoto).values({
-    id,
+    ...row,
     caseId,
-    organizationId: caller.shopId,
-    objectKey,
-    contentType: body.contentType,
-    sizeBytes: body.sizeBytes,
     widthPx: body.widthPx ?? null,
     heightPx: body.heightPx ?? null,
     referenceJson: body.reference ? JSON.stringify(body.reference) : null,
-    state: "pending",
-    createdBy: caller.userId,
   });
   return answer;
 }

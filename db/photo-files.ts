@@ -1,6 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
 import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
+import type { Caller } from "./access";
 import { DataError } from "./errors";
 import { deleteObject, inspectObject, presignUpload } from "./storage";
 
@@ -15,12 +16,17 @@ export function describeError(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
 
-/** A new photo's id and object key under `folder`, and the presigned PUT bound to the declared type and size. */
-export async function presignPhotoUpload(folder: string, body: { contentType: PhotoType; sizeBytes: number }, storageError: StorageFailure) {
+/**
+ * A new photo under `folder`: the columns its row starts with (its id, the caller's shop, its object key, the
+ * declared type and size, pending until its file is checked, who added it) and the answer to the browser,
+ * the presigned PUT bound to that type and size.
+ */
+export async function presignPhotoUpload(caller: Caller, folder: string, body: { contentType: PhotoType; sizeBytes: number }, storageError: StorageFailure) {
   const id = randomUUID();
   const objectKey = `${folder}/${id}.${photoExtension(body.contentType)}`;
   const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
-  return { id, objectKey, answer: { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } } };
+  const row = { id, organizationId: caller.shopId, objectKey, contentType: body.contentType, sizeBytes: body.sizeBytes, state: "pending", createdBy: caller.userId };
+  return { row, answer: { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } } };
 }
 
 /** How a photo's row is marked once its file is checked. */

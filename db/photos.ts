@@ -70,21 +70,9 @@ export async function requestUpload(
 ) {
   if (!staff(caller)) throw new AccessError("forbidden", "Only the shop adds photos to a job.");
   await jobFor(caller, jobId);
-  const { id, objectKey, answer } = await presignPhotoUpload(`shops/${caller.shopId}/jobs/${jobId}`, body, storageError);
+  const { row, answer } = await presignPhotoUpload(caller, `shops/${caller.shopId}/jobs/${jobId}`, body, storageError);
   const db = await getDb();
-  await db.insert(jobs.jobPhoto).values({
-    id,
-    jobId,
-    organizationId: caller.shopId,
-    objectKey,
-    contentType: body.contentType,
-    sizeBytes: body.sizeBytes,
-    caption: body.caption ?? "",
-    kind: body.kind ?? "other",
-    shared: body.shared ?? false,
-    state: "pending",
-    createdBy: caller.userId,
-  });
+  await db.insert(jobs.jobPhoto).values({ ...row, jobId, caption: body.caption ?? "", kind: body.kind ?? "other", shared: body.shared ?? false });
   return answer;
 }
 

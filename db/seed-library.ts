@@ -99,53 +99,42 @@ export const DEMO_KITS: KitSeed[] = [
   kit("demo-kit-61", "Kestrow 61 mm race kit", 61, [67.4, 67.46], [29.4, 29.5], square(33), "M8", [0.5], 339, "Wider stud pattern than the stock case."),
 ];
 
+/** What sets a boring rig apart: its head, its bit (calibrated as fitted), the grooves' travels and the shims at hand as [thickness, how many]. */
+type RigSpec = { headDiameterMm: number; bitLengthMm: number; cutDiameterMm: [min: number, max: number]; hardwareRadiusMm: number; travelsMm: number[]; shims: [number, number][]; drillTopRpm: number };
+
+/** A demo rig: its grooves named "groove 1", "groove 2", … in order of travel; every setting read to 0.05 mm. */
+const rig = (id: string, name: string, notes: string, r: RigSpec): RigSeed => ({
+  id,
+  name,
+  notes,
+  data: {
+    headDiameterMm: r.headDiameterMm,
+    bitLengthMm: r.bitLengthMm,
+    calibration: { bitLengthMm: r.bitLengthMm, minCutDiameterMm: r.cutDiameterMm[0], maxCutDiameterMm: r.cutDiameterMm[1] },
+    hardwareRadiusMm: r.hardwareRadiusMm,
+    grooves: r.travelsMm.map((travelMm, i) => ({ label: `groove ${i + 1}`, travelMm })),
+    shims: r.shims.map(([thicknessMm, count]) => ({ thicknessMm, count })),
+    drillTopRpm: r.drillTopRpm,
+    settingResolutionMm: 0.05,
+  },
+});
+
+/** The bench rig with the short shaft: three grooves and three shim sizes, as a hobby builder has at hand. */
+export const SHORT_SHAFT_RIG = rig(
+  "demo-rig-short",
+  "Bench rig, short shaft",
+  "Holder plate on spacers; the 35 mm bit.",
+  { headDiameterMm: 34.5, bitLengthMm: 35, cutDiameterMm: [52.5, 62], hardwareRadiusMm: 21, travelsMm: [22, 26, 30], shims: [[0.1, 5], [0.5, 4], [1, 4]], drillTopRpm: 2800 },
+);
+
 export const DEMO_RIGS: RigSeed[] = [
-  {
-    id: "demo-rig-short",
-    name: "Bench rig, short shaft",
-    notes: "Holder plate on spacers; the 35 mm bit.",
-    data: {
-      headDiameterMm: 34.5,
-      bitLengthMm: 35,
-      calibration: { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 },
-      hardwareRadiusMm: 21,
-      grooves: [
-        { label: "groove 1", travelMm: 22 },
-        { label: "groove 2", travelMm: 26 },
-        { label: "groove 3", travelMm: 30 },
-      ],
-      shims: [
-        { thicknessMm: 0.1, count: 5 },
-        { thicknessMm: 0.5, count: 4 },
-        { thicknessMm: 1, count: 4 },
-      ],
-      drillTopRpm: 2800,
-      settingResolutionMm: 0.05,
-    },
-  },
-  {
-    id: "demo-rig-long",
-    name: "Long-reach rig, big head",
-    notes: "For four-stroke cases; the 40 mm bit.",
-    data: {
-      headDiameterMm: 44,
-      bitLengthMm: 40,
-      calibration: { bitLengthMm: 40, minCutDiameterMm: 60, maxCutDiameterMm: 72 },
-      hardwareRadiusMm: 26,
-      grooves: [
-        { label: "groove 1", travelMm: 26 },
-        { label: "groove 2", travelMm: 30 },
-        { label: "groove 3", travelMm: 34 },
-      ],
-      shims: [
-        { thicknessMm: 0.2, count: 5 },
-        { thicknessMm: 0.5, count: 4 },
-        { thicknessMm: 1, count: 3 },
-      ],
-      drillTopRpm: 2400,
-      settingResolutionMm: 0.05,
-    },
-  },
+  SHORT_SHAFT_RIG,
+  rig(
+    "demo-rig-long",
+    "Long-reach rig, big head",
+    "For four-stroke cases; the 40 mm bit.",
+    { headDiameterMm: 44, bitLengthMm: 40, cutDiameterMm: [60, 72], hardwareRadiusMm: 26, travelsMm: [26, 30, 34], shims: [[0.2, 5], [0.5, 4], [1, 3]], drillTopRpm: 2400 },
+  ),
 ];
 
 export const DEMO_STUDIES: StudySeed[] = [

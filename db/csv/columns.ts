@@ -28,16 +28,22 @@ function price(t: string): Money {
 }
 const priceText = (p: Money) => `${amountText(p.amountMinor, p.currency)} ${p.currency}`;
 
+// The columns both tables have, each read the same way into the same place.
+const NAME: Column = { name: "name", required: true, path: "name", read: text };
+const NOTES: Column = { name: "notes", required: false, path: "notes", read: text };
+const STUDS: Column = { name: "studs", required: true, path: "data.studs", read: studs };
+const STUD_THREAD: Column = { name: "stud_thread", required: false, path: "data.studThread", read: text };
+
 const CASE_COLUMNS: Column[] = [
-  { name: "name", required: true, path: "name", read: text },
-  { name: "notes", required: false, path: "notes", read: text },
+  NAME,
+  NOTES,
   { name: "deck", required: true, path: "data.deck", read: outline },
   { name: "mouth", required: true, path: "data.mouth.outline", read: outline },
   { name: "mouth_depth_mm", required: true, path: "data.mouth.depthMm", read: num },
   { name: "mouth_readings_mm", required: false, path: "mouthReadingsMm", read: numList },
-  { name: "studs", required: true, path: "data.studs", read: studs },
+  STUDS,
   { name: "stud_hole_diameter_mm", required: true, path: "data.studHoleDiameterMm", read: num },
-  { name: "stud_thread", required: false, path: "data.studThread", read: (t) => t.trim() },
+  STUD_THREAD,
   { name: "pockets", required: false, path: "data.pockets", read: pockets },
   { name: "stock_bore_mm", required: true, path: "data.stockBoreMm", read: num },
   { name: "stroke_mm", required: true, path: "data.strokeMm", read: num },
@@ -46,14 +52,14 @@ const CASE_COLUMNS: Column[] = [
 ];
 
 const KIT_COLUMNS: Column[] = [
-  { name: "name", required: true, path: "name", read: text },
-  { name: "notes", required: false, path: "notes", read: text },
+  NAME,
+  NOTES,
   { name: "bore_mm", required: true, path: "data.boreMm", read: num },
   { name: "stroke_mm", required: false, path: "data.strokeMm", read: num },
   { name: "skirt_diameter_readings_mm", required: true, path: "data.skirtDiameterReadingsMm", read: numList },
   { name: "skirt_length_readings_mm", required: true, path: "data.skirtLengthReadingsMm", read: numList },
-  { name: "studs", required: true, path: "data.studs", read: studs },
-  { name: "stud_thread", required: false, path: "data.studThread", read: (t) => t.trim() },
+  STUDS,
+  STUD_THREAD,
   { name: "base_gaskets_mm", required: false, path: "data.baseGasketsMm", read: numList },
   { name: "always_with_gasket", required: false, path: "data.alwaysWithGasket", read: yesNo },
   { name: "price", required: false, path: "data.price", read: price },

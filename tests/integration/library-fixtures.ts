@@ -1,5 +1,6 @@
 // Invented library rows for the library and studies tests, and small helpers over the test HTTP client.
 import { expect } from "vitest";
+import { SHORT_SHAFT_RIG } from "@/db/seed-library";
 import { Http, signUp, testDb, uniqueEmail, type Reply } from "../support/http";
 
 export type ErrorBody = { error: { code: string; message: string; fields?: Record<string, string> } };
@@ -52,23 +53,8 @@ export const kitData = (boreMm: number, skirtMm: number, extra: Record<string, u
   ...extra,
 });
 
-export const rigData = () => ({
-  headDiameterMm: 34.5,
-  bitLengthMm: 35,
-  calibration: { bitLengthMm: 35, minCutDiameterMm: 52.5, maxCutDiameterMm: 62 },
-  hardwareRadiusMm: 21,
-  grooves: [
-    { label: "groove 1", travelMm: 22 },
-    { label: "groove 2", travelMm: 26 },
-    { label: "groove 3", travelMm: 30 },
-  ],
-  shims: [
-    { thicknessMm: 0.1, count: 5 },
-    { thicknessMm: 0.5, count: 4 },
-  ],
-  drillTopRpm: 2800,
-  settingResolutionMm: 0.05,
-});
+/** The demo shop's short-shaft bench rig's data: head, bit and calibration, three grooves, the shims at hand. */
+export const rigData = () => structuredClone(SHORT_SHAFT_RIG.data);
 
 export type Row = { id: string; name: string; version: number; [k: string]: unknown };
 

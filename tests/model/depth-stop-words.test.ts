@@ -2,21 +2,12 @@
 // rule, geometry/depth-stop.ts: common practice, no published source); the sums below are worked by hand.
 import { describe, expect, it } from "vitest";
 import { chooseDepthStop } from "@/geometry";
+import { SHORT_SHAFT_RIG } from "@/db/seed-library";
 import { depthStopSentence, shimBreakdown } from "@/model/depth-stop-words";
+import { RigDataSchema } from "@/model/schemas";
 
-// A rig with three grooves and three shim sizes, as a hobby builder has at hand (invented).
-const RIG = {
-  grooves: [
-    { label: "groove 1", travelMm: 22 },
-    { label: "groove 2", travelMm: 26 },
-    { label: "groove 3", travelMm: 30 },
-  ],
-  shims: [
-    { thicknessMm: 0.1, count: 5 },
-    { thicknessMm: 0.5, count: 4 },
-    { thicknessMm: 1, count: 4 },
-  ],
-};
+// The demo shop's short-shaft bench rig (invented): grooves at 22, 26 and 30 mm; shims 5 × 0.10, 4 × 0.50, 4 × 1.00 mm.
+const RIG = RigDataSchema.parse(SHORT_SHAFT_RIG.data);
 
 describe("the depth stop sentence", () => {
   it("names the groove, the stack under the ring and where it stops: 26 − (2 × 0.10 + 0.50) = 25.30 mm", () => {
