@@ -17,6 +17,7 @@ import type { PhotoReference } from "@/app/_ui/capture/captured-shapes";
 import type { ChosenPhoto } from "@/app/_ui/capture/photo-trace";
 import { CasePhotoContext, keepCasePhoto, keepReference, latestCasePhoto, leaveNoticeFor, sameReference, takeNoticeFor, type CasePhotoLink } from "./case-photo";
 import { FormSection } from "./form-section";
+import { READING_LISTS } from "./reading-lists";
 import { CasePlan } from "./shapes/case-plan";
 import { MEASURES } from "./shapes/measure-panel";
 import { StorePocketsField, StoreStudsField } from "./shapes/store-lists";
@@ -106,15 +107,7 @@ function CaseFields({ store, units, stamps }: { store: ShapeStore; units: Length
             label="Mouth opening"
             circleSlot={
               <div className="min-w-72">
-                <ReadingsField<CaseFormValues>
-                  name="mouthReadingsMm"
-                  label="Mouth diameter readings"
-                  units={units}
-                  counts="smallest"
-                  stamps={stamps}
-                  extraError={errorAt(errors, "mouth.outline.diameterMm")}
-                  hint="Read the mouth with calipers at several angles; the smallest reading counts."
-                />
+                <ReadingsField<CaseFormValues> {...READING_LISTS.mouth} units={units} stamps={stamps} extraError={errorAt(errors, "mouth.outline.diameterMm")} />
               </div>
             }
           />

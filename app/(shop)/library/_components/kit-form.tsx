@@ -13,6 +13,7 @@ import { StudsField } from "@/app/_ui/form/studs-field";
 import { TextField } from "@/app/_ui/form/text-field";
 import { FormHeading } from "@/app/_ui/form/form-heading";
 import { useLibraryForm } from "@/app/_ui/form/use-library-form";
+import { READING_LISTS } from "./reading-lists";
 import { kitDefaults, kitDoc, kitToCore, mergeKit, type KitFormValues } from "./kit-values";
 import { GasketSection } from "./shapes/gasket-section";
 import { useShapeForm } from "./shapes/use-shape-form";
@@ -20,6 +21,9 @@ import { useShapeValidation } from "./shapes/use-shape-validation";
 
 /** Half the last digit of a length shown in inches (0.0001 in): a reading shown in inches still finds its stamp. */
 const INCH_TEXT_MM = 0.0013;
+
+/** The skirt's two lists of readings, each stamped with who took its readings and when. */
+const SKIRT_READINGS = ["skirtDiameter", "skirtLength"] as const;
 
 /** Create or edit a cylinder kit: bore, skirt readings (the largest counts), studs, gaskets and the base gasket's ports, price. */
 export function KitForm({ row, units: initialUnits }: { row: KitRow | null; units: LengthUnits }) {
@@ -58,21 +62,9 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
           <TextField<KitFormValues> name="notes" label="Notes" />
         </FormSection>
         <FormSection title="Skirt, as measured">
-          <ReadingsField<KitFormValues>
-            name="skirtDiameterReadingsMm"
-            label="Skirt diameter readings"
-            units={units}
-            counts="largest"
-            stamps={stamp(row?.readings?.skirtDiameter)}
-            hint="Read the skirt at several spots on the actual part; the largest counts."
-          />
-          <ReadingsField<KitFormValues>
-            name="skirtLengthReadingsMm"
-            label="Skirt length readings (base face to skirt bottom)"
-            units={units}
-            counts="largest"
-            stamps={stamp(row?.readings?.skirtLength)}
-          />
+          {SKIRT_READINGS.map((reading) => (
+            <ReadingsField<KitFormValues> key={reading} {...READING_LISTS[reading]} units={units} stamps={stamp(row?.readings?.[reading])} />
+          ))}
         </FormSection>
         <FormSection title="Studs the kit needs">
           <div className="md:col-span-2">
@@ -81,15 +73,7 @@ export function KitForm({ row, units: initialUnits }: { row: KitRow | null; unit
           <TextField<KitFormValues> name="studThread" label="Stud thread" placeholder="M7 or M7x1" hint="ISO metric, optional." />
         </FormSection>
         <FormSection title="Base gaskets">
-          <ReadingsField<KitFormValues>
-            name="baseGasketsMm"
-            label="Base gasket thicknesses supplied"
-            units={units}
-            counts="smallest"
-            itemLabel="Gasket"
-            addLabel="Add a gasket"
-            hint="Each gasket that comes with the kit; blank list when it comes with none."
-          />
+          <ReadingsField<KitFormValues> {...READING_LISTS.baseGaskets} units={units} />
           <GasketSwitch />
         </FormSection>
         <GasketSection store={store} units={units} scope={scope} onCommit={validate} />
