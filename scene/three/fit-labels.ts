@@ -24,7 +24,7 @@ export interface FitLabelSet {
   readonly hit: Label;
 }
 
-/** Writes and places the labels and the thinnest-wall mark for the kit on show; `hitShown` when the interference solid is drawn. */
+/** Writes the labels and pins them to the scene, and places the thinnest-wall mark, for the kit on show; `hitShown` when the interference solid is drawn. */
 export function placeLabels(L: FitLabelSet, wallLine: Line, snap: FitSnapshot, v: ViewState, hitShown: boolean) {
   const { result, study } = snap;
   const k = result.kits[snap.kitIndex];
@@ -34,22 +34,19 @@ export function placeLabels(L: FitLabelSet, wallLine: Line, snap: FitSnapshot, v
   const Rf = flangeRadiusMm(study.kits[snap.kitIndex], k, study.case.studHoleDiameterMm);
   const c = governingClearanceMm(k);
   L.skirt.set(`${FIT[state].icon} skirt ${diameterLabel(k.skirt.diameterMm, v.units)} · ${c < 0 ? "interference" : "clearance"} ${signedLengthLabel(c, v.units)}`, STATE_3D[state]);
-  L.skirt.sprite.position.set(...toWorld(-Rf, Rf * 0.6, -k.skirt.gasketMm - FLANGE_DRAWN_MM - size * 1.2));
-  L.skirt.resize();
-  L.cut.sprite.visible = k.cut !== null;
+  L.skirt.anchor.set(...toWorld(-Rf, Rf * 0.6, -k.skirt.gasketMm - FLANGE_DRAWN_MM - size * 1.2));
+  L.cut.visible = k.cut !== null;
   if (k.cut) {
     L.cut.set(`${FIT.counterbore.icon} cut ${diameterLabel(k.cut.diameterMm, v.units)} × ${lengthLabel(k.cut.depthMm, v.units)} deep`, printed(FIT.counterbore));
-    L.cut.sprite.center.set(1, 0.5);
-    L.cut.sprite.position.set(...toWorld(k.cut.diameterMm / 2 + 4, -k.cut.diameterMm * 0.45, k.cut.depthMm + size));
-    L.cut.resize();
+    L.cut.align = 1;
+    L.cut.anchor.set(...toWorld(k.cut.diameterMm / 2 + 4, -k.cut.diameterMm * 0.45, k.cut.depthMm + size));
   }
   const w = k.thinnestWall;
-  L.wall.sprite.visible = wallLine.visible = w !== null && k.cut !== null;
+  L.wall.visible = wallLine.visible = w !== null && k.cut !== null;
   if (w && k.cut) {
     const color = w.ok ? INK : printed(FIT.wallLow);
     L.wall.set(`${w.ok ? "" : `${FIT.wallLow.icon} `}thinnest wall ${lengthLabel(w.minWallMm, v.units)} · ${w.label}`, color);
-    L.wall.sprite.position.set(...toWorld(w.atMm[0], w.atMm[1], -size * 0.9));
-    L.wall.resize();
+    L.wall.anchor.set(...toWorld(w.atMm[0], w.atMm[1], -size * 0.9));
     const a = wallLine.geometry.getAttribute("position") as Float32BufferAttribute;
     a.setXYZ(0, ...toWorld(w.cutPointMm[0], w.cutPointMm[1], -0.4));
     a.setXYZ(1, ...toWorld(w.atMm[0], w.atMm[1], -0.4));
@@ -58,11 +55,10 @@ export function placeLabels(L: FitLabelSet, wallLine: Line, snap: FitSnapshot, v
     (wallLine.material as LineBasicMaterial).color.set(color);
   }
   const worst = k.interference.vsCut ?? (k.cut ? null : k.interference.vsMouth);
-  L.hit.sprite.visible = hitShown;
+  L.hit.visible = hitShown;
   if (hitShown) {
     const at = worst?.atMm ?? [k.skirt.diameterMm / 2, 0];
     L.hit.set(worst ? `${FIT.interfere.icon} interference ${lengthLabel(worst.deepestMm, v.units)} deep` : "skirt bottoms on the step", STATE_3D.interfere);
-    L.hit.sprite.position.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
-    L.hit.resize();
+    L.hit.anchor.set(...toWorld(at[0] + 3, at[1], Math.min(k.skirt.protrusionMm, study.case.mouth.depthMm) * 0.6));
   }
 }

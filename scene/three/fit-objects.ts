@@ -1,4 +1,4 @@
-import { BufferGeometry, DoubleSide, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
+import { BufferGeometry, type Camera, DoubleSide, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
 import { FIT, printed, SCENE, SURFACE } from "@/model/palette";
 import { cutGeometry, fitState, interferenceGeometry } from "../fit-model";
 import type { FitSnapshot } from "../store";
@@ -22,7 +22,8 @@ export function drawsTheSame(a: FitSnapshot, b: FitSnapshot, view: ViewState): b
 
 /**
  * The parts of the fit view that follow every slider step: the cut and interference solids, the skirt
- * colours, the thinnest-wall mark and the labels. Updated in place from the store inside useFrame.
+ * colours, the thinnest-wall mark and the labels. Updated in place from the store inside useFrame; the
+ * labels are HTML over the canvas, placed after the camera each frame.
  */
 export class FitObjects {
   readonly plane = new Plane();
@@ -116,6 +117,17 @@ export class FitObjects {
     for (const g of this.ports.children) disposeOverlay(g as Group);
     this.ports.clear();
     this.ports.add(portOverlay(study, kitIndex, result.kits[kitIndex], this.portMaterials));
+  }
+
+  /** Puts each label where its anchor is seen in a view of `width` × `height` CSS px. */
+  placeLabelsOnScreen(camera: Camera, width: number, height: number) {
+    camera.updateMatrixWorld();
+    for (const l of Object.values(this.labels)) l.place(camera, width, height);
+  }
+
+  /** Draws the labels as shown into a 2D context of the view (for a snapshot). */
+  drawLabels(ctx: CanvasRenderingContext2D, dpr: number) {
+    for (const l of Object.values(this.labels)) l.drawInto(ctx, dpr);
   }
 
   private colourSkirts({ result, kitIndex }: FitSnapshot) {

@@ -1,10 +1,10 @@
 "use client";
 
 import { useFrame, useThree } from "@react-three/fiber";
-import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
+import { useEffect, useMemo, useSyncExternalStore } from "react";
 import { caseGeometry, flangeGeometry, skirtGeometry } from "../fit-model";
 import type { FitStore } from "../store";
-import { FitObjects } from "./fit-objects";
+import type { FitObjects } from "./fit-objects";
 import type { ViewState } from "./view";
 
 function useDisposed<T extends { dispose(): void } | null>(value: T): T {
@@ -12,8 +12,11 @@ function useDisposed<T extends { dispose(): void } | null>(value: T): T {
   return value;
 }
 
-/** Everything in the fit view. Slow parts (case, skirts, flange) rebuild in useMemo; the cut, the interference and the labels follow the store inside useFrame. */
-export function FitScene({ store, view }: { store: FitStore; view: ViewState }) {
+/**
+ * Everything in the fit view. Slow parts (case, skirts, flange) rebuild in useMemo; the cut, the interference
+ * and the labels (in `fit`, made and freed by the canvas) follow the store inside useFrame.
+ */
+export function FitScene({ store, view, fit }: { store: FitStore; view: ViewState; fit: FitObjects }) {
   const cs = useSyncExternalStore(store.subscribe, () => store.get().study.case);
   const kits = useSyncExternalStore(store.subscribe, () => store.get().study.kits);
   const kitIndex = useSyncExternalStore(store.subscribe, () => store.get().kitIndex);
@@ -21,8 +24,6 @@ export function FitScene({ store, view }: { store: FitStore; view: ViewState }) 
     store.get().result.kits.map((k) => `${k.skirt.diameterMm},${k.skirt.protrusionMm},${k.skirt.gasketMm},${k.skirt.centerMm.join(",")}`).join("|"),
   );
   const invalidate = useThree((s) => s.invalidate);
-  const [fit] = useState(() => new FitObjects());
-  useEffect(() => () => fit.dispose(), [fit]);
   useEffect(() => {
     fit.setView(view);
     invalidate();
@@ -46,9 +47,10 @@ export function FitScene({ store, view }: { store: FitStore; view: ViewState }) 
     [flange],
   );
 
-  useFrame(() => {
+  useFrame(({ camera, size }) => {
     const t0 = performance.now();
     fit.apply(store.get());
+    fit.placeLabelsOnScreen(camera, size.width, size.height);
     performance.measure("studio:scene-update", { start: t0, duration: performance.now() - t0 });
   });
 
@@ -65,9 +67,6 @@ export function FitScene({ store, view }: { store: FitStore; view: ViewState }) 
       {flange && <mesh geometry={flange.flange} material={fit.materials.flange} visible={view.camera !== "plan"} />}
       {flange?.gasket && <mesh geometry={flange.gasket} material={fit.materials.gasket} visible={view.camera !== "plan"} />}
       <primitive object={fit.wallLine} />
-      {Object.entries(fit.labels).map(([name, l]) => (
-        <primitive key={name} object={l.sprite} />
-      ))}
     </group>
   );
 }

@@ -4,12 +4,12 @@ import { useFrame, useThree } from "@react-three/fiber";
 import { useEffect, useRef } from "react";
 import type { FitStore } from "../store";
 import { drawnKey } from "./drawn-key";
-import { drawsTheSame } from "./fit-objects";
+import { drawsTheSame, type FitObjects } from "./fit-objects";
 import { TARGET, cameraPosition, type ViewState } from "./view";
 
 /** What the studio can ask of the canvas. */
 export interface FitCanvasApi {
-  /** A PNG data URL of the view as it is now. */
+  /** A PNG data URL of the view as it is now, labels included. */
   snapshot(): string;
 }
 
@@ -24,12 +24,13 @@ declare global {
  * Renders on demand, after the scene updated from the store, and records the time from the input to this frame.
  * The canvas element carries the key of what its last frame shows (`data-drawn`), so anyone can wait for a change to be drawn.
  */
-export function FrameRenderer({ store, view, onReady }: { store: FitStore; view: ViewState; onReady?: (api: FitCanvasApi) => void }) {
+export function FrameRenderer({ store, view, fit, onReady }: { store: FitStore; view: ViewState; fit: FitObjects; onReady?: (api: FitCanvasApi) => void }) {
   const gl = useThree((s) => s.gl);
   const scene = useThree((s) => s.scene);
   const camera = useThree((s) => s.camera);
   const invalidate = useThree((s) => s.invalidate);
   const advance = useThree((s) => s.advance);
+  const size = useThree((s) => s.size);
   const measured = useRef(0);
   const viewRef = useRef(view);
   useEffect(() => {
@@ -52,10 +53,19 @@ export function FrameRenderer({ store, view, onReady }: { store: FitStore; view:
     onReady?.({
       snapshot: () => {
         gl.render(scene, camera);
-        return gl.domElement.toDataURL("image/png");
+        // The labels are HTML over the canvas: drawn onto a copy of the frame where they are shown.
+        const frame = gl.domElement;
+        const sheet = document.createElement("canvas");
+        sheet.width = frame.width;
+        sheet.height = frame.height;
+        const ctx = sheet.getContext("2d");
+        if (!ctx) return frame.toDataURL("image/png");
+        ctx.drawImage(frame, 0, 0);
+        fit.drawLabels(ctx, frame.width / Math.max(1, size.width));
+        return sheet.toDataURL("image/png");
       },
     });
-  }, [gl, scene, camera, onReady]);
+  }, [gl, scene, camera, fit, size, onReady]);
 
   useFrame(() => {
     const t0 = performance.now();

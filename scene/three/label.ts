@@ -1,73 +1,150 @@
 import { SCENE } from "@/model/palette";
-import { CanvasTexture, LinearFilter, SRGBColorSpace, Sprite, SpriteMaterial } from "three";
+import { Vector3, type Camera } from "three";
 
-// Text labels drawn into a canvas texture with the page's own font (nothing fetched), shown as sprites
-// that always face the camera and are never hidden behind the solids.
+// Text labels of the 3D view, written as HTML over the canvas rather than drawn into WebGL textures: a
+// step writes a string and a CSS transform, and the browser lays out and paints the text with the page's
+// own font. Each label is pinned to a point of the scene and sized as if it stood there, so it shrinks
+// and grows with the view like a board beside the part; it is never hidden behind the solids. The layer
+// is decoration (the view box is a labelled image and the results give every figure in words).
 
-/** A sprite label whose text and colour can be changed in place. */
+/** The label's box at scale 1, px: its text size, height, side padding, frame and corner radius. */
+const FONT_PX = 44;
+export const LABEL_BOX_PX = FONT_PX + 24;
+const BOX_PX = LABEL_BOX_PX;
+const PAD_PX = 14;
+const FRAME_PX = 3;
+const RADIUS_PX = 10;
+/** The ground's opacity under the text. */
+const GROUND_ALPHA = 0.92;
+
+/** Where a label goes on screen: its anchor in CSS px from the view's top left and the scale of its box. */
+export interface ScreenPlacement {
+  readonly x: number;
+  readonly y: number;
+  readonly scale: number;
+  /** False when the anchor is behind the camera. */
+  readonly inFront: boolean;
+}
+
+const scratch = new Vector3();
+
+/**
+ * Projects a scene point into a view of `width` × `height` CSS px and gives the scale at which a box of
+ * BOX_PX stands `heightMm` tall there: the size a camera-facing board of that height has in the picture.
+ * The camera's world matrix must be current.
+ */
+export function screenPlacement(at: Vector3, camera: Camera, width: number, height: number, heightMm: number): ScreenPlacement {
+  const v = scratch.copy(at).applyMatrix4(camera.matrixWorldInverse);
+  const depth = -v.z;
+  const p = camera.projectionMatrix.elements;
+  // For a perspective camera a length l at depth d spans l · P[5] / d of the normalised height (2 units);
+  // an orthographic camera (P[15] = 1) has no depth in it.
+  const ortho = p[15] === 1;
+  const pxPerMm = ((height / 2) * p[5]) / (ortho ? 1 : Math.max(depth, 1e-6));
+  v.applyMatrix4(camera.projectionMatrix);
+  return { x: ((v.x + 1) / 2) * width, y: ((1 - v.y) / 2) * height, scale: (heightMm * pxPerMm) / BOX_PX, inFront: ortho || depth > 0 };
+}
+
+/** A label whose text, colour, anchor and side can be changed in place; drawn by the layer it is mounted in. */
 export class Label {
-  readonly sprite: Sprite;
-  private readonly canvas: HTMLCanvasElement;
-  private readonly texture: CanvasTexture;
+  readonly element: HTMLDivElement;
+  /** The scene point the label is pinned to. */
+  readonly anchor = new Vector3();
+  /** Which side of the box sits on the anchor: 0 its left edge, 1 its right edge (vertically, its middle). */
+  align: 0 | 1 = 0;
+  visible = true;
+  heightMm = 4;
   private text = "";
   private color = "";
-  heightMm = 4;
+  private written = { transform: "", shown: false };
+  /** Where it was last put, for the snapshot. */
+  private placed: ScreenPlacement | null = null;
 
   constructor() {
-    this.canvas = document.createElement("canvas");
-    this.texture = new CanvasTexture(this.canvas);
-    this.texture.colorSpace = SRGBColorSpace;
-    this.texture.minFilter = LinearFilter;
-    const material = new SpriteMaterial({ map: this.texture, depthTest: false, depthWrite: false, transparent: true });
-    this.sprite = new Sprite(material);
-    this.sprite.renderOrder = 10;
-    this.sprite.center.set(0, 0.5);
+    const el = document.createElement("div");
+    const s = el.style;
+    s.position = "absolute";
+    s.left = "0";
+    s.top = "0";
+    s.transformOrigin = "0 0";
+    s.whiteSpace = "nowrap";
+    s.boxSizing = "border-box";
+    s.height = `${BOX_PX}px`;
+    s.lineHeight = `${BOX_PX - 2 * FRAME_PX}px`;
+    s.padding = `0 ${PAD_PX - FRAME_PX}px`;
+    s.fontSize = `${FONT_PX}px`;
+    s.fontWeight = "600";
+    s.borderRadius = `${RADIUS_PX}px`;
+    s.borderWidth = `${FRAME_PX}px`;
+    s.borderStyle = "solid";
+    s.background = groundColour();
+    s.visibility = "hidden";
+    s.contain = "layout style";
+    el.dataset.label = "";
+    this.element = el;
   }
 
-  /** Redraws the texture when the text or colour changed. */
+  /** Sets the text and colour (written to the page only when they changed). */
   set(text: string, color: string) {
-    if (text === this.text && color === this.color) return;
-    this.text = text;
-    this.color = color;
-    const px = 44;
-    const ctx = this.canvas.getContext("2d");
-    if (!ctx) return;
-    // The page's own (self-hosted) face, whatever name the font loader gave it.
-    const family = getComputedStyle(document.body).fontFamily || "ui-sans-serif, sans-serif";
-    const font = `600 ${px}px ${family}`;
-    ctx.font = font;
-    const w = Math.ceil(ctx.measureText(text).width) + 28;
-    if (w !== this.canvas.width || px + 24 !== this.canvas.height) {
-      // A texture's storage is sized once on upload: a new size needs a fresh upload.
-      this.texture.dispose();
-      this.canvas.width = w;
-      this.canvas.height = px + 24;
+    if (text !== this.text) {
+      this.text = text;
+      this.element.textContent = text;
     }
-    ctx.font = font;
-    ctx.clearRect(0, 0, this.canvas.width, this.canvas.height);
-    ctx.globalAlpha = 0.92;
-    ctx.fillStyle = SCENE.labelGround;
-    ctx.strokeStyle = color;
-    ctx.lineWidth = 3;
+    if (color !== this.color) {
+      this.color = color;
+      this.element.style.color = color;
+      this.element.style.borderColor = color;
+    }
+  }
+
+  /** Puts the label where its anchor is seen; writes the page only when its place or visibility changed. */
+  place(camera: Camera, width: number, height: number) {
+    const at = screenPlacement(this.anchor, camera, width, height, this.heightMm);
+    const shown = this.visible && this.text !== "" && at.inFront;
+    this.placed = shown ? at : null;
+    if (shown) {
+      // Round to a tenth of a pixel, so a frame that leaves the label where it was writes nothing.
+      const t = `translate(${at.x.toFixed(1)}px,${at.y.toFixed(1)}px) scale(${at.scale.toFixed(4)}) translate(${-100 * this.align}%,-50%)`;
+      if (t !== this.written.transform) this.element.style.transform = t;
+      this.written.transform = t;
+    }
+    if (shown !== this.written.shown) this.element.style.visibility = shown ? "visible" : "hidden";
+    this.written.shown = shown;
+  }
+
+  /** Draws the label as it is shown into a 2D context of the view at `dpr` device px per CSS px (for a snapshot of the view). */
+  drawInto(ctx: CanvasRenderingContext2D, dpr: number) {
+    const at = this.placed;
+    if (!at) return;
+    const family = getComputedStyle(this.element).fontFamily || "ui-sans-serif, sans-serif";
+    ctx.save();
+    ctx.font = `600 ${FONT_PX}px ${family}`;
+    const w = Math.ceil(ctx.measureText(this.text).width) + 2 * PAD_PX;
+    const k = at.scale * dpr;
+    ctx.setTransform(k, 0, 0, k, at.x * dpr - this.align * w * k, at.y * dpr - (BOX_PX / 2) * k);
     ctx.beginPath();
-    ctx.roundRect(1.5, 1.5, w - 3, px + 21, 10);
+    ctx.roundRect(FRAME_PX / 2, FRAME_PX / 2, w - FRAME_PX, BOX_PX - FRAME_PX, RADIUS_PX);
+    ctx.globalAlpha = GROUND_ALPHA;
+    ctx.fillStyle = SCENE.labelGround;
     ctx.fill();
     ctx.globalAlpha = 1;
+    ctx.lineWidth = FRAME_PX;
+    ctx.strokeStyle = this.color;
     ctx.stroke();
-    ctx.fillStyle = color;
+    ctx.fillStyle = this.color;
     ctx.textBaseline = "middle";
-    ctx.fillText(text, 14, (px + 24) / 2 + 2);
-    this.texture.needsUpdate = true;
-    this.resize();
-  }
-
-  resize() {
-    const aspect = this.canvas.width / Math.max(1, this.canvas.height);
-    this.sprite.scale.set(this.heightMm * aspect, this.heightMm, 1);
+    ctx.fillText(this.text, PAD_PX, BOX_PX / 2 + 2);
+    ctx.restore();
   }
 
   dispose() {
-    this.texture.dispose();
-    (this.sprite.material as SpriteMaterial).dispose();
+    this.element.remove();
   }
+}
+
+/** The label ground at its opacity, as a CSS colour. */
+function groundColour(): string {
+  const hex = SCENE.labelGround.replace("#", "");
+  const [r, g, b] = [0, 2, 4].map((i) => parseInt(hex.slice(i, i + 2), 16));
+  return `rgba(${r}, ${g}, ${b}, ${GROUND_ALPHA})`;
 }

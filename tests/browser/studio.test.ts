@@ -124,6 +124,43 @@ describe("the fit studio on the example study", () => {
     await shot("clear-at-threshold");
   }, 120_000);
 
+  it("writes the view's labels over it, inside the view box, for the cut on show, hidden from assistive technology", async () => {
+    await drawn();
+    const layer = page.getByTestId("fit-labels");
+    // The figures are the results panel's in words; the labels are decoration of the labelled image.
+    expect(await layer.getAttribute("aria-hidden")).toBe("true");
+    const cut = (await page.getByTestId("verdict").getAttribute("data-cut")) ?? "";
+    const shown = () => layer.locator("[data-label]").evaluateAll((els) => els.filter((e) => getComputedStyle(e).visibility === "visible").map((e) => e.textContent ?? ""));
+    await expect.poll(shown).toContainEqual(expect.stringContaining(`cut Ø ${cut} mm ×`));
+    expect(await shown()).toContainEqual(expect.stringMatching(/skirt Ø [\d.]+ mm · clearance \+[\d.]+ mm/));
+    expect(await shown()).toContainEqual(expect.stringMatching(/thinnest wall [\d.]+ mm/));
+    const view = await page.getByTestId("view").boundingBox();
+    if (!view) throw new Error("no view box");
+    const boxes = await layer.locator("[data-label]").evaluateAll((els) =>
+      els.filter((e) => getComputedStyle(e).visibility === "visible").map((e) => {
+        const r = e.getBoundingClientRect();
+        return { x: r.x + r.width / 2, y: r.y + r.height / 2, h: r.height };
+      }),
+    );
+    for (const b of boxes) {
+      expect(b.x).toBeGreaterThan(view.x);
+      expect(b.x).toBeLessThan(view.x + view.width);
+      expect(b.y).toBeGreaterThan(view.y);
+      expect(b.y).toBeLessThan(view.y + view.height);
+      // Readable, and not larger than a line of a heading.
+      expect(b.h).toBeGreaterThan(8);
+      expect(b.h).toBeLessThan(40);
+    }
+    // A step of the slider rewrites the cut label in the same frame.
+    const slider = page.getByTestId("cut-diameter");
+    await slider.focus();
+    await slider.press("ArrowRight");
+    const next = (Number(cut) + STEP).toFixed(2);
+    await expect.poll(() => page.getByTestId("verdict").getAttribute("data-cut")).toBe(next);
+    await drawn();
+    expect(await shown()).toContainEqual(expect.stringContaining(`cut Ø ${next} mm ×`));
+  });
+
   it("follows a mouse drag of the cut diameter from interference to clear", async () => {
     const field = page.getByTestId("cut-diameter-field");
     await field.fill("52");
