@@ -4,9 +4,10 @@
 // first-load JavaScript of the studio page and of the Library page from the build's manifests.
 // The same-run baseline: a bare range input added to the same page, stepped by the same keys between the
 // studio's steps, with nothing listening but the clock: the floor of input to the next animation frame on
-// this machine at this moment. `-- --trace FILE` also writes a Chromium performance trace of the steps.
+// this machine at this moment. `-- --trace FILE` also writes a Chromium performance trace of the steps;
+// `-- --profile FILE` a CPU profile of them (.cpuprofile, for DevTools) and prints the functions that cost most.
 // Needs a production build in NEXT_DIST_DIR (default .next). Usage: npm run bench:studio
-import { existsSync, readFileSync } from "node:fs";
+import { existsSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { createRequire } from "node:module";
 import { gzipSync } from "node:zlib";
@@ -18,6 +19,8 @@ const dist = process.env.NEXT_DIST_DIR || ".next";
 const STEPS = 100;
 const traceAt = process.argv.indexOf("--trace");
 const traceFile = traceAt > 0 ? process.argv[traceAt + 1] : undefined;
+const profileAt = process.argv.indexOf("--profile");
+const profileFile = profileAt > 0 ? process.argv[profileAt + 1] : undefined;
 
 declare global {
   interface Window {
@@ -70,6 +73,29 @@ function firstLoad(route: string): { files: string[]; bytes: number; gzip: numbe
   return { files, bytes, gzip, hasThree };
 }
 
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
+  children?: number[];
+}
+
+/** The 15 functions with the most self time in a CPU profile, with their share of the sampled time that was not idle. */
+function printHotFunctions(profile: { nodes: ProfileNode[]; samples?: number[]; timeDeltas?: number[] }) {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const self = new Map<string, number>();
+  let busy = 0;
+  (profile.samples ?? []).forEach((id, i) => {
+    const f = byId.get(id)?.callFrame;
+    const dt = (profile.timeDeltas?.[i] ?? 0) / 1000;
+    if (!f || f.functionName === "(idle)" || f.functionName === "(program)") return;
+    busy += dt;
+    const key = `${f.functionName || "(anonymous)"} ${f.url.split("/").pop()}:${f.lineNumber + 1}:${f.columnNumber + 1}`;
+    self.set(key, (self.get(key) ?? 0) + dt);
+  });
+  console.log(`  CPU profile: ${busy.toFixed(0)} ms busy; most self time:`);
+  for (const [key, ms] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 15)) console.log(`    ${ms.toFixed(1).padStart(7)} ms ${((100 * ms) / busy).toFixed(1).padStart(5)} %  ${key}`);
+}
+
 async function main() {
   if (!existsSync(join(root, dist, "BUILD_ID"))) throw new Error(`no production build in ${dist}: run NEXT_DIST_DIR=${dist} npx next build first`);
   const port = await freePort();
@@ -119,6 +145,12 @@ async function main() {
     });
     const floor = page.getByTestId("bench-floor");
     if (traceFile) await browser.startTracing(page, { path: traceFile, categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing"] });
+    const cdp = profileFile ? await page.context().newCDPSession(page) : null;
+    if (cdp) {
+      await cdp.send("Profiler.enable");
+      await cdp.send("Profiler.setSamplingInterval", { interval: 100 });
+      await cdp.send("Profiler.start");
+    }
     // Studio and baseline steps alternate, so both see the same load.
     for (let i = 1; i <= STEPS; i++) {
       await slider.press("ArrowRight");
@@ -127,6 +159,11 @@ async function main() {
       await page.waitForFunction((n) => (window.__floorFrames ?? 0) >= n, i, { timeout: 10_000 });
     }
     if (traceFile) await browser.stopTracing();
+    if (cdp && profileFile) {
+      const { profile } = await cdp.send("Profiler.stop");
+      writeFileSync(profileFile, JSON.stringify(profile));
+      printHotFunctions(profile);
+    }
     const times = await page.evaluate(() => performance.getEntriesByName("studio:input-to-frame").map((e) => e.duration));
     const finalValue = await slider.inputValue();
     console.log(`studio, 5 kits on a polygon case, ${times.length} slider steps (52.00 → ${finalValue} mm):`);
