@@ -3,7 +3,7 @@
 import { useDrag } from "@use-gesture/react";
 import { useRef, useState, type KeyboardEvent, type ReactNode, type RefObject } from "react";
 import type { Point } from "@/geometry/homography";
-import { useZoom, ZoomBar } from "./use-zoom";
+import { useZoom, ZoomFrame } from "./use-zoom";
 import { windowOf } from "./zoom";
 import type { TracePhoto } from "./use-trace-photo";
 
@@ -61,8 +61,7 @@ export function TraceSurface({ photo, ready, placed, canvasRef, onPlace, childre
   }
 
   return (
-    <div className="flex flex-col gap-2">
-      <ZoomBar view={zoom.view} setView={zoom.setView} what="photo" />
+    <ZoomFrame zoom={zoom} what="photo">
       <div
         ref={viewport}
         {...bind()}
@@ -87,6 +86,6 @@ export function TraceSurface({ photo, ready, placed, canvasRef, onPlace, childre
           </svg>
         </div>
       </div>
-    </div>
+    </ZoomFrame>
   );
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import { useGesture } from "@use-gesture/react";
-import { useCallback, useState, type RefObject } from "react";
+import { useCallback, useState, type ReactNode, type RefObject } from "react";
 import { FIT, panBy, viewForKey, ZOOM_STEP, zoomAt, type View } from "./zoom";
 
 const TOUCH = typeof window !== "undefined" && "ontouchstart" in window;
@@ -57,8 +57,18 @@ export function useZoom(viewport: RefObject<HTMLElement | SVGElement | null>) {
   return { view, setView, pan, onKey };
 }
 
+/** A zoomable view (the viewport `useZoom` was given, and what goes with it) with its zoom buttons above it. */
+export function ZoomFrame({ zoom, what, children }: { zoom: ReturnType<typeof useZoom>; what: string; children: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-2">
+      <ZoomBar view={zoom.view} setView={zoom.setView} what={what} />
+      {children}
+    </div>
+  );
+}
+
 /** The buttons of a zoomable view: in, out and fit, with the zoom shown. */
-export function ZoomBar({ view, setView, what }: { view: View; setView: (f: (v: View) => View) => void; what: string }) {
+function ZoomBar({ view, setView, what }: { view: View; setView: (f: (v: View) => View) => void; what: string }) {
   return (
     <div className="flex items-center gap-1 text-sm" role="group" aria-label={`Zoom of the ${what}`}>
       <button type="button" className="btn-quiet" aria-label={`Zoom in on the ${what}`} aria-keyshortcuts="+" onClick={() => setView((v) => zoomAt(v, ZOOM_STEP))}>

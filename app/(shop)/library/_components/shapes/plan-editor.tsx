@@ -4,7 +4,7 @@ import { useMemo, useRef } from "react";
 import { useStore } from "zustand";
 import type { ShapeIssue } from "@/geometry/shapes";
 import { editDrawing, type Frame } from "@/scene/drawing/plan-edit";
-import { useZoom, ZoomBar } from "@/app/_ui/capture/use-zoom";
+import { useZoom, ZoomFrame } from "@/app/_ui/capture/use-zoom";
 import { windowOf, type View } from "@/app/_ui/capture/zoom";
 import { usePlanDrag } from "./plan-drag";
 import { usePlanKeys } from "./plan-keys";
@@ -71,8 +71,7 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
   const hoverTo = (key: string | null) => !held.current && store.getState().hover !== key && store.setState({ hover: key });
 
   return (
-    <div className="flex flex-col gap-2">
-      <ZoomBar view={zoom.view} setView={zoom.setView} what="plan" />
+    <ZoomFrame zoom={zoom} what="plan">
       <div
         ref={host}
         {...bind()}
@@ -99,7 +98,7 @@ export function PlanEditor({ store, extras, words, title, fixedCircles, fixedStu
         dangerouslySetInnerHTML={first}
       />
       <PlanNotes units={units} issues={issues} />
-    </div>
+    </ZoomFrame>
   );
 }
 
