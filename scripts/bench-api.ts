@@ -129,10 +129,126 @@ function serverLog(server: ChildProcess): string {
 
 const percent = (part: number, whole: number) => `${((part / Math.max(1, whole)) * 100).toFixed(0)} %`;
 
+/** The measured routes, each with the framework floor's route that answers the same text. */
+const ROUTES = [
+  { name: "study results", path: `/api/v1/studies/${STUDY_ID}/results`, floor: "/bench-floor/results" },
+  { name: "list studies", path: LIST_PATH, floor: "/bench-floor/list" },
+] as const;
+type Route = (typeof ROUTES)[number];
+/** The floor's name of a route's text in the floor file ("results", "list"). */
+const floorKey = (r: Route) => r.floor.split("/").pop() as string;
+
+type Row = { name: string; bytes: number; app: Figures; floor: Figures; bare: Figures };
+
+/** One run's seeded database, auth secret and floor file (in its own folder), and the app server's address. */
+type BenchRun = { databaseURL: string; secret: string; floorFile: string; base: string };
+
+/** Starts the production server (with the CPU profiler when `profileDir` is named) against a freshly seeded database in the run's folder. */
+async function startApp(dir: string, profileDir: string | null): Promise<{ bench: BenchRun; server: ChildProcess }> {
+  const databaseURL = `file:${join(dir, "bench.db")}`;
+  await seedBenchDatabase(databaseURL);
+  const port = await freePort();
+  const base = `http://127.0.0.1:${port}`;
+  const bench: BenchRun = { databaseURL, secret: randomBytes(32).toString("base64url"), floorFile: join(dir, "floor.json"), base };
+  const env = { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: bench.secret, PAYMENTS: "off", BOREWRIGHT_BENCH_FLOOR: bench.floorFile };
+  // Node refuses --cpu-prof in NODE_OPTIONS: a profiled server is started here with it on the command line.
+  const server = profileDir
+    ? spawn(process.execPath, ["--cpu-prof", `--cpu-prof-dir=${profileDir}`, "node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
+        cwd: root,
+        env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production", ...env },
+        stdio: ["ignore", "ignore", "inherit"],
+      })
+    : startNext({ port, quiet: true, env });
+  return { bench, server };
+}
+
+/** Signs the demo shop's owner in: the session cookie every measured request sends. */
+async function ownerHeaders(base: string): Promise<Record<string, string>> {
+  const owner = DEMO_PEOPLE[0];
+  const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
+    method: "POST",
+    headers: { "content-type": "application/json", origin: base },
+    body: JSON.stringify({ email: owner.email, password: owner.password }),
+  });
+  if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}`);
+  return { cookie: signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ") };
+}
+
+/** Writes the texts the measured routes answer now into the floor file, for the framework floor to answer; answers them by floor name. */
+async function recordFloorTexts(bench: BenchRun, headers: Record<string, string>, server: ChildProcess): Promise<Record<string, string>> {
+  const texts: Record<string, string> = {};
+  for (const r of ROUTES) {
+    const res = await fetch(`${bench.base}${r.path}`, { headers });
+    if (res.status !== 200) throw new Error(`${r.path} answered ${res.status}: ${await res.text()}${serverLog(server)}`);
+    texts[floorKey(r)] = await res.text();
+  }
+  writeFileSync(bench.floorFile, JSON.stringify(texts));
+  return texts;
+}
+
+/** Starts the bare handler (this script with --bare, a child process) on the run's database; answers it and its address. */
+async function startBare(bench: BenchRun): Promise<{ bare: ChildProcess; bareBase: string }> {
+  const barePort = await freePort();
+  const bare = spawn(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), "--bare", String(barePort)], {
+    cwd: root,
+    env: { ...process.env, DATABASE_URL: bench.databaseURL, BETTER_AUTH_SECRET: bench.secret, BETTER_AUTH_URL: bench.base, NODE_ENV: "production" },
+    stdio: ["ignore", "inherit", "inherit"],
+  });
+  return { bare, bareBase: `http://127.0.0.1:${barePort}` };
+}
+
+/** Each route's three addresses: the app's, the framework floor's and the bare handler's. */
+const addresses = (r: Route, base: string, bareBase: string) => [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`];
+
+/**
+ * One request to each address must be answered, and not with a 5xx; then a short warm-up of each, so the
+ * first compilations are not measured.
+ */
+async function warmUp(base: string, bareBase: string, headers: Record<string, string>): Promise<void> {
+  for (const r of ROUTES) {
+    for (const url of addresses(r, base, bareBase)) {
+      const res = await fetch(url, { headers, signal: AbortSignal.timeout(60_000) }).catch((e: unknown) => {
+        throw new Error(`${url} did not answer a single warm-up request: ${e instanceof Error ? e.message : String(e)}`);
+      });
+      if (res.status >= 500) throw new Error(`${url} answered a warm-up request with ${res.status}: ${await res.text()}`);
+      await res.arrayBuffer();
+    }
+  }
+  for (const r of ROUTES) for (const url of addresses(r, base, bareBase)) await autocannon({ url, headers, connections: 4, amount: 200 });
+}
+
+/** Prints the table of requests/s and latency, and of server CPU time per answer; answers whether any answer was a 5xx. */
+function printRows(rows: Row[], seconds: number, connections: number): boolean {
+  console.log(`\nAPI benchmark: ${seconds} s per run, ${connections} connections, 127.0.0.1, production build, file database (libSQL)\n`);
+  const columns = ["app req/s", "p50", "p99", "floor req/s", "p50", "p99", "bare req/s", "p50", "p99", "app/floor", "app/bare"];
+  console.log("what".padEnd(16) + columns.map((c) => c.padStart(c.includes("req/s") ? 12 : 10)).join(""));
+  let failed = false;
+  for (const r of rows) {
+    const cells = [r.app, r.floor, r.bare].flatMap((f) => [String(f.requestsPerSecond).padStart(12), `${f.p50Ms} ms`.padStart(10), `${f.p99Ms} ms`.padStart(10)]);
+    console.log(r.name.padEnd(16) + cells.join("") + percent(r.app.requestsPerSecond, r.floor.requestsPerSecond).padStart(10) + percent(r.app.requestsPerSecond, r.bare.requestsPerSecond).padStart(10));
+    for (const [what, f] of [["app", r.app], ["floor", r.floor], ["bare", r.bare]] as const) {
+      if (f.serverErrors) failed = true;
+      if (f.non2xx || f.timeouts || f.errors) {
+        console.log(`  ${r.name}, ${what}: ${f.non2xx} non-2xx (${f.serverErrors} 5xx), ${f.timeouts} timeouts, ${f.errors} connection errors`);
+      }
+    }
+  }
+  const cpu = (f: Figures) => (f.cpuMsPerRequest === null ? "–" : `${f.cpuMsPerRequest.toFixed(2)} ms`);
+  console.log(`\nServer CPU time per answered request (what each answer costs the server itself):`);
+  console.log("what".padEnd(16) + ["app", "floor", "bare", "app/floor", "app/bare"].map((c) => c.padStart(11)).join(""));
+  for (const r of rows) {
+    const share = (a: Figures, b: Figures) => (a.cpuMsPerRequest && b.cpuMsPerRequest ? percent(b.cpuMsPerRequest, a.cpuMsPerRequest) : "–");
+    console.log(r.name.padEnd(16) + [cpu(r.app), cpu(r.floor), cpu(r.bare), share(r.app, r.floor), share(r.app, r.bare)].map((c) => c.padStart(11)).join(""));
+  }
+  console.log(`Load average at the end: ${loadavg().map((l) => l.toFixed(1)).join(", ")} on ${cpus().length} cores.`);
+  console.log(`\nAnswer sizes: ${rows.map((r) => `${r.name.split(" (")[0]} ${r.bytes} bytes`).join(", ")}.`);
+  console.log("Aim: at least 80 % of the framework floor for both routes (app/floor: requests/s, and the floor's CPU time over the app's); list studies p99 at most 100 ms.");
+  return failed;
+}
+
 async function main() {
   const seconds = arg("seconds", 10);
   const connections = arg("connections", 50);
-  const profileDir = textArg("cpu-prof");
   const children: ChildProcess[] = [];
   const dir = mkdtempSync(join(tmpdir(), "borewright-bench-"));
   const stop = async () => {
@@ -144,105 +260,24 @@ async function main() {
   });
   try {
     if (!process.argv.includes("--no-build") && buildIsStale()) run("npx", ["next", "build"]);
-    const databaseURL = `file:${join(dir, "bench.db")}`;
-    await seedBenchDatabase(databaseURL);
-
-    const port = await freePort();
-    const base = `http://127.0.0.1:${port}`;
-    const secret = randomBytes(32).toString("base64url");
-    const floorFile = join(dir, "floor.json");
-    const env = { DATABASE_URL: databaseURL, BETTER_AUTH_URL: base, BETTER_AUTH_SECRET: secret, PAYMENTS: "off", BOREWRIGHT_BENCH_FLOOR: floorFile };
-    // Node refuses --cpu-prof in NODE_OPTIONS: a profiled server is started here with it on the command line.
-    const server = profileDir
-      ? spawn(process.execPath, ["--cpu-prof", `--cpu-prof-dir=${profileDir}`, "node_modules/next/dist/bin/next", "start", "-p", String(port), "-H", "127.0.0.1"], {
-          cwd: root,
-          env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", NODE_ENV: "production", ...env },
-          stdio: ["ignore", "ignore", "inherit"],
-        })
-      : startNext({ port, quiet: true, env });
+    const { bench, server } = await startApp(dir, textArg("cpu-prof"));
     children.push(server);
-    await waitFor(`${base}/sign-in`, 60_000, server);
-
-    const owner = DEMO_PEOPLE[0];
-    const signIn = await fetch(`${base}/api/auth/sign-in/email`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: base },
-      body: JSON.stringify({ email: owner.email, password: owner.password }),
-    });
-    if (signIn.status !== 200) throw new Error(`sign-in answered ${signIn.status}`);
-    const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-    const headers = { cookie };
-
-    // The framework floor answers the texts the measured routes answer now.
-    const routes = [
-      { name: "study results", path: `/api/v1/studies/${STUDY_ID}/results`, floor: "/bench-floor/results" },
-      { name: "list studies", path: LIST_PATH, floor: "/bench-floor/list" },
-    ] as const;
-    const texts: Record<string, string> = {};
-    for (const r of routes) {
-      const res = await fetch(`${base}${r.path}`, { headers });
-      if (res.status !== 200) throw new Error(`${r.path} answered ${res.status}: ${await res.text()}${serverLog(server)}`);
-      texts[r.floor.split("/").pop() as string] = await res.text();
-    }
-    writeFileSync(floorFile, JSON.stringify(texts));
-
-    const barePort = await freePort();
-    const bare = spawn(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), "--bare", String(barePort)], {
-      cwd: root,
-      env: { ...process.env, DATABASE_URL: databaseURL, BETTER_AUTH_SECRET: secret, BETTER_AUTH_URL: base, NODE_ENV: "production" },
-      stdio: ["ignore", "inherit", "inherit"],
-    });
+    await waitFor(`${bench.base}/sign-in`, 60_000, server);
+    const headers = await ownerHeaders(bench.base);
+    const texts = await recordFloorTexts(bench, headers, server);
+    const { bare, bareBase } = await startBare(bench);
     children.push(bare);
-    const bareBase = `http://127.0.0.1:${barePort}`;
     await waitFor(`${bareBase}/`, 30_000, bare);
+    await warmUp(bench.base, bareBase, headers);
 
-    // One request to each must be answered, and not with a 5xx; then a short warm-up of each, so the first
-    // compilations are not measured.
-    for (const r of routes) {
-      for (const url of [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`]) {
-        const res = await fetch(url, { headers, signal: AbortSignal.timeout(60_000) }).catch((e: unknown) => {
-          throw new Error(`${url} did not answer a single warm-up request: ${e instanceof Error ? e.message : String(e)}`);
-        });
-        if (res.status >= 500) throw new Error(`${url} answered a warm-up request with ${res.status}: ${await res.text()}`);
-        await res.arrayBuffer();
-      }
-    }
-    for (const r of routes) {
-      for (const url of [`${base}${r.path}`, `${base}${r.floor}`, `${bareBase}${r.path}`]) await autocannon({ url, headers, connections: 4, amount: 200 });
-    }
-
-    const rows: { name: string; bytes: number; app: Figures; floor: Figures; bare: Figures }[] = [];
-    for (const r of routes) {
-      const app = await load(`${base}${r.path}`, headers, connections, seconds, server.pid);
-      const floor = await load(`${base}${r.floor}`, headers, connections, seconds, server.pid);
+    const rows: Row[] = [];
+    for (const r of ROUTES) {
+      const app = await load(`${bench.base}${r.path}`, headers, connections, seconds, server.pid);
+      const floor = await load(`${bench.base}${r.floor}`, headers, connections, seconds, server.pid);
       const bareFigures = await load(`${bareBase}${r.path}`, {}, connections, seconds, bare.pid);
-      rows.push({ name: r.name, bytes: Buffer.byteLength(texts[r.floor.split("/").pop() as string]), app, floor, bare: bareFigures });
+      rows.push({ name: r.name, bytes: Buffer.byteLength(texts[floorKey(r)]), app, floor, bare: bareFigures });
     }
-
-    console.log(`\nAPI benchmark: ${seconds} s per run, ${connections} connections, 127.0.0.1, production build, file database (libSQL)\n`);
-    const columns = ["app req/s", "p50", "p99", "floor req/s", "p50", "p99", "bare req/s", "p50", "p99", "app/floor", "app/bare"];
-    console.log("what".padEnd(16) + columns.map((c) => c.padStart(c.includes("req/s") ? 12 : 10)).join(""));
-    let failed = false;
-    for (const r of rows) {
-      const cells = [r.app, r.floor, r.bare].flatMap((f) => [String(f.requestsPerSecond).padStart(12), `${f.p50Ms} ms`.padStart(10), `${f.p99Ms} ms`.padStart(10)]);
-      console.log(r.name.padEnd(16) + cells.join("") + percent(r.app.requestsPerSecond, r.floor.requestsPerSecond).padStart(10) + percent(r.app.requestsPerSecond, r.bare.requestsPerSecond).padStart(10));
-      for (const [what, f] of [["app", r.app], ["floor", r.floor], ["bare", r.bare]] as const) {
-        if (f.serverErrors) failed = true;
-        if (f.non2xx || f.timeouts || f.errors) {
-          console.log(`  ${r.name}, ${what}: ${f.non2xx} non-2xx (${f.serverErrors} 5xx), ${f.timeouts} timeouts, ${f.errors} connection errors`);
-        }
-      }
-    }
-    const cpu = (f: Figures) => (f.cpuMsPerRequest === null ? "–" : `${f.cpuMsPerRequest.toFixed(2)} ms`);
-    console.log(`\nServer CPU time per answered request (what each answer costs the server itself):`);
-    console.log("what".padEnd(16) + ["app", "floor", "bare", "app/floor", "app/bare"].map((c) => c.padStart(11)).join(""));
-    for (const r of rows) {
-      const share = (a: Figures, b: Figures) => (a.cpuMsPerRequest && b.cpuMsPerRequest ? percent(b.cpuMsPerRequest, a.cpuMsPerRequest) : "–");
-      console.log(r.name.padEnd(16) + [cpu(r.app), cpu(r.floor), cpu(r.bare), share(r.app, r.floor), share(r.app, r.bare)].map((c) => c.padStart(11)).join(""));
-    }
-    console.log(`Load average at the end: ${loadavg().map((l) => l.toFixed(1)).join(", ")} on ${cpus().length} cores.`);
-    console.log(`\nAnswer sizes: ${rows.map((r) => `${r.name.split(" (")[0]} ${r.bytes} bytes`).join(", ")}.`);
-    console.log("Aim: at least 80 % of the framework floor for both routes (app/floor: requests/s, and the floor's CPU time over the app's); list studies p99 at most 100 ms.");
+    const failed = printRows(rows, seconds, connections);
     mkdirSync(join(root, "bench-results"), { recursive: true });
     writeFileSync(join(root, "bench-results", "api.json"), `${JSON.stringify({ at: new Date().toISOString(), seconds, connections, rows }, null, 2)}\n`);
     if (failed) {

@@ -6,21 +6,10 @@ import { existsSync, readFileSync, statSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 
-/** Pages whose first-load JavaScript is printed, by their route in the build; the light ones have an aim. */
-const SIZED_PAGES: { route: string; light: boolean }[] = [
-  { route: "/bench-floor", light: true },
-  { route: "/(auth)/sign-in", light: true },
-  { route: "/(shop)/home", light: true },
-  { route: "/(shop)/library", light: true },
-  { route: "/(shop)/jobs", light: true },
-  { route: "/(shop)/settings", light: true },
-  { route: "/(shop)/studies", light: true },
-  { route: "/(shop)/library/[kind]/[id]", light: false },
-  { route: "/(shop)/jobs/[id]", light: false },
-  { route: "/(shop)/consult/[id]", light: false },
-  { route: "/try", light: false },
-  { route: "/(shop)/studies/[id]", light: false },
-];
+/** Pages whose first-load JavaScript is printed, by their route in the build: first the light ones, which have an aim (no 3D, no PDF), then the rest. */
+const LIGHT_PAGES = ["/bench-floor", "/(auth)/sign-in", "/(shop)/home", "/(shop)/library", "/(shop)/jobs", "/(shop)/settings", "/(shop)/studies"];
+const OTHER_PAGES = ["/(shop)/library/[kind]/[id]", "/(shop)/jobs/[id]", "/(shop)/consult/[id]", "/try", "/(shop)/studies/[id]"];
+const SIZED_PAGES: { route: string; light: boolean }[] = [...LIGHT_PAGES.map((route) => ({ route, light: true })), ...OTHER_PAGES.map((route) => ({ route, light: false }))];
 const LIGHT_PAGE_AIM_BYTES = 300_000;
 
 /** Text that marks a chunk as holding heavy code no light page should carry. */
