@@ -8,7 +8,7 @@ import { DataError } from "./errors";
 import { SHOP_STAFF } from "./roles";
 import { readColumn } from "./rows";
 import * as schema from "./schema";
-import { describeError, presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
+import { describeError, photoWhere, presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
 import { deleteObject, presignDownload, StorageNotConfigured } from "./storage";
 
 // Photos of a case profile's deck, traced over in the case form. Same path as a job's photos: the browser asks
@@ -54,11 +54,7 @@ async function caseOr404(caller: Caller, caseId: string) {
 async function photoOr404(caller: Caller, caseId: string, photoId: string) {
   await caseOr404(caller, caseId);
   const db = await getDb();
-  const [p] = await db
-    .select()
-    .from(schema.casePhoto)
-    .where(and(eq(schema.casePhoto.id, photoId), eq(schema.casePhoto.caseId, caseId), eq(schema.casePhoto.organizationId, caller.shopId)))
-    .limit(1);
+  const [p] = await db.select().from(schema.casePhoto).where(photoWhere(schema.casePhoto, schema.casePhoto.caseId, caseId, photoId, caller)).limit(1);
   if (!p) throw new AccessError("not_found", "No photo with this id on this case profile.");
   return p;
 }

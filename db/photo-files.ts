@@ -1,5 +1,7 @@
 import "server-only";
 import { randomUUID } from "node:crypto";
+import { and, eq } from "drizzle-orm";
+import type { AnySQLiteColumn } from "drizzle-orm/sqlite-core";
 import { photoExtension, uploadedPhotoProblem, type PhotoType } from "@/model/photo-files";
 import type { Caller } from "./access";
 import { DataError } from "./errors";
@@ -27,6 +29,11 @@ export async function presignPhotoUpload(caller: Caller, folder: string, body: {
   const uploadUrl = await presignUpload(objectKey, body.contentType, body.sizeBytes).catch(storageError);
   const row = { id, organizationId: caller.shopId, objectKey, contentType: body.contentType, sizeBytes: body.sizeBytes, state: "pending", createdBy: caller.userId };
   return { row, answer: { id, uploadUrl, method: "PUT" as const, headers: { "content-type": body.contentType } } };
+}
+
+/** Where a photo is looked up: this id, on this job or case profile (its `owner` column), in the caller's shop, so another shop's photo is never found. */
+export function photoWhere(photos: { id: AnySQLiteColumn; organizationId: AnySQLiteColumn }, owner: AnySQLiteColumn, ownerId: string, photoId: string, caller: Caller) {
+  return and(eq(photos.id, photoId), eq(owner, ownerId), eq(photos.organizationId, caller.shopId));
 }
 
 /** How a photo's row is marked once its file is checked. */

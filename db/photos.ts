@@ -7,7 +7,7 @@ import { getDb } from "./client";
 import { jobFor } from "./jobs";
 import { SHOP_STAFF } from "./roles";
 import * as jobs from "./schema-jobs";
-import { presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
+import { photoWhere, presignPhotoUpload, settleUploadedPhoto } from "./photo-files";
 import { presignDownload, StorageNotConfigured } from "./storage";
 
 // Job photos in object storage. The browser asks for an upload URL, PUTs the file straight to storage,
@@ -79,11 +79,7 @@ export async function requestUpload(
 async function photoOr404(caller: Caller, jobId: string, photoId: string) {
   await jobFor(caller, jobId);
   const db = await getDb();
-  const [p] = await db
-    .select()
-    .from(jobs.jobPhoto)
-    .where(and(eq(jobs.jobPhoto.id, photoId), eq(jobs.jobPhoto.jobId, jobId), eq(jobs.jobPhoto.organizationId, caller.shopId)))
-    .limit(1);
+  const [p] = await db.select().from(jobs.jobPhoto).where(photoWhere(jobs.jobPhoto, jobs.jobPhoto.jobId, jobId, photoId, caller)).limit(1);
   if (!p || (!staff(caller) && !(p.shared && p.state === "ready"))) throw new AccessError("not_found", "No photo with this id on this job.");
   return p;
 }
