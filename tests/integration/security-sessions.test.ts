@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { FailedSignIns, clientAddress } from "../../db/auth-guard";
 import { Http, freshAddress, signIn, signUp, uniqueEmail, waitForMail } from "../support/http";
 import { startReadyServer, type ExtraServer } from "../setup/extra-server";
+import { twoSessions } from "./session-support";
 
 describe("the client address", () => {
   const xff = (value: string) => new Headers({ "x-forwarded-for": value });
@@ -77,11 +78,7 @@ describe("failed sign-ins per account", () => {
 
 describe("sessions and a new password", () => {
   it("a password reset ends every session of the account", async () => {
-    const email = uniqueEmail("revoke-reset");
-    const first = await signUp("Reset Revokes", email, "the-first-password");
-    const second = await signIn(email, "the-first-password");
-    expect((await first.get("/api/v1/me")).status).toBe(200);
-    expect((await second.get("/api/v1/me")).status).toBe(200);
+    const { email, here: first, elsewhere: second } = await twoSessions("Reset Revokes", "revoke-reset", "the-first-password");
 
     const anon = new Http();
     expect((await anon.post("/api/auth/request-password-reset", { email, redirectTo: "/reset-password" })).status).toBe(200);
@@ -97,9 +94,7 @@ describe("sessions and a new password", () => {
   });
 
   it("a password change ends the other sessions, even when the client does not ask", async () => {
-    const email = uniqueEmail("revoke-change");
-    const here = await signUp("Change Revokes", email, "the-first-password");
-    const elsewhere = await signIn(email, "the-first-password");
+    const { here, elsewhere } = await twoSessions("Change Revokes", "revoke-change", "the-first-password");
     const changed = await here.post("/api/auth/change-password", { currentPassword: "the-first-password", newPassword: "the-second-password", revokeOtherSessions: false });
     expect(changed.status).toBe(200);
     expect((await elsewhere.get("/api/v1/me")).status).toBe(401);

@@ -5,8 +5,9 @@
 // floor does not exist on a server started without its flag, and the studies list reads its page, kits
 // and total in one statement, past the last page included.
 import { describe, expect, it } from "vitest";
-import { Http, signIn, signUp, testDb, uniqueEmail } from "../support/http";
+import { Http, signUp, testDb, uniqueEmail } from "../support/http";
 import { freshShopOwner, newStudy, ok } from "./library-fixtures";
+import { twoSessions } from "./session-support";
 
 /** A client holding a copy of another's cookies, as a stolen or kept cookie would be. */
 function copyOf(http: Http): Http {
@@ -29,10 +30,8 @@ describe("a verified session cookie", () => {
   });
 
   it("is refused at once when another session of the account revokes it", async () => {
-    const email = uniqueEmail("lookup-revoke");
-    const here = await signUp("Revokes Others", email, "the-only-password");
-    const elsewhere = await signIn(email, "the-only-password");
-    expect((await elsewhere.get("/api/v1/me")).status).toBe(200);
+    const { here, elsewhere } = await twoSessions("Revokes Others", "lookup-revoke", "the-only-password");
+    // A second request: the cookie is now one the server has verified.
     expect((await elsewhere.get("/api/v1/me")).status).toBe(200);
     expect((await here.post("/api/auth/revoke-other-sessions", {})).status).toBe(200);
     expect((await elsewhere.get("/api/v1/me")).status).toBe(401);
