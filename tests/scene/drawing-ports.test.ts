@@ -3,7 +3,7 @@ import { evaluateStudy, parseStudy } from "@/geometry";
 import { planDrawing } from "@/scene/drawing/plan";
 import { portCaption, portsLayer } from "@/scene/drawing/ports";
 import { FIT } from "@/model/palette";
-import { exampleInput } from "./fixtures";
+import { exampleInput, thinPortWallStudy } from "./fixtures";
 
 // The example study (invented): its short-skirt kit carries two port windows over the case's two passages.
 const study = parseStudy(exampleInput());
@@ -20,9 +20,7 @@ describe("the port overlay on the plan", () => {
   });
 
   it("draws a window in the port colour, or in the wall-below-minimum colour when the matched passage would leave too little wall", () => {
-    const input = exampleInput();
-    input.cut = { diameterMm: 58.6 };
-    const s = parseStudy(input);
+    const s = thinPortWallStudy();
     const r = evaluateStudy(s);
     expect(r.kits[0].ports.every((p) => p.ok === false)).toBe(true);
     expect(portsLayer(s, 0, r.kits[0], 3)).toContain(`stroke="${FIT.wallLow.color.light}"`);

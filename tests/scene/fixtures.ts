@@ -28,3 +28,10 @@ export function polygonStudy(cut?: { diameterMm?: number; depthMm?: number }): S
   s.readings = undefined;
   return parseStudy(s);
 }
+
+/** The example study with a Ø 58.6 mm cut: wide enough to leave too little wall beside kit 0's matched passages. */
+export function thinPortWallStudy(): Study {
+  const s = exampleInput();
+  s.cut = { diameterMm: 58.6 };
+  return parseStudy(s);
+}

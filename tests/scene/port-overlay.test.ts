@@ -3,7 +3,7 @@ import { Color, Float32BufferAttribute, LineDashedMaterial, LineLoop, Mesh, Mesh
 import { evaluateStudy, parseStudy } from "@/geometry";
 import { FIT } from "@/model/palette";
 import { OVERLAY_LIFT_MM, PortOverlayMaterials, portOverlay } from "@/scene/three/port-overlay";
-import { exampleInput } from "./fixtures";
+import { exampleInput, thinPortWallStudy } from "./fixtures";
 
 // The example study (invented): kit 0 carries two rectangular port windows, x 30.2–34.5 and −34.5…−30.2,
 // y ±10, over the case's two transfer passages, which are open at the deck.
@@ -59,9 +59,7 @@ describe("the 3D view's port overlay", () => {
   });
 
   it("draws a window in the wall-below-minimum colour when the core says the matched passage leaves too little wall", () => {
-    const input = exampleInput();
-    input.cut = { diameterMm: 58.6 };
-    const s = parseStudy(input);
+    const s = thinPortWallStudy();
     const r = evaluateStudy(s);
     expect(r.kits[0].ports.every((p) => p.ok === false)).toBe(true);
     const g = portOverlay(s, 0, r.kits[0], new PortOverlayMaterials());

@@ -10,6 +10,7 @@ import { editDrawing, type EditShapes } from "@/scene/drawing/plan-edit";
 import { planDrawing } from "@/scene/drawing/plan";
 import { sectionDrawing } from "@/scene/drawing/section";
 import { exampleInput, polygonStudy, roundStudy } from "../fixtures";
+import { squareDeckShapes } from "./shapes";
 
 /** The example study with its first pocket starting below the deck (a level of its own in the section). */
 function deepPocketStudy(): Study {
@@ -54,23 +55,19 @@ describe.each(studies)("the drawings of %s", (name, make) => {
   });
 });
 
-// Invented shapes: a square deck, a round mouth, four studs (one not readable yet) and two passages.
-const shapes = (): EditShapes => ({
-  deck: { kind: "polygon", pointsMm: [[-50, -50], [50, -50], [50, 50], [-50, 50]] },
-  mouth: { kind: "circle", diameterMm: 46 },
-  studs: [
-    { label: "front left", positionMm: [-35, -35] },
-    { label: "", positionMm: [35, -35] },
-    { label: "rear right", positionMm: [35, 35] },
-    null,
-  ],
-  studHoleDiameterMm: 8.5,
-  pockets: [
-    { label: "transfer", outline: { kind: "polygon", pointsMm: [[20, -5], [30, -5], [30, 5]] }, startDepthMm: 0 },
-    { label: "", outline: { kind: "circle", diameterMm: 6, centerMm: [-20, 10] }, startDepthMm: 4 },
-    { label: "unread", outline: null, startDepthMm: 0 },
-  ],
-});
+/** The square-deck shapes with a stud not named yet, a round passage starting below the deck, and a passage not readable yet. */
+const shapes = (): EditShapes => {
+  const s = squareDeckShapes();
+  return {
+    ...s,
+    studs: s.studs.map((st, i) => (i === 1 && st ? { ...st, label: "" } : st)),
+    pockets: [
+      ...s.pockets,
+      { label: "", outline: { kind: "circle", diameterMm: 6, centerMm: [-20, 10] }, startDepthMm: 4 },
+      { label: "unread", outline: null, startDepthMm: 0 },
+    ],
+  };
+};
 
 describe("the editable plan", () => {
   it("draws the shapes as entered the same", () => {

@@ -2,21 +2,10 @@
 // form can find what was touched, and a drag that redraws only the handle and its shape.
 import { DOMParser } from "@xmldom/xmldom";
 import { describe, expect, it } from "vitest";
-import { dragPatch, editDrawing, frameOf, type EditShapes } from "@/scene/drawing/plan-edit";
+import { dragPatch, editDrawing, frameOf } from "@/scene/drawing/plan-edit";
+import { squareDeckShapes } from "./shapes";
 
-// Invented shapes: a square deck, a round mouth, four studs and one passage.
-const shapes = (): EditShapes => ({
-  deck: { kind: "polygon", pointsMm: [[-50, -50], [50, -50], [50, 50], [-50, 50]] },
-  mouth: { kind: "circle", diameterMm: 46 },
-  studs: [
-    { label: "front left", positionMm: [-35, -35] },
-    { label: "front right", positionMm: [35, -35] },
-    { label: "rear right", positionMm: [35, 35] },
-    null,
-  ],
-  studHoleDiameterMm: 8.5,
-  pockets: [{ label: "transfer", outline: { kind: "polygon", pointsMm: [[20, -5], [30, -5], [30, 5]] }, startDepthMm: 0 }],
-});
+const shapes = squareDeckShapes;
 
 const handles = (svg: string) =>
   Array.from(new DOMParser().parseFromString(svg, "image/svg+xml").getElementsByTagName("circle"))
