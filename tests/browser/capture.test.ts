@@ -66,8 +66,7 @@ afterAll(() => closeBrowser(browser, pageErrors));
 
 describe("a case profile entered from measurements, on its drawing", () => {
   it("builds, drags, undoes, redoes, mirrors and saves what the drawing shows", async () => {
-    await openNewForm(page, "cases");
-    await page.locator("#f-name").fill(NAME);
+    await openNewForm(page, "cases", NAME);
     await page.locator("#f-mouthReadingsMm-0").fill("46");
     await page.locator("#f-mouth-depthMm").fill("26");
     await page.locator("#f-studHoleDiameterMm").fill("7.5");
@@ -232,8 +231,7 @@ describe("a case profile entered from measurements, on its drawing", () => {
 
   it("a kit's base gasket gets its port windows the same way, drawn over the bore, and saves them", async () => {
     const kit = `Gasket kit ${Date.now().toString(36)}`;
-    await openNewForm(page, "kits");
-    await page.locator("#f-name").fill(kit);
+    await openNewForm(page, "kits", kit);
     await page.locator("#f-boreMm").fill("47");
     await page.locator("#f-skirtDiameterReadingsMm-0").fill("53.9");
     await page.locator("#f-skirtLengthReadingsMm-0").fill("24.6");

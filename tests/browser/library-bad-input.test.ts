@@ -26,8 +26,7 @@ afterAll(() => closeBrowser(browser));
 
 describe("bad input in the kit form", () => {
   it("names what is wrong next to each field and keeps every character typed", async () => {
-    await openNewForm(page, "kits");
-    await page.locator("#f-name").fill("Bad input kit");
+    await openNewForm(page, "kits", "Bad input kit");
 
     await page.locator("#f-boreMm").fill("-47");
     await expect.poll(() => messageNear(page, "f-boreMm")).toMatch(/more than 0\.00 mm|more than 0 mm/);
@@ -67,8 +66,7 @@ describe("bad input in the kit form", () => {
 
 describe("bad input in the case form", () => {
   it("shows a deck whose edges cross in the warning colour, says which edges, and refuses to save it", async () => {
-    await openNewForm(page, "cases");
-    await page.locator("#f-name").fill("Crossed deck case");
+    await openNewForm(page, "cases", "Crossed deck case");
     await page.getByRole("radiogroup", { name: "Deck shape" }).getByLabel("Polygon (corners)").check();
     // A bow tie: (−50, −50) → (50, 50) → (50, −50) → (−50, 50) crosses itself between edges 1 and 3.
     const corners = [["-50", "-50"], ["50", "50"], ["50", "-50"], ["-50", "50"]];

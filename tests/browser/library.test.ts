@@ -20,8 +20,7 @@ let page: Page;
 const pageErrors: string[] = [];
 
 async function createKit(p: Page, name: string, bore: string, skirts: string[], length: string, price: string) {
-  await openNewForm(p, "kits");
-  await p.locator("#f-name").fill(name);
+  await openNewForm(p, "kits", name);
   await p.locator("#f-boreMm").fill(bore);
   await typeReadings(p, "skirtDiameterReadingsMm", skirts);
   await p.locator("#f-skirtLengthReadingsMm-0").fill(length);
@@ -48,8 +47,7 @@ afterAll(() => closeBrowser(browser, pageErrors));
 
 describe("library and studies in the browser", () => {
   it("creates a case profile from three mouth readings, the smallest counting", async () => {
-    await openNewForm(page, "cases");
-    await page.locator("#f-name").fill(CASE);
+    await openNewForm(page, "cases", CASE);
     await typeReadings(page, "mouthReadingsMm", ["46.02", "45.96", "46.00"]);
     await expect.poll(() => page.getByTestId("f-mouthReadingsMm-summary").innerText()).toMatch(/smallest counts: 45\.96 mm \(reading 2\) · spread 0\.06 mm/);
     await typeSquareStudCase(page);

@@ -7,10 +7,11 @@ export async function inMillimetres(page: Page): Promise<void> {
   await page.getByRole("group", { name: "Units of this form" }).getByRole("button", { name: "mm" }).click();
 }
 
-/** Opens a shelf's form for a new row, in millimetres. */
-export async function openNewForm(page: Page, shelf: "cases" | "kits" | "rigs"): Promise<void> {
+/** Opens a shelf's form for a new row, in millimetres; with `name`, the row's name typed in. */
+export async function openNewForm(page: Page, shelf: "cases" | "kits" | "rigs", name?: string): Promise<void> {
   await page.goto(`/library/${shelf}/new`);
   await inMillimetres(page);
+  if (name !== undefined) await page.locator("#f-name").fill(name);
 }
 
 /** Types readings into a list of readings, adding a field for each after the first. */
