@@ -1,7 +1,8 @@
 "use client";
 
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { evaluateStudy, type Study, type StudyResult } from "@/geometry";
+import type { Study, StudyResult } from "@/geometry";
+import { evaluateStudy } from "@/geometry/evaluate";
 import { createFitStore } from "@/scene/store";
 
 export type CutDraft = { diameterMm?: number; depthMm?: number };

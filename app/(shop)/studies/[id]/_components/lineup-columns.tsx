@@ -3,7 +3,8 @@
 import type { LengthUnits } from "@/geometry";
 import { createColumnHelper, type ColumnDef, type SortingFn } from "@tanstack/react-table";
 import { lengthLabel } from "@/model/units";
-import { formatMoney, type Money } from "@/model/money";
+import type { Money } from "@/model/money";
+import { formatMoney } from "@/model/money-text";
 import { VerdictGlyph } from "@/app/_ui/studio/verdict-mark";
 import { TONE_TEXT, VERDICT } from "./verdict-words";
 import type { LineupRow } from "./lineup-rows";

@@ -1,6 +1,5 @@
 "use client";
 
-import { money } from "@/model/money";
 import type { LengthUnits } from "@/geometry";
 import { useCallback, useState } from "react";
 import { FormProvider } from "react-hook-form";
@@ -22,8 +21,8 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
   const choose = useCallback((kitId: string) => form.setValue("chosenKitId", kitId, { shouldDirty: true }), [form]);
 
   const kitNames = Object.fromEntries([...rows.kitRows.map((k) => [k.id, k.name]), ...(rows.caseRow ? [[rows.caseRow.id, rows.caseRow.name]] : [])]);
-  // The library's prices as money with their currency, for the lineup and the kit switcher (display only).
-  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price ? money(k.data.price.amountMinor, k.data.price.currency) : undefined]));
+  // The library's prices (money with their currency), for the lineup and the kit switcher (display only).
+  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price]));
   const studs = rows.caseRow?.data.studs.map((s) => s.label) ?? [];
 
   return (
