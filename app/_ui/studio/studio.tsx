@@ -30,6 +30,12 @@ export interface StudioProps {
 }
 
 type ToolbarView = Omit<ViewState, "customer" | "units" | "overlay">;
+/**
+ * The parts below the first screen on a phone: the browser lays them out only once they come near the screen
+ * (room kept at their last size, 40rem until first drawn), so the first layout of the page is the view and the results;
+ * the clip margin keeps focus rings whole.
+ */
+const OFF_SCREEN_FIRST = "[content-visibility:auto] [contain-intrinsic-size:auto_40rem] [overflow-clip-margin:0.5rem]";
 const START_VIEW: ToolbarView = { section: true, sectionAngleDeg: 0, camera: "three-quarter", cameraNonce: 0, exaggeration: 1 };
 
 /**
@@ -97,14 +103,20 @@ export function Studio({ study, result, units, onCutChange, customerMode = false
         </aside>
         {/* On a phone the results come right under the view, before the cut and the bench figures. */}
         {!customer && (
-          <div className="flex min-w-0 flex-col gap-3 lg:col-start-1 lg:row-start-2">
+          <div className={`flex min-w-0 flex-col gap-3 lg:col-start-1 lg:row-start-2 ${OFF_SCREEN_FIRST}`}>
             <LiveCutCard store={store} units={units} onChange={change} />
             <LiveBenchDetails store={store} units={units} />
           </div>
         )}
       </div>
-      {!customer && <Cautions />}
-      <SettledDrawings store={store} units={units} />
+      {!customer && (
+        <div className={OFF_SCREEN_FIRST}>
+          <Cautions />
+        </div>
+      )}
+      <div className={OFF_SCREEN_FIRST}>
+        <SettledDrawings store={store} units={units} />
+      </div>
     </div>
   );
 }
