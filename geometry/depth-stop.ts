@@ -213,7 +213,8 @@ function halfStacks(stock: Stock, maxStackMm: number, q: number): HalfStacks {
     const key = Math.round(sorted[i] / q);
     if (length === 0 || keys[length - 1] !== key) keys[length++] = key;
   }
-  // Each stack goes to its key's entry, which keeps the fewest shims, then the smallest code.
+  // Each stack goes to its key's entry, which keeps the fewest shims, then the smallest code: the stacks were
+  // listed in increasing code (mixed-radix order, pruning only drops some), so the first of the fewest is kept.
   const heightMm = new Float64Array(length);
   const count = new Uint16Array(length).fill(0xffff);
   const code = new Float64Array(length);
@@ -226,7 +227,7 @@ function halfStacks(stock: Stock, maxStackMm: number, q: number): HalfStacks {
       if (keys[mid] < key) lo = mid + 1;
       else hi = mid;
     }
-    if (c[i] < count[lo] || (c[i] === count[lo] && k[i] < code[lo])) {
+    if (c[i] < count[lo]) {
       heightMm[lo] = h[i];
       count[lo] = c[i];
       code[lo] = k[i];

@@ -15,7 +15,7 @@ type Rig = { grooves: { label: string; travelMm: number }[]; shims: { thicknessM
  * states it: travel at or above the wanted depth and nearest to it; within the tolerance of that, fewest
  * shims; then the groove listed first; then the fewest of the shim sizes listed first.
  */
-function bruteForce(wantedMm: number, rig: Rig): Pick<DepthStop, "groove" | "shims" | "travelMm" | "shimCount" | "reached"> {
+function bruteForce(wantedMm: number, rig: Rig, tol = TOL): Pick<DepthStop, "groove" | "shims" | "travelMm" | "shimCount" | "reached"> {
   const stacks: number[][] = [[]];
   for (const s of rig.shims) {
     const next: number[][] = [];
@@ -28,7 +28,7 @@ function bruteForce(wantedMm: number, rig: Rig): Pick<DepthStop, "groove" | "shi
       return { gi, counts, travelMm: g.travelMm - stackMm, overshoot: g.travelMm - stackMm - wantedMm, count: counts.reduce((a, b) => a + b, 0) };
     }),
   );
-  const feasible = all.filter((c) => c.overshoot >= -TOL);
+  const feasible = all.filter((c) => c.overshoot >= -tol);
   if (feasible.length === 0) {
     const deepest = rig.grooves.reduce((a, g) => (g.travelMm > a.travelMm ? g : a));
     return { groove: deepest.label, shims: [], travelMm: deepest.travelMm, shimCount: 0, reached: false };
@@ -39,7 +39,7 @@ function bruteForce(wantedMm: number, rig: Rig): Pick<DepthStop, "groove" | "shi
     return 0;
   };
   const best = feasible
-    .filter((c) => c.overshoot <= least + TOL)
+    .filter((c) => c.overshoot <= least + tol)
     .sort((a, b) => a.count - b.count || a.gi - b.gi || lex(a.counts, b.counts))[0];
   return {
     groove: rig.grooves[best.gi].label,
@@ -121,17 +121,121 @@ describe("depth stop search", { timeout: 60_000 }, () => {
     }
   });
 
-  it("among equally close stacks takes the fewest shims, then the groove listed first", () => {
-    const rig: Rig = {
-      grooves: [
-        { label: "upper", travelMm: 25 },
-        { label: "lower", travelMm: 26 },
-      ],
-      shims: [
-        { thicknessMm: 0.5, count: 2 },
-        { thicknessMm: 1, count: 1 },
-      ],
+  describe("at the tolerance's edges: thicknesses, travels and depths on the tolerance's own 1/16 mm grid", () => {
+    // Every figure is a multiple of 1/16 mm (exact in binary) and the tolerance is 1/16 mm, so many stacks land
+    // exactly at −tolerance below the wanted depth, or exactly one tolerance above the least overshoot, where
+    // "at or above" and "within the tolerance" must include them. Each rig is also built for one tie-break.
+    const TOL16 = 1 / 16;
+    const X = { thicknessMm: 1, count: 1 };
+    const W = { thicknessMm: 2, count: 1 };
+    const gridRigs: Record<string, Rig> = {
+      // Halves [X, W] and [Y, Z]: one Y against two Z in groove a, and one Z in groove b.
+      "count, then groove": { grooves: [{ label: "a", travelMm: 10 }, { label: "b", travelMm: 9.8125 }], shims: [X, W, { thicknessMm: 0.3125, count: 1 }, { thicknessMm: 0.125, count: 2 }] },
+      // One Y against one Z in the same groove: the stack with fewer of the size listed first.
+      "sizes listed first": { grooves: [{ label: "a", travelMm: 10 }], shims: [X, W, { thicknessMm: 0.1875, count: 1 }, { thicknessMm: 0.125, count: 2 }] },
+      // Two sizes of the same thickness in the same half.
+      "equal thicknesses": { grooves: [{ label: "a", travelMm: 10 }], shims: [{ thicknessMm: 0.25, count: 1 }, { thicknessMm: 0.25, count: 1 }, X, W] },
+      // A stack taller than the shallower groove's whole travel, which only the deeper groove can take.
+      "taller than a groove": { grooves: [{ label: "a", travelMm: 5 }, { label: "b", travelMm: 20 }], shims: [{ thicknessMm: 10, count: 1 }, { thicknessMm: 0.25, count: 2 }] },
+      // A stack as tall as the groove's travel, reached for a depth as small as the tolerance.
+      "as tall as the groove": { grooves: [{ label: "a", travelMm: 1 }], shims: [{ thicknessMm: 1, count: 1 }] },
+      // Halves of four sizes each: 1/16 + 4/16 and 2/16 + 3/16 mm, two shims of one height in the same half.
+      "two pairs of one height": { grooves: [{ label: "a", travelMm: 10 }], shims: [1 / 16, 4 / 16, 2 / 16, 3 / 16, 1, 2, 3, 4].map((thicknessMm) => ({ thicknessMm, count: 1 })) },
     };
+    const depths = (rig: Rig) => {
+      const deepest = Math.max(...rig.grooves.map((g) => g.travelMm));
+      return Array.from({ length: Math.round((deepest + TOL16) * 32) }, (_, k) => (k + 2) / 32);
+    };
+
+    it.each(Object.entries(gridRigs))("equals the one-by-one search at every depth on a 1/32 mm step: %s", (_, rig) => {
+      for (const wantedMm of depths(rig)) {
+        const got = chooseDepthStop(wantedMm, rig, TOL16);
+        const want = bruteForce(wantedMm, rig, TOL16);
+        const where = `at ${wantedMm}`;
+        expect([got.reached, got.groove, got.shimCount], where).toEqual([want.reached, want.groove, want.shimCount]);
+        expect(got.shims, where).toEqual(want.shims);
+        expect(got.travelMm, where).toBe(want.travelMm);
+      }
+    });
+
+    it("takes one shim over two when the one is exactly a tolerance further from the depth, and the groove listed first over a later one", () => {
+      // 9.6875 mm: in groove a one 0.3125 mm shim gives 0 mm over, two 0.125 mm shims 1/16 mm over (the edge of
+      // the tolerance); groove b over one 0.125 mm shim gives 0 mm over with a stack of fewer of the sizes listed first.
+      expect(chooseDepthStop(9.6875, gridRigs["count, then groove"], TOL16)).toMatchObject({ groove: "a", shims: [{ thicknessMm: 0.3125, count: 1 }], overshootMm: 0 });
+    });
+
+    it("counts a stack exactly one tolerance short as reaching the depth, and takes the stack with fewer of the size listed first", () => {
+      // 9.875 mm: one 0.1875 mm shim leaves the travel 1/16 mm short (−tolerance, still reached and the least
+      // overshoot); one 0.125 mm shim is exactly a tolerance above it. Both one shim: the one without the first-listed size.
+      const s = chooseDepthStop(9.875, gridRigs["sizes listed first"], TOL16);
+      expect(s).toMatchObject({ groove: "a", shims: [{ thicknessMm: 0.125, count: 1 }], overshootMm: 0, reached: true });
+      // 9.9375 mm: one 0.125 mm shim leaves it exactly a tolerance short, the bare groove is two tolerances above that.
+      expect(chooseDepthStop(9.9375, gridRigs["sizes listed first"], TOL16)).toMatchObject({ shims: [{ thicknessMm: 0.125, count: 1 }], overshootMm: -TOL16, reached: true });
+      // Two sizes of one thickness: the one listed second.
+      expect(chooseDepthStop(9.75, gridRigs["equal thicknesses"], TOL16).shims).toEqual([{ thicknessMm: 0.25, count: 1 }]);
+      expect(chooseDepthStop(9.75, gridRigs["equal thicknesses"], TOL16).shimCount).toBe(1);
+    });
+
+    it("uses a stack taller than the shallower groove under the deeper one, and a stack as tall as the travel for a depth of one tolerance", () => {
+      expect(chooseDepthStop(9.75, gridRigs["taller than a groove"], TOL16)).toMatchObject({ groove: "b", shims: [{ thicknessMm: 10, count: 1 }, { thicknessMm: 0.25, count: 1 }], overshootMm: 0 });
+      expect(chooseDepthStop(TOL16, gridRigs["as tall as the groove"], TOL16)).toMatchObject({ shims: [{ thicknessMm: 1, count: 1 }], travelMm: 0, reached: true });
+    });
+
+    it("with a tolerance of 0 takes only exact or deeper travel, as the one-by-one search does", () => {
+      // 9.6875 mm: 1/16 + 4/16 or 2/16 + 3/16 mm, two shims each; the pair without the size listed first.
+      expect(chooseDepthStop(9.6875, gridRigs["two pairs of one height"], 0).shims).toEqual([{ thicknessMm: 2 / 16, count: 1 }, { thicknessMm: 3 / 16, count: 1 }]);
+      for (const rig of [gridRigs["count, then groove"], gridRigs["sizes listed first"], gridRigs["two pairs of one height"]]) {
+        for (const wantedMm of depths(rig)) {
+          const got = chooseDepthStop(wantedMm, rig, 0);
+          const want = bruteForce(wantedMm, rig, 0);
+          expect([got.reached, got.groove, got.shims, got.travelMm], `at ${wantedMm}`).toEqual([want.reached, want.groove, want.shims, want.travelMm]);
+        }
+      }
+    });
+  });
+
+  it("answers the same for a shim stock whatever was asked of it before, with other grooves or another tolerance", () => {
+    // The stacks of each half are kept per shim stock: they must be listed again when the tallest useful stack
+    // or the tolerance they were grouped by changes.
+    const shims = [{ thicknessMm: 10, count: 1 }, { thicknessMm: 1 / 64, count: 3 }];
+    const deep = { grooves: [{ label: "deep", travelMm: 20 }], shims };
+    const fresh = () => ({ grooves: deep.grooves, shims: shims.map((s) => ({ ...s })) });
+    const wantedMm = 20 - 10 - 1 / 64;
+    // First a coarse tolerance of 1/16 mm on a groove 1/16 mm shallower: the same tallest useful stack (20 mm),
+    // but the 1/64 mm shims fall within one tolerance of the bare groove and are grouped with it.
+    chooseDepthStop(9, { grooves: [{ label: "coarse", travelMm: 20 - 1 / 16 }], shims }, 1 / 16);
+    const exact = chooseDepthStop(wantedMm, deep, 0);
+    expect(exact).toEqual(chooseDepthStop(wantedMm, fresh(), 0));
+    expect(exact).toMatchObject({ shims: [{ thicknessMm: 10, count: 1 }, { thicknessMm: 1 / 64, count: 1 }], overshootMm: 0 });
+    // Then a shallow groove, which the 10 mm shim is no use to: its stacks are listed only up to 5 mm.
+    chooseDepthStop(4.5, { grooves: [{ label: "shallow", travelMm: 5 }], shims }, 0);
+    expect(chooseDepthStop(wantedMm, deep, 0)).toEqual(exact);
+  });
+
+  it("lists a rig's stacks once: the next search of the same rig looks at fewer states by the stacks of both halves", () => {
+    // Halves [0.5 × 1] and [0.25 × 2]: 2 and 3 stacks.
+    const rig: Rig = { grooves: [{ label: "a", travelMm: 20 }], shims: [{ thicknessMm: 0.5, count: 1 }, { thicknessMm: 0.25, count: 2 }] };
+    const first = searchDepthStop(19.25, rig, TOL);
+    const again = searchDepthStop(19.25, rig, TOL);
+    expect(again.stop).toEqual(first.stop);
+    expect(first.statesVisited - again.statesVisited).toBe(2 + 3);
+  });
+
+  it("adds no work for a shim thicker than the deepest groove's travel", () => {
+    const grooves = [{ label: "a", travelMm: 25 }];
+    const bare = searchDepthStop(24, { grooves, shims: [] }, TOL);
+    const withSpacers = searchDepthStop(24, { grooves, shims: [{ thicknessMm: 100, count: 20 }] }, TOL);
+    expect(withSpacers.stop).toEqual(bare.stop);
+    expect(withSpacers.statesVisited).toBe(bare.statesVisited);
+  });
+
+  it("splits the sizes where the halves' numbers of stacks are closest: one single shim and twenty of another give halves of 2 and 21 stacks", () => {
+    const rig: Rig = { grooves: [{ label: "a", travelMm: 20 }, { label: "b", travelMm: 22 }], shims: [{ thicknessMm: 0.5, count: 1 }, { thicknessMm: 0.05, count: 20 }] };
+    expect(depthStopWorkBound(rig)).toBe(2 + 21 + 2 * (3 * 2 + 2 * 21));
+  });
+
+  it("among equally close stacks takes the fewest shims, then the groove listed first", () => {
+    const rig: Rig = { grooves: [{ label: "upper", travelMm: 25 }, { label: "lower", travelMm: 26 }], shims: [{ thicknessMm: 0.5, count: 2 }, { thicknessMm: 1, count: 1 }] };
     // 25 mm: groove "upper" bare, or "lower" over the 1 mm shim, or over two 0.5 mm shims.
     const s = chooseDepthStop(25, rig, TOL);
     expect(s.groove).toBe("upper");
