@@ -270,6 +270,18 @@ describe("the corners of a rectangle turned in the photo", () => {
     const [bl, br, tr, tl] = [at(-105), at(-15), at(75), at(165)];
     for (const o of [[0, 1, 2, 3], [3, 1, 0, 2], [2, 3, 1, 0]]) expect(orderAsRectangle(o.map((i) => [bl, br, tr, tl][i]))).toEqual([bl, br, tr, tl]);
   });
+
+  it("a 2 : 1 rectangle turned 33° or 38° takes the corner nearest −135° as bottom-left, not the first one below the centre", () => {
+    // Corners of a 2 : 1 rectangle are at ±26.565° and 180° ± 26.565° (atan ½) from its centre; turned 33° they are
+    // at −120.435°, 6.435°, 59.565° and −173.565° (y up). Two lie in the lower left quarter turn: −120.435° is 14.6°
+    // from −135°, −173.565° is 38.6° from it. Turned 38°: −115.435° (19.6°) against −168.565° (33.6°).
+    const at = (deg: number): Point => [1200 + 300 * Math.cos((deg * Math.PI) / 180), 1000 - 300 * Math.sin((deg * Math.PI) / 180)];
+    const a = (Math.atan(0.5) * 180) / Math.PI;
+    for (const turn of [33, 38]) {
+      const [bl, br, tr, tl] = [at(-180 + a + turn), at(-a + turn), at(a + turn), at(180 - a + turn)];
+      for (const o of [[0, 1, 2, 3], [3, 2, 1, 0], [1, 3, 0, 2]]) expect(orderAsRectangle(o.map((i) => [bl, br, tr, tl][i])), `turned ${turn}°`).toEqual([bl, br, tr, tl]);
+    }
+  });
 });
 
 describe("the proportions a photo shows", () => {
