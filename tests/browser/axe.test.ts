@@ -34,6 +34,24 @@ type Scheme = "light" | "dark";
 
 /** A #rrggbb colour as the browser's computed style writes it, `rgb(r, g, b)`. */
 const rgbOf = (hex: string) => `rgb(${[1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16)).join(", ")})`;
+
+/** The palette's colour properties of a scheme, each as the browser paints it. */
+const paletteColours = (scheme: Scheme) => Object.fromEntries(Object.entries(cssVariables(scheme)).map(([k, hex]) => [k, rgbOf(hex)]));
+
+/** What an element inside `within` paints with each of the palette's colour properties. */
+async function painted(page: Page, within: string): Promise<Record<string, string>> {
+  const names = Object.keys(cssVariables("light"));
+  const colours = await page.evaluate(
+    ([selector, props]) => {
+      const probe = document.querySelector(selector)!.appendChild(document.createElement("span"));
+      const out = props.map((n) => ((probe.style.color = `var(${n})`), getComputedStyle(probe).color));
+      probe.remove();
+      return out;
+    },
+    [within, names] as const,
+  );
+  return Object.fromEntries(names.map((n, i) => [n, colours[i]]));
+}
 type Finding = { page: string; rule: string; impact: string; help: string; targets: string[] };
 
 type Walk = {
@@ -146,14 +164,7 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await check("example studio");
     // Every colour of the palette reaches the page in this scheme (the legend's swatches paint with them): an
     // element painted with each property shows the scheme's colour of it.
-    const expected = Object.fromEntries(Object.entries(cssVariables(scheme)).map(([k, hex]) => [k, rgbOf(hex)]));
-    const onPage = await page.evaluate((names) => {
-      const probe = document.body.appendChild(document.createElement("span"));
-      const painted = names.map((n) => ((probe.style.color = `var(${n})`), getComputedStyle(probe).color));
-      probe.remove();
-      return painted;
-    }, Object.keys(expected));
-    expect(Object.fromEntries(Object.keys(expected).map((k, i) => [k, onPage[i]]))).toEqual(expected);
+    expect(await painted(page, "body")).toEqual(paletteColours(scheme));
     await keyboardThroughStudio(page);
     await page.goto("/sign-in");
     await check("sign in");
@@ -207,6 +218,8 @@ describe.each<Scheme>(["light", "dark"])("accessibility of every page, by role, 
     await page.getByRole("link", { name: "Setup card" }).click();
     await page.waitForURL("**/setup-card/**");
     await check("setup card");
+    // The printed card keeps the light theme's colours on a dark screen too.
+    expect(await painted(page, ".setup-card")).toEqual(paletteColours("light"));
     await done();
   });
 
