@@ -73,7 +73,7 @@ export function polygonCheck(points: readonly Vec2[], minAreaMm2: number = DEFAU
   }
   const swept = sweep(points, order);
   const method = swept === LOST ? "pairwise" : "sweep";
-  const met = swept === LOST ? bruteForce(points, edgesOf(points)) : swept;
+  const met = swept === LOST ? pairwiseProblem(points) : swept;
   // Corners all on one line fold the outline onto itself: say it has no area rather than which edges overlap.
   const flat = Math.abs(signedArea(points)) < minAreaMm2;
   if (flat && (met === undefined || met.kind === "edges-touch")) return { problem: { kind: "no-area" }, method };
@@ -137,8 +137,9 @@ function sweep(points: readonly Vec2[], order: Uint32Array): PolygonProblem | un
     }
     // Every edge ending here must be in the status at this corner; if not, the order was lost.
     if (end - lo !== ending.length) return LOST;
+    // Two edges ending here along one line need no test of their own: the nearer one's left end lies inside the
+    // other, so the check above refused it at that corner, met earlier.
     status.splice(lo, ending.length);
-    if (ending.length === 2 && orient2d(x, y, prev.lx, prev.ly, next.lx, next.ly) === 0) return { kind: "edges-touch", edges: pair(prev.i, next.i) };
     if (starting.length === 2) {
       const turn = orient2d(x, y, starting[0].rx, starting[0].ry, starting[1].rx, starting[1].ry);
       if (turn === 0) return { kind: "edges-touch", edges: pair(prev.i, next.i) };
@@ -146,7 +147,8 @@ function sweep(points: readonly Vec2[], order: Uint32Array): PolygonProblem | un
     }
     if (starting.length === 2) status.splice(lo, 0, starting[0], starting[1]);
     else if (starting.length === 1) status.splice(lo, 0, starting[0]);
-    const found = starting.length === 0 ? check(status[lo - 1], status[lo]) : (check(status[lo - 1], status[lo]) ?? check(status[lo + starting.length - 1], status[lo + starting.length]));
+    // The new neighbours: below the corner's edges and above them (the same pair when nothing starts here).
+    const found = check(status[lo - 1], status[lo]) ?? check(status[lo + starting.length - 1], status[lo + starting.length]);
     if (found) return found;
   }
   return undefined;
@@ -168,9 +170,15 @@ function within(e: Edge, x: number, y: number): boolean {
   return (x > e.lx || (x === e.lx && y >= e.ly)) && (x < e.rx || (x === e.rx && y <= e.ry));
 }
 
-/** Every pair of edges, for the case the sweep cannot order (kept so that a wrong answer is never given). */
-function bruteForce(points: readonly Vec2[], edges: readonly Edge[]): PolygonProblem | undefined {
+/**
+ * The first pair of edges, in index order, that cross, touch or overlap, found by testing every pair: O(n²). For
+ * corners that are all distinct (polygonCheck refuses repeated ones first). polygonCheck's safety net for a sweep
+ * that finds its order broken (kept so that a wrong answer is never given), and the plain reference the sweep is
+ * tested against.
+ */
+export function pairwiseProblem(points: readonly Vec2[]): PolygonProblem | undefined {
   const n = points.length;
+  const edges = edgesOf(points);
   for (let i = 0; i < n; i++) {
     for (let j = i + 1; j < n; j++) {
       const a = edges[i];
