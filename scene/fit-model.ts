@@ -3,7 +3,7 @@
 
 import { BufferGeometry, Float32BufferAttribute, ShapeUtils, Vector2 } from "three";
 import type { CaseProfile, CylinderKit, KitResult, Study } from "@/geometry";
-import { drawnCutAxis, FLANGE_DRAWN_MM, flangeRadiusMm, interferenceRegions } from "./fit";
+import { drawnCutAxis, FLANGE_DRAWN_MM, flangeRadiusMm, type InterferenceBand, interferenceRegions } from "./fit";
 import { circleRing, outlineRing } from "./outline";
 import { ringMinus } from "./regions";
 import { extrudeRegions } from "./solids";
@@ -87,9 +87,14 @@ export function flangeGeometry(k: KitResult, kit: CylinderKit, holeMm: number): 
   return { flange, gasket };
 }
 
+/** One band of the interference as a solid, written into `into` when it has room for it (the same number of vertices). */
+export function interferenceBandGeometry(band: InterferenceBand, into?: BufferGeometry): BufferGeometry {
+  return extrudeRegions(band.regions, band.z0, band.z1, { into });
+}
+
 /** Interference as solids (null when the skirt sits in clear space everywhere). */
 export function interferenceGeometry(study: Study, k: KitResult): BufferGeometry | null {
   const bands = interferenceRegions(study, k);
   if (bands.length === 0) return null;
-  return merge(bands.map((b) => extrudeRegions(b.regions, b.z0, b.z1)));
+  return merge(bands.map((b) => interferenceBandGeometry(b)));
 }

@@ -1,5 +1,5 @@
 import type { CylinderKit, KitResult, Study, StudyResult, Vec2 } from "@/geometry";
-import { circleRing, outlineRing } from "./outline";
+import { circleRing, circleSegments, outlineRing } from "./outline";
 import { ringMinus, type Region } from "./regions";
 
 // Drawing facts shared by the 3D view and the 2D drawings, from the core's output only: how a kit's
@@ -58,25 +58,51 @@ function skirtOutsideMouth(study: Study, k: KitResult): Region[] {
   return regions;
 }
 
-/** The bands of depth and the regions where the skirt occupies case material: outside the cut (and mouth) down to the cut's depth, outside the mouth below it. */
-export function interferenceRegions(study: Study, k: KitResult): { z0: number; z1: number; regions: Region[] }[] {
+/** A band of depth where the skirt occupies case material: beside the cut (down to its depth) or below it (outside the mouth). */
+export interface InterferenceBand {
+  readonly part: "beside-cut" | "below-cut";
+  readonly z0: number;
+  readonly z1: number;
+  readonly regions: Region[];
+}
+
+/** Whether every point of `ring` lies inside the polygon drawn for a circle (within its apothem, so inside the drawn polygon too). */
+function ringInsideCircle(ring: readonly Vec2[], c: Vec2, radiusMm: number): boolean {
+  const apothem = radiusMm * Math.cos(Math.PI / circleSegments(radiusMm));
+  return ring.every(([x, y]) => Math.hypot(x - c[0], y - c[1]) <= apothem);
+}
+
+/**
+ * The bands of depth and the regions where the skirt occupies case material: outside the cut (and mouth) down
+ * to the cut's depth, outside the mouth below it. The band below the cut is the same object for the same
+ * skirt, mouth and depths, so a drawing can keep what it built from it while a cut's diameter is dragged.
+ * With `ringsInAnyOrder` (for a caller that only fills the regions, as the 3D view does) a cut inside the
+ * skirt gives the skirt's ring around it as it stands, without the polygon boolean; otherwise the rings are
+ * the boolean's, point for point (the 2D drawings are written from them).
+ */
+export function interferenceRegions(study: Study, k: KitResult, options: { ringsInAnyOrder?: boolean } = {}): InterferenceBand[] {
   const M = study.case.mouth.depthMm;
   const P = k.skirt.protrusionMm;
   const bottom = Math.min(P, M);
   if (bottom <= 0) return [];
   const r = k.skirt.diameterMm / 2;
-  const bands: { z0: number; z1: number; regions: Region[] }[] = [];
+  const bands: InterferenceBand[] = [];
   const cutDepth = k.cut ? Math.min(k.cut.depthMm, bottom) : 0;
   if (k.cut && cutDepth > 0) {
-    const c = k.cut.centerAtDeckMm, s = k.skirt.centerMm;
-    // A skirt disk inside the cut's circle leaves nothing to clip (drawing shortcut, not a clearance).
-    const inside = Math.hypot(c[0] - s[0], c[1] - s[1]) + r <= k.cut.diameterMm / 2;
-    const regions = inside ? [] : ringMinus(circleRing(s, r), [circleRing(c, k.cut.diameterMm / 2), outlineRing(study.case.mouth.outline)]);
-    if (regions.length) bands.push({ z0: 0, z1: cutDepth, regions });
+    const c = k.cut.centerAtDeckMm, s = k.skirt.centerMm, R = k.cut.diameterMm / 2;
+    // Drawing shortcuts, not clearances: a skirt disk inside the cut's circle leaves nothing to clip; a mouth
+    // inside it takes nothing more away than the cut does; and a cut inside the skirt leaves a ring of skirt.
+    const inside = Math.hypot(c[0] - s[0], c[1] - s[1]) + r <= R;
+    const mouth = outlineRing(study.case.mouth.outline);
+    const cut = circleRing(c, R);
+    const mouthInCut = ringInsideCircle(mouth, c, R);
+    const ring = options.ringsInAnyOrder && mouthInCut && ringInsideCircle(cut, s, r);
+    const regions = inside ? [] : ring ? [{ outer: circleRing(s, r), holes: [cut] }] : ringMinus(circleRing(s, r), mouthInCut ? [cut] : [cut, mouth]);
+    if (regions.length) bands.push({ part: "beside-cut", z0: 0, z1: cutDepth, regions });
   }
   if (bottom > cutDepth) {
     const regions = skirtOutsideMouth(study, k);
-    if (regions.length) bands.push({ z0: cutDepth, z1: bottom, regions });
+    if (regions.length) bands.push({ part: "below-cut", z0: cutDepth, z1: bottom, regions });
   }
   return bands;
 }

@@ -1,6 +1,6 @@
 import { BufferGeometry, type Camera, DoubleSide, Float32BufferAttribute, Group, Line, LineBasicMaterial, Mesh, MeshLambertMaterial, Plane } from "three";
 import { FIT, printed, SCENE, SURFACE } from "@/model/palette";
-import { cutGeometry, fitState, interferenceGeometry } from "../fit-model";
+import { cutGeometry, fitState, interferenceBandGeometry, interferenceRegions, type InterferenceBand } from "../fit-model";
 import type { FitSnapshot } from "../store";
 import { placeLabels, STATE_3D } from "./fit-labels";
 import { Label } from "./label";
@@ -32,13 +32,17 @@ export class FitObjects {
   readonly labels = { skirt: new Label(), cut: new Label(), wall: new Label(), hit: new Label() };
   readonly wallLine: Line;
   readonly cut: Mesh;
+  /** The interference beside the cut (rebuilt with every step) and below it (kept while its band is the same). */
   readonly hit: Mesh;
+  readonly hitBelow: Mesh;
   /** The kit's port windows over the case's passages at the deck (empty for a kit without them). */
   readonly ports = new Group();
   readonly portMaterials: PortOverlayMaterials;
   private applied: { snap: FitSnapshot | null; view: ViewState | null; kit: unknown } = { snap: null, view: null, kit: null };
   /** What the port overlay was drawn from: the case's pockets, the kit and the core's verdict on each window. */
   private portsFrom: { pockets: unknown; kit: unknown; verdicts: string } = { pockets: null, kit: null, verdicts: "" };
+  /** The band the interference below the cut was built from. */
+  private belowFrom: InterferenceBand | null = null;
   private view: ViewState | null = null;
 
   constructor() {
@@ -61,6 +65,8 @@ export class FitObjects {
     this.cut.renderOrder = 2;
     this.hit = new Mesh(new BufferGeometry(), this.materials.interference);
     this.hit.renderOrder = 1;
+    this.hitBelow = new Mesh(new BufferGeometry(), this.materials.interference);
+    this.hitBelow.renderOrder = 1;
   }
 
   /** The material of kit i's skirt (made on first use). */
@@ -100,12 +106,26 @@ export class FitObjects {
       this.cut.geometry.dispose();
       this.cut.geometry = cutGeom ?? new BufferGeometry();
     }
-    this.hit.geometry.dispose();
-    const hitGeom = interferenceGeometry(study, k);
-    this.hit.geometry = hitGeom ?? new BufferGeometry();
+    const bands = interferenceRegions(study, k, { ringsInAnyOrder: true });
+    const beside = bands.find((b) => b.part === "beside-cut");
+    const hitGeom = beside ? interferenceBandGeometry(beside, this.hit.geometry) : new BufferGeometry();
+    if (hitGeom !== this.hit.geometry) {
+      this.hit.geometry.dispose();
+      this.hit.geometry = hitGeom;
+    }
+    this.drawBelow(bands.find((b) => b.part === "below-cut") ?? null);
     this.drawPorts(snap);
 
-    placeLabels(this.labels, this.wallLine, snap, v, hitGeom !== null);
+    placeLabels(this.labels, this.wallLine, snap, v, bands.length > 0);
+  }
+
+  /** Rebuilds the interference below the cut when its band changed (not while only the cut's diameter is dragged). */
+  private drawBelow(band: InterferenceBand | null) {
+    const was = this.belowFrom;
+    if (band === was || (band && was && band.regions === was.regions && band.z0 === was.z0 && band.z1 === was.z1)) return;
+    this.belowFrom = band;
+    this.hitBelow.geometry.dispose();
+    this.hitBelow.geometry = band ? interferenceBandGeometry(band) : new BufferGeometry();
   }
 
   /** Redraws the port overlay when what it is drawn from changed (a cut being dragged seldom changes it). */
@@ -147,6 +167,7 @@ export class FitObjects {
     this.wallLine.geometry.dispose();
     this.cut.geometry.dispose();
     this.hit.geometry.dispose();
+    this.hitBelow.geometry.dispose();
     for (const g of this.ports.children) disposeOverlay(g as Group);
     this.portMaterials.dispose();
   }

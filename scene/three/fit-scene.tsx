@@ -59,6 +59,7 @@ export function FitScene({ store, view, fit }: { store: FitStore; view: ViewStat
       <mesh geometry={caseGeom} material={fit.materials.case} />
       <primitive object={fit.cut} />
       <primitive object={fit.hit} />
+      <primitive object={fit.hitBelow} />
       <primitive object={fit.ports} />
       {kits.map((kit, i) =>
         skirts[i] ? <mesh key={kit.id} geometry={skirts[i] ?? undefined} material={fit.skirtMaterial(i)} visible={i === kitIndex || view.overlay} renderOrder={i === kitIndex ? 0 : 3} /> : null,
