@@ -139,7 +139,7 @@ describe("depth stop search", { timeout: 60_000 }, () => {
       "taller than a groove": { grooves: [{ label: "a", travelMm: 5 }, { label: "b", travelMm: 20 }], shims: [{ thicknessMm: 10, count: 1 }, { thicknessMm: 0.25, count: 2 }] },
       // A stack as tall as the groove's travel, reached for a depth as small as the tolerance.
       "as tall as the groove": { grooves: [{ label: "a", travelMm: 1 }], shims: [{ thicknessMm: 1, count: 1 }] },
-      // Halves of four sizes each: 1/16 + 4/16 and 2/16 + 3/16 mm, two shims of one height in the same half.
+      // Halves of four sizes each: 1/16 + 4/16 and 2/16 + 3/16 mm, two stacks of two shims, of one height, in one half.
       "two pairs of one height": { grooves: [{ label: "a", travelMm: 10 }], shims: [1 / 16, 4 / 16, 2 / 16, 3 / 16, 1, 2, 3, 4].map((thicknessMm) => ({ thicknessMm, count: 1 })) },
     };
     const depths = (rig: Rig) => {
@@ -158,7 +158,7 @@ describe("depth stop search", { timeout: 60_000 }, () => {
       }
     });
 
-    it("takes one shim over two when the one is exactly a tolerance further from the depth, and the groove listed first over a later one", () => {
+    it("keeps one shim over two that come within the tolerance of it, and the groove listed first over a later one", () => {
       // 9.6875 mm: in groove a one 0.3125 mm shim gives 0 mm over, two 0.125 mm shims 1/16 mm over (the edge of
       // the tolerance); groove b over one 0.125 mm shim gives 0 mm over with a stack of fewer of the sizes listed first.
       expect(chooseDepthStop(9.6875, gridRigs["count, then groove"], TOL16)).toMatchObject({ groove: "a", shims: [{ thicknessMm: 0.3125, count: 1 }], overshootMm: 0 });
