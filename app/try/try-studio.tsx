@@ -1,6 +1,6 @@
 "use client";
 
-import { Suspense, useState } from "react";
+import { useState } from "react";
 import type { Study, StudyResult } from "@/geometry";
 import { Studio } from "@/app/_ui/studio/studio";
 
@@ -18,10 +18,7 @@ export function TryStudio({ study, result }: { study: Study; result: StudyResult
           </label>
         ))}
       </fieldset>
-      {/* Its own boundary: React brings the studio to life in short steps after the units switch, between which the page answers. */}
-      <Suspense>
-        <Studio study={study} result={result} units={units} />
-      </Suspense>
+      <Studio study={study} result={result} units={units} />
     </div>
   );
 }

@@ -26,6 +26,9 @@ describe("/try as it loads", () => {
     const page = await context.newPage();
     await page.goto(`${inject("baseURL")}/try`);
     expect(await page.locator("[data-testid=view-still] svg").count()).toBe(1);
+    // On show, not held back in a hidden part of the HTML for a script to reveal.
+    expect(await page.locator("[data-testid=view-still] svg").isVisible()).toBe(true);
+    expect(await page.getByTestId("kit-results").isVisible()).toBe(true);
     const verdict = page.getByTestId("verdict");
     expect(await verdict.getAttribute("data-verdict")).toBe(firstKit.verdict);
     expect(await verdict.getAttribute("data-cut")).toBe(firstKit.cut ? firstKit.cut.diameterMm.toFixed(2) : "none");
@@ -60,6 +63,17 @@ describe("/try as it loads", () => {
     await expect.poll(() => page.getByTestId("kit-results").textContent(), { timeout: 30_000 }).toMatch(/\d\.\d{3} in/);
     const same = await page.evaluate(() => (window as unknown as { firstPanel: Element | null }).firstPanel === document.querySelector("[data-testid=kit-results]"));
     expect(same).toBe(true);
+    await context.close();
+  });
+
+  it("keeps a click on the studio made as soon as the page has loaded, while React may still be bringing it to life", async () => {
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    await page.goto(`${inject("baseURL")}/try`);
+    // React brings the page to life in steps; a click on a part not yet alive is played again once it is.
+    await page.getByTestId("customer-toggle").click();
+    await expect.poll(() => page.getByTestId("studio").getAttribute("data-customer"), { timeout: 30_000 }).toBe("true");
+    expect(await page.getByTestId("customer-toggle").getAttribute("aria-pressed")).toBe("true");
     await context.close();
   });
 });

@@ -1,8 +1,9 @@
 "use client";
 
 import type { Money } from "@/model/money";
-import { Suspense } from "react";
+import { memo } from "react";
 import { useFormContext } from "react-hook-form";
+import type { KitResult } from "@/geometry";
 import type { LengthUnits } from "@/model/units";
 import { CutPanel } from "./cut-panel";
 import { HistoryPanel } from "./history-panel";
@@ -32,45 +33,60 @@ type Props = {
   loading: boolean;
 };
 
+// The studio and each column are memoised on their props: the form renders its host again as soon as it has
+// mounted (a layout effect of the form library) and on every change of its state, and the studio need not follow
+// when nothing it shows has changed; the panels that read the form still follow its context.
+
+const StudioPart = memo(StudioSlot);
+
+const InputsColumn = memo(function InputsColumn({ kitNames, units, kit, studs }: { kitNames: Record<string, string>; units: LengthUnits; kit: KitResult | null; studs: string[] }) {
+  return (
+    <div className={`flex min-w-0 flex-col gap-4 ${OFF_SCREEN_FIRST}`}>
+      <SelectionPanel kitNames={kitNames} />
+      <CutPanel units={units} kit={kit} />
+      <ReadingsPanel units={units} studs={studs} />
+    </div>
+  );
+});
+
+const LimitsColumn = memo(function LimitsColumn({ studyId, units, shopLimits }: { studyId: string; units: LengthUnits; shopLimits: Record<string, unknown> }) {
+  return (
+    <div className={`flex min-w-0 flex-col gap-4 ${OFF_SCREEN_FIRST}`}>
+      <LimitsPanel units={units} shopLimits={shopLimits} />
+      <NotesPanel />
+      <HistoryPanel id={studyId} />
+    </div>
+  );
+});
+
+function NotesPanel() {
+  const form = useFormContext<StudyFormValues>();
+  return (
+    <section className="card p-4" aria-label="Notes">
+      <label htmlFor="study-notes" className="font-semibold">
+        Notes
+      </label>
+      <textarea id="study-notes" rows={3} className="field-input" defaultValue={form.getValues("notes")} {...form.register("notes")} />
+    </section>
+  );
+}
+
 /**
  * The plan: the fit studio across the page (the view, the results beside it, the cut and what it gives at the
  * bench), then the inputs that drive it. Each result is shown once, in the studio.
- * The studio and each column are their own boundaries, so React brings them to life one after the other in
- * short steps (the code is all in the page's bundle; nothing waits on the network), and a click on a part not
- * yet alive is replayed once that part is.
  */
 export function PlanTab({ studyId, shown, values, units, kitNames, studs, shopLimits, loading, prices }: Props) {
-  const form = useFormContext<StudyFormValues>();
   const shownKit = shown?.result.kits.find((k) => k.kitId === (values.chosenKitId || values.kitIds[0])) ?? null;
   return (
     <>
       {shown ? (
-        <Suspense>
-          <StudioSlot study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} prices={prices} />
-        </Suspense>
+        <StudioPart study={shown.study} result={shown.result} kitId={values.chosenKitId || null} units={units} prices={prices} />
       ) : (
         <p className="text-ink-2">{loading ? "Loading the case and kits…" : "Results appear once the inputs are complete."}</p>
       )}
       <div className="grid items-start gap-5 lg:grid-cols-2">
-        <div className={`flex min-w-0 flex-col gap-4 ${OFF_SCREEN_FIRST}`}>
-          <Suspense>
-            <SelectionPanel kitNames={kitNames} />
-            <CutPanel units={units} kit={shownKit} />
-            <ReadingsPanel units={units} studs={studs} />
-          </Suspense>
-        </div>
-        <div className={`flex min-w-0 flex-col gap-4 ${OFF_SCREEN_FIRST}`}>
-          <Suspense>
-            <LimitsPanel units={units} shopLimits={shopLimits} />
-            <section className="card p-4" aria-label="Notes">
-              <label htmlFor="study-notes" className="font-semibold">
-                Notes
-              </label>
-              <textarea id="study-notes" rows={3} className="field-input" defaultValue={form.getValues("notes")} {...form.register("notes")} />
-            </section>
-            <HistoryPanel id={studyId} />
-          </Suspense>
-        </div>
+        <InputsColumn kitNames={kitNames} units={units} kit={shownKit} studs={studs} />
+        <LimitsColumn studyId={studyId} units={units} shopLimits={shopLimits} />
       </div>
     </>
   );

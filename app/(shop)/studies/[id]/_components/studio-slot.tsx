@@ -1,10 +1,13 @@
 "use client";
 
-import { useCallback } from "react";
+import { memo, useCallback } from "react";
 import { useFormContext } from "react-hook-form";
 import type { Study, StudyResult } from "@/geometry";
 import type { Money } from "@/model/money";
 import { Studio } from "@/app/_ui/studio/studio";
+
+/** The studio, rendered again only when what it is given changes (not on every render of the form around it). */
+const MemoStudio = memo(Studio);
 import { lengthFieldText, type LengthUnits } from "@/model/units";
 import type { StudyFormValues } from "./study-values";
 
@@ -15,15 +18,16 @@ export type StudioSlotProps = { study: Study; result: StudyResult; kitId: string
  * The least cut leaves the fields blank, so the cut stays "the least cut" and follows the readings.
  */
 export function StudioSlot({ study, result, kitId, units, prices }: StudioSlotProps) {
-  const form = useFormContext<StudyFormValues>();
+  // setValue is the form's own, the same on every render, so the callback (and the studio) stay put.
+  const { setValue } = useFormContext<StudyFormValues>();
   const onCutChange = useCallback(
     (cut: { diameterMm?: number; depthMm?: number }, final: boolean) => {
       if (!final) return;
       const opts = { shouldDirty: true, shouldValidate: true } as const;
-      form.setValue("cut.diameterMm", lengthFieldText(cut.diameterMm, units), opts);
-      form.setValue("cut.depthMm", lengthFieldText(cut.depthMm, units), opts);
+      setValue("cut.diameterMm", lengthFieldText(cut.diameterMm, units), opts);
+      setValue("cut.depthMm", lengthFieldText(cut.depthMm, units), opts);
     },
-    [form, units],
+    [setValue, units],
   );
-  return <Studio study={study} result={result} units={units} onCutChange={onCutChange} chosenKitId={kitId ?? undefined} kitPrices={prices} />;
+  return <MemoStudio study={study} result={result} units={units} onCutChange={onCutChange} chosenKitId={kitId ?? undefined} kitPrices={prices} />;
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import type { LengthUnits } from "@/geometry";
-import { useCallback, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
 import { FormProvider } from "react-hook-form";
 import type { StudyDetail } from "../../../../_ui/query/types";
 import { LineupView } from "./lineup-view";
@@ -12,6 +12,8 @@ import { StudyTabs, type StudyTab } from "./study-tabs";
 import { useStudyEvaluation } from "./use-study-evaluation";
 import { useStudyForm } from "./use-study-form";
 
+const NO_LIMITS: Record<string, unknown> = {};
+
 /** The study page's data side: inputs, live results from the core, background saving, lineup and history. */
 export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: StudyDetail; initialUnits: LengthUnits; onReloaded: () => void }) {
   const units = initialUnits;
@@ -20,10 +22,11 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
   const { rows, shopLimits, evaluation, shown, shownInputs, stale } = useStudyEvaluation(values, inputs);
   const choose = useCallback((kitId: string) => form.setValue("chosenKitId", kitId, { shouldDirty: true }), [form]);
 
-  const kitNames = Object.fromEntries([...rows.kitRows.map((k) => [k.id, k.name]), ...(rows.caseRow ? [[rows.caseRow.id, rows.caseRow.name]] : [])]);
+  // Kept while their rows are the same, so a render of the form passes the plan's parts the same props (see PlanTab).
+  const kitNames = useMemo(() => Object.fromEntries([...rows.kitRows.map((k) => [k.id, k.name]), ...(rows.caseRow ? [[rows.caseRow.id, rows.caseRow.name]] : [])]), [rows.kitRows, rows.caseRow]);
   // The library's prices (money with their currency), for the lineup and the kit switcher (display only).
-  const prices = Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price]));
-  const studs = rows.caseRow?.data.studs.map((s) => s.label) ?? [];
+  const prices = useMemo(() => Object.fromEntries(rows.kitRows.map((k) => [k.id, k.data.price])), [rows.kitRows]);
+  const studs = useMemo(() => rows.caseRow?.data.studs.map((s) => s.label) ?? [], [rows.caseRow]);
 
   return (
     <FormProvider {...form}>
@@ -32,7 +35,7 @@ export function StudyWorkspace({ detail, initialUnits, onReloaded }: { detail: S
         <StudyNotices save={save} onReloaded={onReloaded} failed={rows.failed} evaluation={evaluation} stale={stale} basis={shownInputs} values={values} units={units} />
         <StudyTabs tab={tab} onTab={setTab} />
         {tab === "plan" ? (
-          <PlanTab prices={prices} studyId={detail.item.id} shown={shown} values={values} units={units} kitNames={kitNames} studs={studs} shopLimits={shopLimits ?? {}} loading={rows.loading} />
+          <PlanTab prices={prices} studyId={detail.item.id} shown={shown} values={values} units={units} kitNames={kitNames} studs={studs} shopLimits={shopLimits ?? NO_LIMITS} loading={rows.loading} />
         ) : (
           <LineupView shown={shown} units={units} prices={prices} chosen={values.chosenKitId} onChoose={choose} mouthRow={rows.caseRow} />
         )}
