@@ -5,9 +5,15 @@ import type { Money } from "./money";
 /** Largest amount a price or a line may hold, in minor units (10 million major units). */
 export const MAX_AMOUNT_MINOR = 1_000_000_000;
 
-/** How many minor-unit digits the currency has (2 for EUR, 0 for JPY), as the runtime's ISO 4217 data says. */
+const digitsOf = new Map<string, number>();
+/** How many minor-unit digits the currency has (2 for EUR, 0 for JPY), as the runtime's ISO 4217 data says (asked once per currency: a number format is costly to make). */
 export function minorDigits(currency: string): number {
-  return new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ?? 2;
+  let digits = digitsOf.get(currency);
+  if (digits === undefined) {
+    digits = new Intl.NumberFormat("en", { style: "currency", currency }).resolvedOptions().maximumFractionDigits ?? 2;
+    digitsOf.set(currency, digits);
+  }
+  return digits;
 }
 
 const formats = new Map<string, Intl.NumberFormat>();
