@@ -1,4 +1,4 @@
-import { BufferGeometry, Float32BufferAttribute, ShapeUtils, Vector2 } from "three";
+import { BufferAttribute, BufferGeometry, ShapeUtils, Vector2 } from "three";
 import type { Vec2 } from "@/geometry";
 import { ccw } from "./outline";
 
@@ -37,19 +37,13 @@ export interface ExtrudeOptions {
  * triangulated by earcut (three's ShapeUtils), side walls per ring edge, outward normals.
  */
 export function extrudeRegions(regions: readonly Region[], zTop: number, zBottom: number, options: ExtrudeOptions = {}): BufferGeometry {
-  const pos: number[] = [];
-  const nor: number[] = [];
   const st = options.shiftTop ?? [0, 0];
   const sb = options.shiftBottom ?? [0, 0];
-  // world = (x, −z, −y), written out to spare an array per vertex.
-  const push = (x: number, y: number, z: number, n: [number, number, number]) => {
-    pos.push(x, -z, -y);
-    nor.push(n[0], -n[2], -n[1]);
-  };
-  for (const region of regions) {
+  const smooth = options.smooth ?? false;
+  // Each region's rings (the outer counter-clockwise, the holes clockwise) and its caps' triangles.
+  const parts = regions.map((region) => {
     const outer = ccw(region.outer);
     const holes = region.holes.map((h) => ccw(h).reverse());
-    const all = [outer, ...holes].flat();
     const tris =
       options.capTriangles && regions.length === 1
         ? options.capTriangles
@@ -57,30 +51,49 @@ export function extrudeRegions(regions: readonly Region[], zTop: number, zBottom
             outer.map(([x, y]) => new Vector2(x, y)),
             holes.map((h) => h.map(([x, y]) => new Vector2(x, y))),
           );
+    const rings = [outer, ...holes];
+    return { rings, all: rings.flat(), tris };
+  });
+  // Six vertices a cap triangle (top and bottom) and a side edge: the buffers are sized once and written in place.
+  const vertices = parts.reduce((sum, p) => sum + 6 * p.tris.length + 6 * p.rings.reduce((n, r) => n + r.length, 0), 0);
+  const into = options.into;
+  const reuse = into?.getAttribute("position")?.array.length === 3 * vertices && into.getAttribute("normal")?.array.length === 3 * vertices;
+  const pos = reuse ? (into.getAttribute("position").array as Float32Array) : new Float32Array(3 * vertices);
+  const nor = reuse ? (into.getAttribute("normal").array as Float32Array) : new Float32Array(3 * vertices);
+  let w = 0;
+  // world = (x, −z, −y), for the normal as for the point.
+  const put: Put = (x, y, z, nx, ny, nz) => {
+    pos[w] = x;
+    pos[w + 1] = -z;
+    pos[w + 2] = -y;
+    nor[w] = nx;
+    nor[w + 1] = -nz;
+    nor[w + 2] = -ny;
+    w += 3;
+  };
+  for (const { rings, all, tris } of parts) {
     for (const [a, b, c] of tris) {
       // Top cap faces up (−z); seen from above, counter-clockwise in the (x, y) plane stays counter-clockwise in the world.
-      for (const i of [a, b, c]) push(all[i][0] + st[0], all[i][1] + st[1], zTop, [0, 0, -1]);
-      for (const i of [a, c, b]) push(all[i][0] + sb[0], all[i][1] + sb[1], zBottom, [0, 0, 1]);
+      for (const i of [a, b, c]) put(all[i][0] + st[0], all[i][1] + st[1], zTop, 0, 0, -1);
+      for (const i of [a, c, b]) put(all[i][0] + sb[0], all[i][1] + sb[1], zBottom, 0, 0, 1);
     }
-    for (const ring of [outer, ...holes]) sideWalls(ring, zTop, zBottom, st, sb, options.smooth ?? false, push);
+    for (const ring of rings) sideWalls(ring, zTop, zBottom, st, sb, smooth, put);
   }
-  const into = options.into;
-  const reuse = into?.getAttribute("position")?.array.length === pos.length && into.getAttribute("normal")?.array.length === nor.length;
   const g = reuse ? into : new BufferGeometry();
   if (reuse) {
-    for (const [name, values] of [["position", pos], ["normal", nor]] as const) {
-      const a = g.getAttribute(name) as Float32BufferAttribute;
-      (a.array as Float32Array).set(values);
-      a.needsUpdate = true;
-    }
+    g.getAttribute("position").needsUpdate = true;
+    g.getAttribute("normal").needsUpdate = true;
   } else {
-    g.setAttribute("position", new Float32BufferAttribute(pos, 3));
-    g.setAttribute("normal", new Float32BufferAttribute(nor, 3));
+    g.setAttribute("position", new BufferAttribute(pos, 3));
+    g.setAttribute("normal", new BufferAttribute(nor, 3));
   }
   g.computeBoundingBox();
   g.computeBoundingSphere();
   return g;
 }
+
+/** Writes one vertex: a core point and its normal, in the core's frame. */
+type Put = (x: number, y: number, z: number, nx: number, ny: number, nz: number) => void;
 
 function edgeNormal(a: Vec2, b: Vec2): Vec2 {
   const dx = b[0] - a[0], dy = b[1] - a[1];
@@ -88,35 +101,31 @@ function edgeNormal(a: Vec2, b: Vec2): Vec2 {
   return [dy / l, -dx / l];
 }
 
-function sideWalls(
-  ring: readonly Vec2[],
-  zt: number,
-  zb: number,
-  st: Vec2,
-  sb: Vec2,
-  smooth: boolean,
-  push: (x: number, y: number, z: number, n: [number, number, number]) => void,
-) {
+function sideWalls(ring: readonly Vec2[], zt: number, zb: number, st: Vec2, sb: Vec2, smooth: boolean, put: Put) {
   const n = ring.length;
-  const vn = ring.map((_, i) => {
-    const a = edgeNormal(ring[(i - 1 + n) % n], ring[i]);
-    const b = edgeNormal(ring[i], ring[(i + 1) % n]);
-    const l = Math.hypot(a[0] + b[0], a[1] + b[1]) || 1;
-    return [(a[0] + b[0]) / l, (a[1] + b[1]) / l] as Vec2;
-  });
+  // Smooth: each vertex's normal halfway between its two edges' normals.
+  const vn = smooth
+    ? ring.map((_, i) => {
+        const a = edgeNormal(ring[(i - 1 + n) % n], ring[i]);
+        const b = edgeNormal(ring[i], ring[(i + 1) % n]);
+        const l = Math.hypot(a[0] + b[0], a[1] + b[1]) || 1;
+        return [(a[0] + b[0]) / l, (a[1] + b[1]) / l] as Vec2;
+      })
+    : null;
   for (let i = 0; i < n; i++) {
     const j = (i + 1) % n;
     const p = ring[i], q = ring[j];
-    const en = edgeNormal(p, q);
-    const ni: [number, number, number] = smooth ? [vn[i][0], vn[i][1], 0] : [en[0], en[1], 0];
-    const nj: [number, number, number] = smooth ? [vn[j][0], vn[j][1], 0] : [en[0], en[1], 0];
-    const pt: [number, number, number] = [p[0] + st[0], p[1] + st[1], zt];
-    const qt: [number, number, number] = [q[0] + st[0], q[1] + st[1], zt];
-    const pb: [number, number, number] = [p[0] + sb[0], p[1] + sb[1], zb];
-    const qb: [number, number, number] = [q[0] + sb[0], q[1] + sb[1], zb];
+    const ni = vn ? vn[i] : edgeNormal(p, q);
+    const nj = vn ? vn[j] : ni;
+    const ptx = p[0] + st[0], pty = p[1] + st[1], qtx = q[0] + st[0], qty = q[1] + st[1];
+    const pbx = p[0] + sb[0], pby = p[1] + sb[1], qbx = q[0] + sb[0], qby = q[1] + sb[1];
     // Outward-facing winding for a counter-clockwise ring (holes are passed clockwise, so they face inward to the hole).
-    push(...pt, ni); push(...pb, ni); push(...qb, nj);
-    push(...pt, ni); push(...qb, nj); push(...qt, nj);
+    put(ptx, pty, zt, ni[0], ni[1], 0);
+    put(pbx, pby, zb, ni[0], ni[1], 0);
+    put(qbx, qby, zb, nj[0], nj[1], 0);
+    put(ptx, pty, zt, ni[0], ni[1], 0);
+    put(qbx, qby, zb, nj[0], nj[1], 0);
+    put(qtx, qty, zt, nj[0], nj[1], 0);
   }
 }
 

@@ -1,8 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { evaluateStudy } from "@/geometry";
 import { interferenceRegions } from "@/scene/fit";
-import { circleRing, outlineRing } from "@/scene/outline";
+import { interferenceBandGeometry } from "@/scene/fit-model";
+import { circleRing, circleSegments, outlineRing } from "@/scene/outline";
 import { regionsArea, ringMinus } from "@/scene/regions";
+import { meshVolume } from "@/scene/solids";
 import { polygonStudy, roundStudy } from "./fixtures";
 
 // While a cut's diameter is dragged, the interference below the cut (the skirt outside the mouth) stays as
@@ -28,6 +30,22 @@ for (const name of ["round", "polygon"] as const) {
       expect(band.regions).toHaveLength(1);
       expect(band.regions[0].outer).toEqual(circleRing(k.skirt.centerMm, k.skirt.diameterMm / 2));
       expect(band.regions[0].holes).toEqual([circleRing(k.cut!.centerAtDeckMm, k.cut!.diameterMm / 2)]);
+    });
+
+    it("write the band beside the cut into the last step's geometry when it has as many vertices, equal to a fresh build", () => {
+      const a = at(name, 52.5), b = at(name, 52.55);
+      expect(circleSegments(52.5 / 2)).toBe(circleSegments(52.55 / 2));
+      const beside = (x: typeof a) => interferenceRegions(x.study, x.k, { ringsInAnyOrder: true }).find((band) => band.part === "beside-cut")!;
+      const g = interferenceBandGeometry(beside(a));
+      const buffer = g.getAttribute("position").array;
+      const reused = interferenceBandGeometry(beside(b), g);
+      expect(reused).toBe(g);
+      expect(reused.getAttribute("position").array).toBe(buffer);
+      const fresh = interferenceBandGeometry(beside(b));
+      expect(Array.from(reused.getAttribute("position").array)).toEqual(Array.from(fresh.getAttribute("position").array));
+      expect(Array.from(reused.getAttribute("normal").array)).toEqual(Array.from(fresh.getAttribute("normal").array));
+      // A ring prism: the band's area times its depth, to single precision.
+      expect(meshVolume(reused) / (regionsArea(beside(b).regions) * 20)).toBeCloseTo(1, 5);
     });
 
     it("keep the very regions below the cut while only its diameter changes, and new ones for a new depth", () => {
