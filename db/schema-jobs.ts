@@ -1,7 +1,6 @@
 // Tables for jobs, their readings, photos and payments. Kept apart from schema.ts so the two can grow side by side.
-import { relations } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex, type SQLiteColumnBuilderBase } from "drizzle-orm/sqlite-core";
-import { organization, user } from "./schema";
+import { user } from "./schema";
 import { photoCheck, photoObject } from "./schema-photos";
 import { byWhomAndWhen, createdByRef, personRef, shopRef, version } from "./schema-refs";
 import { createdAt, partOf, timestamp, updatedAt } from "./schema-columns";
@@ -164,19 +163,6 @@ export const jobQuestion = partOfJob(
   "at",
 );
 
-export const jobRelations = relations(job, ({ many, one }) => ({
-  shop: one(organization, { fields: [job.organizationId], references: [organization.id] }),
-  events: many(jobEvent),
-  readings: many(jobReading),
-  photos: many(jobPhoto),
-  payments: many(jobPayment),
-  questions: many(jobQuestion),
-}));
-export const jobEventRelations = relations(jobEvent, ({ one }) => ({ job: one(job, { fields: [jobEvent.jobId], references: [job.id] }) }));
-export const jobReadingRelations = relations(jobReading, ({ one }) => ({ job: one(job, { fields: [jobReading.jobId], references: [job.id] }) }));
-export const jobPhotoRelations = relations(jobPhoto, ({ one }) => ({ job: one(job, { fields: [jobPhoto.jobId], references: [job.id] }) }));
-export const jobPaymentRelations = relations(jobPayment, ({ one }) => ({ job: one(job, { fields: [jobPayment.jobId], references: [job.id] }) }));
-export const jobQuestionRelations = relations(jobQuestion, ({ one }) => ({ job: one(job, { fields: [jobQuestion.jobId], references: [job.id] }) }));
 
 export type JobRecord = typeof job.$inferSelect;
 export type JobPhotoRecord = typeof jobPhoto.$inferSelect;

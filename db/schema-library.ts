@@ -1,4 +1,3 @@
-import { relations } from "drizzle-orm";
 import { index, integer, sqliteTable, text, uniqueIndex, type SQLiteColumnBuilderBase } from "drizzle-orm/sqlite-core";
 import { partOf } from "./schema-columns";
 import { byWhomAndWhen, namedShopRow, rowStamps } from "./schema-refs";
@@ -81,18 +80,6 @@ export const studyEvent = sqliteTable(
   },
   (t) => [index("study_event_study_idx").on(t.studyId, t.at)],
 );
-
-export const studyRelations = relations(study, ({ one, many }) => ({
-  case: one(caseProfile, { fields: [study.caseId], references: [caseProfile.id] }),
-  rig: one(boringRig, { fields: [study.rigId], references: [boringRig.id] }),
-  kits: many(studyKit),
-  events: many(studyEvent),
-}));
-export const studyKitRelations = relations(studyKit, ({ one }) => ({
-  study: one(study, { fields: [studyKit.studyId], references: [study.id] }),
-  kit: one(cylinderKit, { fields: [studyKit.kitId], references: [cylinderKit.id] }),
-}));
-export const studyEventRelations = relations(studyEvent, ({ one }) => ({ study: one(study, { fields: [studyEvent.studyId], references: [study.id] }) }));
 
 export type CaseProfileRow = typeof caseProfile.$inferSelect;
 export type CylinderKitRow = typeof cylinderKit.$inferSelect;
