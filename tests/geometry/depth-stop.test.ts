@@ -197,19 +197,21 @@ describe("depth stop search", { timeout: 60_000 }, () => {
   it("answers the same for a shim stock whatever was asked of it before, with other grooves or another tolerance", () => {
     // The stacks of each half are kept per shim stock: they must be listed again when the tallest useful stack
     // or the tolerance they were grouped by changes.
-    const shims = [{ thicknessMm: 10, count: 1 }, { thicknessMm: 1 / 64, count: 3 }];
-    const deep = { grooves: [{ label: "deep", travelMm: 20 }], shims };
-    const fresh = () => ({ grooves: deep.grooves, shims: shims.map((s) => ({ ...s })) });
+    // Two stocks alike, each searched first one way and then for the same 9.984375 mm under a 20 mm groove.
+    const stock = () => [{ thicknessMm: 10, count: 1 }, { thicknessMm: 1 / 64, count: 3 }];
     const wantedMm = 20 - 10 - 1 / 64;
-    // First a coarse tolerance of 1/16 mm on a groove 1/16 mm shallower: the same tallest useful stack (20 mm),
-    // but the 1/64 mm shims fall within one tolerance of the bare groove and are grouped with it.
-    chooseDepthStop(9, { grooves: [{ label: "coarse", travelMm: 20 - 1 / 16 }], shims }, 1 / 16);
-    const exact = chooseDepthStop(wantedMm, deep, 0);
-    expect(exact).toEqual(chooseDepthStop(wantedMm, fresh(), 0));
+    const deep = (shims: Rig["shims"]) => ({ grooves: [{ label: "deep", travelMm: 20 }], shims });
+    const exact = chooseDepthStop(wantedMm, deep(stock()), 0);
     expect(exact).toMatchObject({ shims: [{ thicknessMm: 10, count: 1 }, { thicknessMm: 1 / 64, count: 1 }], overshootMm: 0 });
-    // Then a shallow groove, which the 10 mm shim is no use to: its stacks are listed only up to 5 mm.
-    chooseDepthStop(4.5, { grooves: [{ label: "shallow", travelMm: 5 }], shims }, 0);
-    expect(chooseDepthStop(wantedMm, deep, 0)).toEqual(exact);
+    // A shallow groove first, which the 10 mm shim is no use to: its stacks are listed only up to 5 mm.
+    const first = stock();
+    chooseDepthStop(4.5, { grooves: [{ label: "shallow", travelMm: 5 }], shims: first }, 0);
+    expect(chooseDepthStop(wantedMm, deep(first), 0)).toEqual(exact);
+    // A coarse tolerance of 1/16 mm first, on a groove 1/16 mm shallower: the same tallest useful stack (20 mm),
+    // but the 1/64 mm shims fall within one tolerance of the bare groove and are grouped with it.
+    const second = stock();
+    chooseDepthStop(9, { grooves: [{ label: "coarse", travelMm: 20 - 1 / 16 }], shims: second }, 1 / 16);
+    expect(chooseDepthStop(wantedMm, deep(second), 0)).toEqual(exact);
   });
 
   it("lists a rig's stacks once: the next search of the same rig looks at fewer states by the stacks of both halves", () => {
