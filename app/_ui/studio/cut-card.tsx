@@ -1,5 +1,6 @@
 "use client";
 
+import { useMemo } from "react";
 import type { KitResult, Study, StudyResult } from "@/geometry";
 import { TERM } from "@/model/glossary";
 import { diameterLabel, lengthLabel, type LengthUnits } from "@/model/units";
@@ -24,6 +25,22 @@ export function stepNote(k: KitResult, units: LengthUnits): string {
   return `moves in ${lengthLabel(2 * res, units)} steps: the caliper reads the setting across head and bit in ${lengthLabel(res, units)} steps, and the cut is twice the setting less the head`;
 }
 
+type OnCutChange = (patch: CutDraft, final: boolean, at?: number) => void;
+
+/**
+ * Each length's live and final handlers, made once per `onChange`: a slider whose figures did not move
+ * (the depth while the diameter is dragged) is then given the same props and is not drawn again.
+ */
+function useSliderHandlers(onChange: OnCutChange) {
+  return useMemo(() => {
+    const of = (part: keyof CutDraft) => ({
+      onLive: (mm: number, at: number) => onChange({ [part]: mm }, false, at),
+      onCommit: (mm: number) => onChange({ [part]: mm }, true),
+    });
+    return { diameterMm: of("diameterMm"), depthMm: of("depthMm") };
+  }, [onChange]);
+}
+
 type Props = {
   study: Study;
   result: StudyResult;
@@ -31,11 +48,12 @@ type Props = {
   units: LengthUnits;
   /** True while the cut is each kit's least cut (no number typed): it follows the readings. */
   following: boolean;
-  onChange: (patch: CutDraft, final: boolean, at?: number) => void;
+  onChange: OnCutChange;
 };
 
 /** The planned cut: diameter and depth sliders with their fields, the rig's reach and the largest safe cut on the track. */
 export function CutCard({ study, result, kit, units, following, onChange }: Props) {
+  const handlers = useSliderHandlers(onChange);
   const r = cutRanges(study, result);
   const least = kit.leastCut;
   const marks: TrackMark[] = [{ label: `${TERM.largestCut.short.toLowerCase()} ${diameterLabel(kit.maxCutDiameterMm, units)}`, fromMm: kit.maxCutDiameterMm, tone: "interfere" }];
@@ -59,7 +77,7 @@ export function CutCard({ study, result, kit, units, following, onChange }: Prop
   return (
     <div className="card grid gap-4 p-4 md:grid-cols-2" aria-label={TERM.plannedCut.label}>
       {sliders.map(({ part, ...slider }) => (
-        <CutSlider key={part} {...slider} stepMm={STEP_MM} units={units} onLive={(mm, at) => onChange({ [part]: mm }, false, at)} onCommit={(mm) => onChange({ [part]: mm }, true)} />
+        <CutSlider key={part} {...slider} {...handlers[part]} stepMm={STEP_MM} units={units} />
       ))}
       <div className="flex flex-wrap items-center gap-2 md:col-span-2">
         {least && (

@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useId, useRef, useState } from "react";
+import { memo, useEffect, useId, useRef, useState } from "react";
 import { lengthFieldText, lengthLabel, parseLengthText } from "@/model/units";
 
 /** A figure marked on the slider's track: a point, or a band from one value to another. */
@@ -91,8 +91,11 @@ function useLengthText({ valueMm, minMm, maxMm, units, onCommit }: Pick<CutSlide
   return { text, error, type: setTyped, submit };
 }
 
-/** A slider and a number field for one length, in the user's units; the slider works in mm steps. */
-export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, marks, testId, onLive, onCommit }: CutSliderProps) {
+/**
+ * A slider and a number field for one length, in the user's units; the slider works in mm steps. Drawn again
+ * only when a prop changes, so give it steady handlers.
+ */
+export const CutSlider = memo(function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, marks, testId, onLive, onCommit }: CutSliderProps) {
   const id = useId();
   const range = useRangeCommit(onCommit);
   const { text, error, type, submit } = useLengthText({ valueMm, minMm, maxMm, units, onCommit });
@@ -154,4 +157,4 @@ export function CutSlider({ label, valueMm, minMm, maxMm, stepMm, units, hint, m
       ) : null}
     </div>
   );
-}
+});
