@@ -28,6 +28,43 @@ export interface ScreenPlacement {
 
 const scratch = new Vector3();
 
+/** The least gap, CSS px, between a label and the edge of the view. */
+const EDGE_PX = 4;
+
+/** A label's box on screen: its top left corner in CSS px from the view's top left and the scale of its box. */
+export interface ShownBox {
+  readonly left: number;
+  readonly top: number;
+  readonly scale: number;
+}
+
+/**
+ * The box of a label `widthPx` wide at scale 1 (and BOX_PX high), set beside its anchor on the side `align`
+ * names and kept inside a view of `width` × `height` CSS px: it slides along the view's edge rather than
+ * being cut off, and shrinks when it is wider (or higher) than the view itself. A small part seen close up
+ * on a phone puts its labels near the edges, where they would otherwise be clipped.
+ */
+export function boxInView(at: ScreenPlacement, widthPx: number, align: 0 | 1, width: number, height: number): ShownBox {
+  const scale = Math.min(at.scale, Math.max(0, width - 2 * EDGE_PX) / widthPx, Math.max(0, height - 2 * EDGE_PX) / BOX_PX);
+  const w = widthPx * scale;
+  const h = BOX_PX * scale;
+  const within = (v: number, lo: number, hi: number) => Math.min(Math.max(v, lo), Math.max(lo, hi));
+  return {
+    left: within(at.x - align * w, EDGE_PX, width - EDGE_PX - w),
+    top: within(at.y - h / 2, EDGE_PX, height - EDGE_PX - h),
+    scale,
+  };
+}
+
+/** The width of a label's box at scale 1 for `text`, px: its text in the label's font and its side padding. */
+let measure: CanvasRenderingContext2D | null = null;
+function boxWidthPx(text: string, family: string): number {
+  measure ??= document.createElement("canvas").getContext("2d");
+  if (!measure) return text.length * FONT_PX * 0.6 + 2 * PAD_PX;
+  measure.font = `600 ${FONT_PX}px ${family}`;
+  return Math.ceil(measure.measureText(text).width) + 2 * PAD_PX;
+}
+
 /**
  * Projects a scene point into a view of `width` × `height` CSS px and gives the scale at which a box of
  * BOX_PX stands `heightMm` tall there: the size a camera-facing board of that height has in the picture.
@@ -57,8 +94,11 @@ export class Label {
   private text = "";
   private color = "";
   private written = { transform: "", shown: false };
+  /** The box's width at scale 1 for the text `measured`, px (measured again when the text changes). */
+  private widthPx = 0;
+  private measured = "";
   /** Where it was last put, for the snapshot. */
-  private placed: ScreenPlacement | null = null;
+  private placed: ShownBox | null = null;
 
   constructor() {
     const el = document.createElement("div");
@@ -101,10 +141,15 @@ export class Label {
   place(camera: Camera, width: number, height: number) {
     const at = screenPlacement(this.anchor, camera, width, height, this.heightMm);
     const shown = this.visible && this.text !== "" && at.inFront;
-    this.placed = shown ? at : null;
-    if (shown) {
+    if (shown && this.measured !== this.text) {
+      this.widthPx = boxWidthPx(this.text, this.family());
+      this.measured = this.text;
+    }
+    const box = shown ? boxInView(at, this.widthPx, this.align, width, height) : null;
+    this.placed = box;
+    if (box) {
       // Round to a tenth of a pixel, so a frame that leaves the label where it was writes nothing.
-      const t = `translate(${at.x.toFixed(1)}px,${at.y.toFixed(1)}px) scale(${at.scale.toFixed(4)}) translate(${-100 * this.align}%,-50%)`;
+      const t = `translate(${box.left.toFixed(1)}px,${box.top.toFixed(1)}px) scale(${box.scale.toFixed(4)})`;
       if (t !== this.written.transform) this.element.style.transform = t;
       this.written.transform = t;
     }
@@ -114,14 +159,13 @@ export class Label {
 
   /** Draws the label as it is shown into a 2D context of the view at `dpr` device px per CSS px (for a snapshot of the view). */
   drawInto(ctx: CanvasRenderingContext2D, dpr: number) {
-    const at = this.placed;
-    if (!at) return;
-    const family = getComputedStyle(this.element).fontFamily || "ui-sans-serif, sans-serif";
+    const box = this.placed;
+    if (!box) return;
     ctx.save();
-    ctx.font = `600 ${FONT_PX}px ${family}`;
-    const w = Math.ceil(ctx.measureText(this.text).width) + 2 * PAD_PX;
-    const k = at.scale * dpr;
-    ctx.setTransform(k, 0, 0, k, at.x * dpr - this.align * w * k, at.y * dpr - (BOX_PX / 2) * k);
+    ctx.font = `600 ${FONT_PX}px ${this.family()}`;
+    const w = this.widthPx;
+    const k = box.scale * dpr;
+    ctx.setTransform(k, 0, 0, k, box.left * dpr, box.top * dpr);
     ctx.beginPath();
     ctx.roundRect(FRAME_PX / 2, FRAME_PX / 2, w - FRAME_PX, BOX_PX - FRAME_PX, RADIUS_PX);
     ctx.globalAlpha = GROUND_ALPHA;
@@ -135,6 +179,13 @@ export class Label {
     ctx.textBaseline = "middle";
     ctx.fillText(this.text, PAD_PX, BOX_PX / 2 + 2);
     ctx.restore();
+  }
+
+  /** The label's font family as the page gives it (read once it is on the page). */
+  private fontFamily = "";
+  private family(): string {
+    if (!this.fontFamily && this.element.isConnected) this.fontFamily = getComputedStyle(this.element).fontFamily;
+    return this.fontFamily || "ui-sans-serif, sans-serif";
   }
 
   dispose() {

@@ -2,7 +2,7 @@
 // scrolls sideways (document.scrollingElement.scrollWidth ≤ innerWidth).
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPerson, signedInTab } from "../support/browser";
+import { launchBrowser, newPerson, signedInTab, waitUntilDrawn } from "../support/browser";
 import { DEMO, signIn } from "../support/http";
 import { insertExampleStudy, jobBody, me } from "../integration/jobs-support";
 
@@ -105,6 +105,21 @@ describe("every page at 390 px, by role", () => {
     const consult = await firstHref(page, 'main a[href^="/consult/"]');
     expect(consult, "the customer has a shared job").toBeTruthy();
     await checkPages(page, ["/consult", consult!]);
+    // The 3D view's labels stand wholly inside the view box, not cut off at its edges, on this small screen.
+    await page.getByTestId("view").first().scrollIntoViewIfNeeded();
+    await waitUntilDrawn(page, 30_000);
+    const labels = () =>
+      page.evaluate(() => {
+        const view = document.querySelector("[data-testid=view]")!.getBoundingClientRect();
+        return Array.from(document.querySelectorAll<HTMLElement>("[data-testid=fit-labels] [data-label]"))
+          .filter((e) => getComputedStyle(e).visibility === "visible")
+          .map((e) => {
+            const r = e.getBoundingClientRect();
+            return { text: e.textContent, out: r.left < view.left - 0.5 || r.right > view.right + 0.5 || r.top < view.top - 0.5 || r.bottom > view.bottom + 0.5 };
+          });
+      });
+    await expect.poll(async () => (await labels()).length).toBeGreaterThan(0);
+    expect((await labels()).filter((l) => l.out)).toEqual([]);
     await person.close();
   });
 });

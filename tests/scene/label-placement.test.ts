@@ -1,6 +1,6 @@
 import { PerspectiveCamera, Vector3 } from "three";
 import { describe, expect, it } from "vitest";
-import { LABEL_BOX_PX, screenPlacement } from "@/scene/three/label";
+import { boxInView, LABEL_BOX_PX, screenPlacement } from "@/scene/three/label";
 
 // The 3D view's labels are HTML over the canvas, pinned to a point of the scene and sized as a board of a
 // given height standing there. The checks are those of the pinhole camera: the point looked at is seen at
@@ -54,5 +54,36 @@ describe("where a label of the 3D view is shown", () => {
   it("says when the point is behind the camera", () => {
     const behind = cam.position.clone().add(cam.position.clone().sub(target));
     expect(screenPlacement(behind, cam, W, H, 4).inFront).toBe(false);
+  });
+});
+
+// A label near the edge of a small view (a small part seen close up on a phone) is kept inside the view: it
+// slides along the edge, and shrinks only when it is wider than the view. Our own layout rule; the figures
+// follow from the box's corners.
+describe("a label kept inside the view", () => {
+  const VW = 340, VH = 255, WIDE = 600, EDGE = 4;
+  const at = (x: number, y: number, scale: number) => ({ x, y, scale, inFront: true });
+
+  it("stands beside its anchor when it fits", () => {
+    const box = boxInView(at(100, 120, 0.25), WIDE, 0, VW, VH);
+    expect(box).toEqual({ left: 100, top: 120 - (LABEL_BOX_PX * 0.25) / 2, scale: 0.25 });
+    const leftOf = boxInView(at(300, 120, 0.25), WIDE, 1, VW, VH);
+    expect(leftOf.left).toBeCloseTo(300 - WIDE * 0.25, 9);
+  });
+
+  it("slides back inside across the right edge, the left edge and the bottom", () => {
+    const right = boxInView(at(250, 120, 0.25), WIDE, 0, VW, VH);
+    expect(right.left + WIDE * right.scale).toBeCloseTo(VW - EDGE, 9);
+    expect(right.scale).toBe(0.25);
+    const left = boxInView(at(60, 120, 0.25), WIDE, 1, VW, VH);
+    expect(left.left).toBe(EDGE);
+    const low = boxInView(at(100, VH + 30, 0.25), WIDE, 0, VW, VH);
+    expect(low.top + LABEL_BOX_PX * low.scale).toBeCloseTo(VH - EDGE, 9);
+  });
+
+  it("shrinks to the view's width when it is wider than the view", () => {
+    const box = boxInView(at(170, 120, 1), WIDE, 0, VW, VH);
+    expect(WIDE * box.scale).toBeCloseTo(VW - 2 * EDGE, 9);
+    expect(box.left).toBe(EDGE);
   });
 });
