@@ -16,13 +16,8 @@ const INK = SURFACE.ink.light;
 const LABEL_MM = 4.2;
 const LABEL_CUSTOMER_MM = 7.5;
 
-/** The fit view's labels, one per thing named. */
-export interface FitLabelSet {
-  readonly skirt: Label;
-  readonly cut: Label;
-  readonly wall: Label;
-  readonly hit: Label;
-}
+/** The fit view's labels, one per thing named: the skirt, the cut, the thinnest wall and the interference. */
+export type FitLabelSet = Readonly<Record<"skirt" | "cut" | "wall" | "hit", Label>>;
 
 /** Writes the labels and pins them to the scene, and places the thinnest-wall mark, for the kit on show; `hitShown` when the interference solid is drawn. */
 export function placeLabels(L: FitLabelSet, wallLine: Line, snap: FitSnapshot, v: ViewState, hitShown: boolean) {
