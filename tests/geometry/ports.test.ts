@@ -281,6 +281,41 @@ describe("the port overlay's building blocks", () => {
     expect(o.steps.outerMm).toBeCloseTo(35 - 40, 9);
   });
 
+  // The centroid exactly on an edge of the port (plane geometry, common practice, no published source): the
+  // middle prong is y ∈ [0, 0.5] to x = 36.5 (area 2.25, y moment 2.25·0.25 = 0.5625) and the bottom prong runs
+  // on to x = 37.125 (area 5.125, y moment −23.0625), so 0.5625 − 23.0625 + 22.5 = 0: the centroid is on the x
+  // axis, the middle prong's bottom edge, at x = 111449/3376 = 33.0121 (all corners in eighths, so the
+  // shoelace sums are exact and the centroid's y is exactly 0). The square line meets the prongs at t = y:
+  // −5 … −4, 0 … 0.5 and 1 … 4; the centroid is the middle one's end, t = 0 exactly.
+  const edgePort = [[31, -5], [37.125, -5], [37.125, -4], [32, -4], [32, 0], [36.5, 0], [36.5, 0.5], [32, 0.5], [32, 1], [35, 1], [35, 4], [32, 4], [32, 5], [31, 5]] as [number, number][];
+
+  it("a centroid on the port's edge where a stretch starts: the section line takes that stretch, not a longer one", () => {
+    const o = portSteps(poly(edgePort), box, 1e-9);
+    expect(o.centroidMm[0]).toBeCloseTo(111449 / 3376, 12);
+    expect(o.centroidMm[1]).toBe(0);
+    // Square line: the stretch 0 … 0.5 starts at the centroid; the top prong 1 … 4 is longer. Passage −6 … 6.
+    expect(o.steps.cwMm).toBeCloseTo(-6 - 0, 9); // −6
+    expect(o.steps.ccwMm).toBeCloseTo(0.5 - 6, 9); // −5.5
+    // Radial line (the x axis, along the middle prong's bottom edge, read as just above it): back and middle
+    // prong, x = 31 … 36.5; the passage x = 30 … 40.
+    expect(o.steps.innerMm).toBeCloseTo(30 - 31, 9); // −1
+    expect(o.steps.outerMm).toBeCloseTo(36.5 - 40, 9); // −3.5
+  });
+
+  it("a centroid on the port's edge where a stretch ends: the section line takes that stretch, not a longer one", () => {
+    // The same port mirrored across the x axis: the square line meets it at −4 … −1, −0.5 … 0 and 4 … 5.
+    const mirrored = edgePort.map(([x, y]) => [x, -y] as [number, number]).reverse();
+    const o = portSteps(poly(mirrored), box, 1e-9);
+    expect(o.centroidMm[0]).toBeCloseTo(111449 / 3376, 12);
+    expect(o.centroidMm[1]).toBe(0);
+    // Square line: the stretch −0.5 … 0 ends at the centroid; the prong −4 … −1 is longer.
+    expect(o.steps.cwMm).toBeCloseTo(-6 - -0.5, 9); // −5.5
+    expect(o.steps.ccwMm).toBeCloseTo(0 - 6, 9); // −6
+    // Radial line: now along the middle prong's top edge, read as just above it, so only the back, x = 31 … 32.
+    expect(o.steps.innerMm).toBeCloseTo(30 - 31, 9); // −1
+    expect(o.steps.outerMm).toBeCloseTo(32 - 40, 9); // −8
+  });
+
   it("of two passages holding the port's centroid the first listed is taken, a tie on distance keeps the first too", () => {
     const w = { label: "port", outline: centred };
     const pocket = (label: string, c: [number, number], d: number) => ({ label, outline: circle(c, d), startDepthMm: 0 });

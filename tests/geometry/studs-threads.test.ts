@@ -120,6 +120,15 @@ describe("reading a thread designation", () => {
     expect(parseMetricThread("M3.5x0.6")).toMatchObject({ nominalDiameterMm: 3.5, pitchMm: 0.6 });
   });
 
+  it("reads a diameter or a pitch with more digits as written, a size no ISO 261 row lists included", () => {
+    // No ISO 261 size has a diameter with two decimals or a pitch of 10 mm or more (from memory); the parser does
+    // not judge the size, it reads the figures, and the mate check compares them.
+    expect(parseMetricThread("M10.25x1.25")).toEqual({ nominalDiameterMm: 10.25, pitchMm: 1.25, pitchImplied: false, designation: "M10.25x1.25" });
+    expect(parseMetricThread("M100x10")).toEqual({ nominalDiameterMm: 100, pitchMm: 10, pitchImplied: false, designation: "M100x10" });
+    expect(parseMetricThread("M80 × 12.5")).toMatchObject({ nominalDiameterMm: 80, pitchMm: 12.5 });
+    expect(threadsMatch("M10.25x1.25", "M10.2x1.25", TOL).ok).toBe(false);
+  });
+
   it("refuses text before or after the designation: a left-hand thread (LH, ISO 965-1, from memory) does not mate with a right-hand one", () => {
     expect(() => parseMetricThread("M8x1.25 LH")).toThrow(ThreadDesignationError);
     expect(() => parseMetricThread("BM8")).toThrow(ThreadDesignationError);
