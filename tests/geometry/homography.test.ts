@@ -164,6 +164,23 @@ describe("rectangleFit", () => {
     expect(fit.summary).toMatch(/do not fit a 56 mm × 60 mm rectangle: they show one about 58 mm × 58 mm/);
   });
 
+  it("points whose misfit is exactly the threshold fit, the threshold itself included", () => {
+    // A 1000 px square from straight above (judged flat, aspect 1) and 68 × h mm typed: the photo shows a square of
+    // √(68·h) a side, the misfit √(((s − 68)/2)² + ((s − h)/2)²) grows with h, and the threshold is
+    // max(0.5, 1% of the diagonal). h = 70.7759350531163 is the largest double at which the two are equal in
+    // double arithmetic, found by bisection (common practice, no published source); one digit more does not fit.
+    const square: Point[] = [[500, 1250], [1500, 1250], [1500, 250], [500, 250]];
+    const tie = rectangleFit(square, 68, 70.7759350531163, photoSize);
+    expect(tie.judgedFlat).toBe(true);
+    expect(tie.misfitMm).toBe(tie.warnAboveMm);
+    expect(tie.warnAboveMm).toBeCloseTo(0.01 * Math.hypot(68, 70.7759350531163), 15);
+    expect(tie.fits).toBe(true);
+    expect(tie.summary).toBe("The four points fit a 68 mm × 70.8 mm rectangle within 1 mm.");
+    const over = rectangleFit(square, 68, 70.7759350531164, photoSize);
+    expect(over.misfitMm).toBeGreaterThan(over.warnAboveMm);
+    expect(over.fits).toBe(false);
+  });
+
   it("judges a photo from straight above as a parallelogram", () => {
     const above = camera({ f: 1600, principal: [1000, 750], tiltXDeg: 0, tiltYDeg: 0, distanceMm: 300 });
     // Straight above a 70 × 50 rectangle the photo shows it as drawn, so 70 × 50 fits and 50 × 70 does not.
@@ -206,6 +223,21 @@ describe("reference points that fix nothing, each said in words", () => {
   it("on one spot is judged against the points' spread: half a thousandth of a pixel apart on a 1000 px spread is one spot", () => {
     expect(refusal(() => checkReferencePoints([[0, 0], [1000, 0], [1000.0005, 0.0002], [0, 1000]])).problem).toBe("coincident");
     expect(() => checkReferencePoints([[0, 0], [1000, 0], [1000.5, 0.5], [0, 1000]])).not.toThrow();
+  });
+
+  it("two points exactly 1e-6 of the spread apart are one spot, the threshold itself included", () => {
+    // Corners of a 3000 × 4000 px rectangle: the spread is its diagonal, 5000 px exactly (3-4-5). The fifth point
+    // is 1e-6 · 5000 px from the first, the threshold as the check works it out, to the last bit.
+    const points: Point[] = [[0, 0], [3000, 0], [3000, 4000], [0, 4000], [1e-6 * 5000, 0]];
+    const e = refusal(() => checkReferencePoints(points));
+    expect([e.problem, e.message]).toEqual(["coincident", "Two of the reference points (1 and 5) are on the same spot; place each one on its own mark."]);
+  });
+
+  it("a third point exactly 1e-6 of the spread off the line through the other two is on the line, the threshold itself included", () => {
+    // (0, 0) and (1024, 0) are the spread, 1024 px; (512, h) with h = 1e-6 · 1024 is h off their line: twice the
+    // triangle's area, 1024·h, over its longest side, 1024, is h to the last bit (1024 is a power of two).
+    const e = refusal(() => checkReferencePoints([[0, 0], [1024, 0], [512, 1e-6 * 1024]]));
+    expect(e.problem).toBe("collinear");
   });
 
   it("three points on one line, numbered from 1; two of them close together are still on the line", () => {
@@ -285,6 +317,17 @@ describe("the corners of a rectangle turned in the photo", () => {
 });
 
 describe("the proportions a photo shows", () => {
+  it("a figure that asks for a focal length of exactly 0 is judged as a parallelogram", () => {
+    // About the principal point (1000, 750): m1 (0, 0), m2 (200, 0), m3 (0, 200), m4 (300, 100). Then k2 = 3/2 and
+    // k3 = 1/2 (as in Zhang and He 2007, cited in geometry/homography.ts), n2 = k2·m2 − m1 = (300, 0, 1/2) and
+    // n3 = k3·m3 − m1 = (0, 100, −1/2), whose x, y parts are square to each other, so
+    // f² = −(n2x·n3x + n2y·n3y)/(n2z·n3z) = 0 exactly (all in halves, no rounding): no camera. As a
+    // parallelogram: √(300² / 100²) = 3.
+    const r = seenAspect([[1000, 750], [1200, 750], [1000, 950], [1300, 850]], [1000, 750]);
+    expect(r.flat).toBe(true);
+    expect(r.aspect).toBe(3);
+  });
+
   it("a four-sided figure no centred camera could give is judged as a parallelogram", () => {
     // For these corners the focal length that the pinhole model asks for comes out with f² < 0 (no real camera).
     const r = seenAspect([[-100, 120], [110, 100], [-90, -100], [95, -95]], [0, 0]);
