@@ -1,8 +1,11 @@
-import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/schemas/jobs";
-
 // What makes a file a photo the product keeps: its type read from its first bytes (never from its name or a
 // header) and its size. The browser checks before it shows or sends a file; the server checks the stored
-// bytes again, with the same words.
+// bytes again, with the same words; the upload requests' schemas take their limits from here.
+
+/** The image types kept. */
+export const PHOTO_TYPES = ["image/jpeg", "image/png", "image/webp"] as const;
+/** Largest photo accepted, bytes. */
+export const MAX_PHOTO_BYTES = 8 * 1024 * 1024;
 
 export type PhotoType = (typeof PHOTO_TYPES)[number];
 

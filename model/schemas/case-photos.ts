@@ -2,7 +2,7 @@
 // No server-only code: the case form reads the same shapes.
 import { z } from "zod";
 import { checkReferencePoints, orderAsRectangle, ReferencePointsError } from "@/geometry/homography";
-import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "./jobs";
+import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/photo-files";
 
 /** The largest photo side accepted, in pixels (a 100-megapixel camera is below it). */
 export const MAX_PHOTO_SIDE_PX = 100_000;

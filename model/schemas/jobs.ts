@@ -2,6 +2,7 @@
 import { z } from "zod";
 import { BIDI_CONTROL } from "@/model/names";
 import { JOB_STATUSES } from "@/model/job-status";
+import { MAX_PHOTO_BYTES, PHOTO_TYPES } from "@/model/photo-files";
 
 const text = (max: number, what: string) =>
   z
@@ -114,9 +115,6 @@ export const ReadingsBodySchema = AfterCutReadingsSchema;
 export const QuestionSchema = z.strictObject({ text: text(2000, "The question").min(3, "Write your question (a few words at least).") });
 
 export const PHOTO_KINDS = ["readings", "before", "after", "trial-fit", "other"] as const;
-export const PHOTO_TYPES = ["image/jpeg", "image/png", "image/webp"] as const;
-/** Largest photo accepted, bytes. */
-export const MAX_PHOTO_BYTES = 8 * 1024 * 1024;
 
 export const PhotoRequestSchema = z.strictObject({
   contentType: z.enum(PHOTO_TYPES, { error: "Only JPEG, PNG or WebP photos are accepted." }),

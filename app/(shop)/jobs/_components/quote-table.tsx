@@ -1,5 +1,5 @@
 import { TERM, type Term } from "@/model/glossary";
-import { formatMoney } from "@/model/money";
+import { formatMoney } from "@/model/money-text";
 import type { QuoteTotals } from "@/model/quote";
 
 const percent = (p: number) => `${Number.isInteger(p) ? p : p.toFixed(2).replace(/0$/, "")} %`;

@@ -1,5 +1,6 @@
 import { STATUS_LABEL, type JobStatus } from "@/model/job-status";
-import { formatMoney, type CurrencyCode } from "@/model/money";
+import type { CurrencyCode } from "@/model/money";
+import { formatMoney } from "@/model/money-text";
 import { STATUS_ICON } from "@/model/palette";
 
 // Status badges are neutral (no colour of the fit code): a glyph that fills as the job moves on tells them apart.

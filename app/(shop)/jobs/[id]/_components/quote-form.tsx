@@ -1,7 +1,8 @@
 "use client";
 
 import { TERM } from "@/model/glossary";
-import { formatMoney, type CurrencyCode } from "@/model/money";
+import type { CurrencyCode } from "@/model/money";
+import { formatMoney } from "@/model/money-text";
 import type { StoredQuote } from "@/model/quote";
 import type { Pricing } from "@/model/schemas";
 import { Field, FormNotice } from "../../../../_ui/field";
