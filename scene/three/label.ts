@@ -56,8 +56,9 @@ export function boxInView(at: ScreenPlacement, widthPx: number, align: 0 | 1, wi
   };
 }
 
-/** The width of a label's box at scale 1 for `text`, px: its text in the label's font and its side padding. */
+/** A 2D context to measure text with, made on first use. */
 let measure: CanvasRenderingContext2D | null = null;
+/** The width of a label's box at scale 1 for `text`, px: its text in the label's font and its side padding. */
 function boxWidthPx(text: string, family: string): number {
   measure ??= document.createElement("canvas").getContext("2d");
   if (!measure) return text.length * FONT_PX * 0.6 + 2 * PAD_PX;
