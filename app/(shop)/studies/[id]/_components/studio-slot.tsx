@@ -5,11 +5,11 @@ import { useFormContext } from "react-hook-form";
 import type { Study, StudyResult } from "@/geometry";
 import type { Money } from "@/model/money";
 import { Studio } from "@/app/_ui/studio/studio";
+import { lengthFieldText, type LengthUnits } from "@/model/units";
+import type { StudyFormValues } from "./study-values";
 
 /** The studio, rendered again only when what it is given changes (not on every render of the form around it). */
 const MemoStudio = memo(Studio);
-import { lengthFieldText, type LengthUnits } from "@/model/units";
-import type { StudyFormValues } from "./study-values";
 
 export type StudioSlotProps = { study: Study; result: StudyResult; kitId: string | null; units: LengthUnits; prices?: Readonly<Record<string, Money | undefined>> };
 
